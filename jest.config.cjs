@@ -1,0 +1,30 @@
+// Two projects: plain TypeScript (shared/ and server/, compiled by SWC, Node environment)
+// and the Angular app (jest-preset-angular, jsdom). Type checking happens in `npm run typecheck`.
+const { createCjsPreset } = require('jest-preset-angular/presets');
+
+const swc = ['@swc/jest', {
+  jsc: { parser: { syntax: 'typescript', decorators: true }, target: 'es2022' },
+  module: { type: 'commonjs' },
+}];
+
+module.exports = {
+  projects: [
+    {
+      displayName: 'node',
+      testEnvironment: 'node',
+      roots: ['<rootDir>/shared', '<rootDir>/server', '<rootDir>/tests'],
+      testMatch: ['**/*.spec.ts'],
+      transform: { '^.+\\.(t|j)s$': swc },
+      setupFiles: ['<rootDir>/tests/setup-env.cjs'],
+    },
+    {
+      displayName: 'web',
+      ...createCjsPreset({ tsconfig: '<rootDir>/tsconfig.spec.json' }),
+      testEnvironment: 'jest-preset-angular/environments/jest-jsdom-env',
+      roots: ['<rootDir>/src'],
+      testMatch: ['**/*.spec.ts'],
+      setupFilesAfterEach: undefined,
+      setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
+    },
+  ],
+};

@@ -1,0 +1,67 @@
+import connectPgSimple from 'connect-pg-simple';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import passport from 'passport';
+import { pinoHttp } from 'pino-http';
+import type Stripe from 'stripe';
+import type { Mailer } from './adapters/mail/mailer';
+import type { FileStorage } from './adapters/storage/file-storage';
+import type { Db } from './db/client';
+import { cookiesAreSecure, type Env } from './env';
+import { authRouter, configurePassport } from './features/auth/auth.router';
+import { healthRouter } from './features/health/health.router';
+import { lotsRouter } from './features/lots/lots.router';
+import type { Logger } from './logger';
+import { csrfProtection } from './middleware/csrf';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+
+export interface ApiDeps {
+  env: Env;
+  db: Db;
+  logger: Logger;
+  mailer: Mailer;
+  storage: FileStorage;
+  stripe: Stripe;
+}
+
+export const SESSION_COOKIE = 'baleproof.sid';
+
+/** The session middleware, shared by the API and the server-side renderer (which needs to know the user). */
+export function createSessionMiddleware({ env, db }: Pick<ApiDeps, 'env' | 'db'>) {
+  const PgStore = connectPgSimple(session);
+  return session({
+    name: SESSION_COOKIE,
+    secret: env.SESSION_SECRET,
+    store: new PgStore({ pool: db.$client, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 60 * 15 }),
+    resave: false,
+    saveUninitialized: false,
+    rolling: true,
+    cookie: { httpOnly: true, sameSite: 'lax', secure: cookiesAreSecure(env), maxAge: 1000 * 60 * 60 * 24 * 14 },
+  });
+}
+
+/**
+ * The Express app behind /api, testable without listening. Mount it with `app.use('/api', createApi(deps))`.
+ */
+export function createApi(deps: ApiDeps): Express {
+  const { env, db, logger } = deps;
+  const api = express();
+  api.disable('x-powered-by');
+  api.set('trust proxy', 'loopback');
+  api.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/health' } }));
+  api.use(helmet());
+  api.use(express.json({ limit: '200kb' }));
+  api.use(createSessionMiddleware(deps));
+  configurePassport(db);
+  api.use(passport.session());
+  api.use(csrfProtection(env.SESSION_SECRET, cookiesAreSecure(env)));
+
+  api.use('/health', healthRouter(db));
+  api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT }));
+  api.use('/lots', lotsRouter(db));
+
+  api.use(apiNotFound);
+  api.use(errorHandler(logger));
+  return api;
+}

@@ -1,0 +1,43 @@
+import { z } from 'zod';
+
+/**
+ * The server's configuration, read once from environment variables.
+ * Invalid values stop the process at start-up with a message naming the variable.
+ */
+const EnvSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  PORT: z.coerce.number().int().positive().default(4000),
+  DATABASE_URL: z.string().url().default('postgres://postgres@127.0.0.1:54329/baleproof'),
+  SESSION_SECRET: z.string().min(16).default('baleproof-local-dev-session-secret'),
+  /** Set to "true" behind HTTPS so cookies get the Secure flag. */
+  COOKIE_SECURE: z.enum(['true', 'false']).optional(),
+  PUBLIC_URL: z.string().url().default('http://127.0.0.1:4000'),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  SMTP_URL: z.string().default('smtp://127.0.0.1:1025'),
+  MAIL_FROM: z.string().default('Baleproof <no-reply@baleproof.example>'),
+  /** A real key (sk_live_/sk_test_) talks to Stripe; anything else goes to the local fake. */
+  STRIPE_SECRET_KEY: z.string().default('sk_test_local_fake'),
+  STRIPE_WEBHOOK_SECRET: z.string().default('whsec_local_fake_secret'),
+  /** host:port of the local Stripe fake; ignored when STRIPE_API_HOST is unset and the key is real. */
+  STRIPE_API_HOST: z.string().optional(),
+  STRIPE_FAKE_PORT: z.coerce.number().int().positive().default(12111),
+  UPLOAD_DIR: z.string().default('.uploads'),
+  ADMIN_EMAIL: z.string().email().default('admin@baleproof.example'),
+  ADMIN_PASSWORD: z.string().min(10).default('admin-demo-pass'),
+  SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+});
+
+export type Env = z.infer<typeof EnvSchema>;
+
+export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = EnvSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}
+
+export function cookiesAreSecure(env: Env): boolean {
+  return env.COOKIE_SECURE ? env.COOKIE_SECURE === 'true' : env.NODE_ENV === 'production';
+}

@@ -1,0 +1,42 @@
+import { eq, sql } from 'drizzle-orm';
+import type { SessionUser, SignIn, SignUp } from '../../../shared/contracts/auth';
+import type { Db } from '../../db/client';
+import { auditEvents, users } from '../../db/schema';
+import { conflict } from '../../middleware/http-error';
+import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password';
+
+const sessionColumns = { id: users.id, email: users.email, displayName: users.displayName, role: users.role };
+
+export class AuthService {
+  constructor(private readonly db: Db) {}
+
+  async signUp(input: SignUp): Promise<SessionUser> {
+    const passwordHash = await hashPassword(input.password);
+    const rows = await this.db
+      .insert(users)
+      .values({ email: input.email, passwordHash, displayName: input.displayName, role: input.role })
+      .onConflictDoNothing()
+      .returning(sessionColumns);
+    const user = rows[0];
+    if (!user) throw conflict('email_taken', 'An account with that e-mail already exists. Sign in instead.');
+    await this.db.insert(auditEvents).values({ actorId: user.id, action: 'user.signed_up', entityType: 'user', entityId: String(user.id) });
+    return user;
+  }
+
+  /** The user when e-mail and password match an active account; otherwise null (same timing either way). */
+  async checkCredentials(input: SignIn): Promise<SessionUser | null> {
+    const [row] = await this.db
+      .select({ ...sessionColumns, passwordHash: users.passwordHash, disabledAt: users.disabledAt })
+      .from(users)
+      .where(sql`lower(${users.email}) = ${input.email.toLowerCase()}`);
+    const ok = await verifyPassword(input.password, row?.passwordHash ?? (await DUMMY_HASH_PROMISE));
+    if (!row || !ok || row.disabledAt) return null;
+    return { id: row.id, email: row.email, displayName: row.displayName, role: row.role };
+  }
+
+  async findSessionUser(id: number): Promise<SessionUser | null> {
+    const [row] = await this.db.select({ ...sessionColumns, disabledAt: users.disabledAt }).from(users).where(eq(users.id, id));
+    if (!row || row.disabledAt) return null;
+    return { id: row.id, email: row.email, displayName: row.displayName, role: row.role };
+  }
+}

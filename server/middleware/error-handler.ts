@@ -1,0 +1,41 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import type { Logger } from '../logger';
+import { HttpError } from './http-error';
+
+/** The one error shape of the API: `{ error: { code, message, details } }`. */
+export interface ApiErrorBody {
+  error: { code: string; message: string; details?: unknown };
+}
+
+export const apiNotFound: RequestHandler = (req, _res, next) =>
+  next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.path}.`));
+
+export function errorHandler(logger: Logger): ErrorRequestHandler {
+  return (err, req, res, _next) => {
+    const body = (status: number, code: string, message: string, details?: unknown) =>
+      res.status(status).json({ error: { code, message, ...(details === undefined ? {} : { details }) } } satisfies ApiErrorBody);
+
+    if (err instanceof ZodError) {
+      const details = err.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+      const first = details[0];
+      return body(400, 'invalid_input', first ? `${first.path || 'input'}: ${first.message}` : 'Invalid input.', details);
+    }
+    if (err instanceof HttpError) return body(err.status, err.code, err.message, err.details);
+    // body-parser errors (malformed JSON, too large) carry a status and a type.
+    if (typeof err?.status === 'number' && err.status >= 400 && err.status < 500) {
+      const code = err.type === 'entity.parse.failed' ? 'malformed_json' : String(err.type ?? 'bad_request').replace(/\W+/g, '_');
+      const message = err.type === 'entity.parse.failed' ? 'The request body is not valid JSON.' : err.expose ? err.message : 'Bad request.';
+      return body(err.status, code, message);
+    }
+    // Constraint violations that slipped past validation: report them as bad input, not a crash.
+    // Drizzle wraps driver errors; the PostgreSQL error is its cause.
+    const pgError = err?.cause?.code ? err.cause : err;
+    if (pgError?.code === '23514' || pgError?.code === '23503' || pgError?.code === '22P02') {
+      return body(400, 'constraint_violation', 'The request breaks a data rule.', { constraint: pgError.constraint });
+    }
+    if (pgError?.code === '23505') return body(409, 'duplicate', 'That already exists.', { constraint: pgError.constraint });
+    (req as { log?: Logger }).log?.error({ err }, 'unhandled error') ?? logger.error({ err }, 'unhandled error');
+    return body(500, 'internal', 'Something went wrong on our side. Please try again.');
+  };
+}

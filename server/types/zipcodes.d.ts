@@ -1,0 +1,15 @@
+declare module 'zipcodes' {
+  interface ZipInfo {
+    zip: string;
+    latitude: number;
+    longitude: number;
+    city: string;
+    state: string;
+    country: string;
+  }
+  const zipcodes: {
+    lookup(zip: string | number): ZipInfo | undefined;
+    distance(a: string | number, b: string | number): number | null;
+  };
+  export default zipcodes;
+}

@@ -1,0 +1,36 @@
+import { z } from 'zod';
+
+export const USER_ROLES = ['buyer', 'grower', 'admin'] as const;
+export type UserRole = (typeof USER_ROLES)[number];
+
+const email = z
+  .string()
+  .trim()
+  .max(254, 'E-mail is too long.')
+  .email('Enter a valid e-mail address.')
+  .transform((s) => s.toLowerCase());
+
+/** Sign-up: only buyers and growers can register themselves; admins are created by operators. */
+export const SignUpSchema = z
+  .object({
+    email,
+    password: z.string().min(10, 'Use at least 10 characters.').max(200, 'Use at most 200 characters.'),
+    displayName: z.string().trim().min(1, 'Enter your name.').max(100, 'Use at most 100 characters.'),
+    role: z.enum(['buyer', 'grower'], { message: 'Choose buyer or grower.' }),
+  })
+  .strict();
+export type SignUp = z.infer<typeof SignUpSchema>;
+
+export const SignInSchema = z
+  .object({ email, password: z.string().min(1, 'Enter your password.').max(200) })
+  .strict();
+export type SignIn = z.infer<typeof SignInSchema>;
+
+/** The signed-in user as the API returns it (never the password hash). */
+export const SessionUserSchema = z.object({
+  id: z.number().int(),
+  email: z.string(),
+  displayName: z.string(),
+  role: z.enum(USER_ROLES),
+});
+export type SessionUser = z.infer<typeof SessionUserSchema>;

@@ -1,0 +1,44 @@
+import {
+  averageDailyGainKg,
+  fractionOfMatureWeight,
+  growingRequirements,
+  impliedMatureWeightKg,
+  proteinEfficiencyForGain,
+} from './growing-horse';
+
+describe('growth curve', () => {
+  it('reproduces the NRC 2007 500 kg growing rows: ≈168, 216, 321, 432 kg at 4, 6, 12, 24 months (Table 16-3, from memory; 6 and 12 months are the fitted points)', () => {
+    const kg = [4, 6, 12, 24].map((m) => 500 * fractionOfMatureWeight(m));
+    expect(kg[0]).toBeCloseTo(168, -1);
+    expect(kg[1]).toBeCloseTo(216, 1);
+    expect(kg[2]).toBeCloseTo(321, 1);
+    expect(Math.abs(kg[3]! - 432) / 432).toBeLessThan(0.01);
+  });
+
+  it('gives table daily gains ≈ 0.84, 0.72 kg/d at 4 and 6 months (NRC 2007, from memory)', () => {
+    expect(averageDailyGainKg(500, 4)).toBeCloseTo(0.84, 2);
+    expect(averageDailyGainKg(500, 6)).toBeCloseTo(0.72, 2);
+  });
+
+  it('inverts: a weight on the curve implies its mature weight', () => {
+    expect(impliedMatureWeightKg(500 * fractionOfMatureWeight(9), 9)).toBeCloseTo(500, 9);
+  });
+
+  it('slows growth as the horse matures', () => {
+    expect(averageDailyGainKg(500, 18)).toBeLessThan(averageDailyGainKg(500, 12));
+  });
+});
+
+describe('proteinEfficiencyForGain', () => {
+  it('steps down 50 → 45 → 40 → 35 → 30 % with age (NRC 2007, from memory)', () => {
+    expect([4, 6.9, 7, 8.5, 9, 10, 11, 12, 24].map(proteinEfficiencyForGain)).toEqual([0.5, 0.5, 0.45, 0.45, 0.4, 0.4, 0.35, 0.3, 0.3]);
+  });
+});
+
+describe('growingRequirements', () => {
+  it('adds maintenance and gain: CP = 1.44·BW + gain protein', () => {
+    const r = growingRequirements(216, 6);
+    const gainProtein = (r.averageDailyGainKg * 1000 * 0.2) / 0.5 / 0.79;
+    expect(r.crudeProteinGPerDay).toBeCloseTo(1.44 * 216 + gainProtein, 9);
+  });
+});

@@ -1,0 +1,51 @@
+import fc from 'fast-check';
+import { EARTH_RADIUS_MI, haversineMiles, type LatLon } from './distance';
+
+const point = fc.record({ lat: fc.double({ min: -90, max: 90, noNaN: true }), lon: fc.double({ min: -180, max: 180, noNaN: true }) });
+
+describe('haversineMiles', () => {
+  it('is zero for the same point', () => {
+    expect(haversineMiles({ lat: 39.1, lon: -94.6 }, { lat: 39.1, lon: -94.6 })).toBe(0);
+  });
+
+  it('gives one degree of latitude ≈ 69.1 mi and a quarter of the equator ≈ 6,218 mi on a 3,958.8 mi sphere', () => {
+    expect(haversineMiles({ lat: 0, lon: 0 }, { lat: 1, lon: 0 })).toBeCloseTo((2 * Math.PI * EARTH_RADIUS_MI) / 360, 9);
+    expect(haversineMiles({ lat: 0, lon: 0 }, { lat: 0, lon: 90 })).toBeCloseTo((Math.PI / 2) * EARTH_RADIUS_MI, 9);
+    expect(haversineMiles({ lat: 90, lon: 0 }, { lat: -90, lon: 0 })).toBeCloseTo(Math.PI * EARTH_RADIUS_MI, 9);
+  });
+
+  it('puts LAX–JFK at about 2,470 mi (commonly quoted ≈2,475 mi great-circle; from memory, within 1 %)', () => {
+    const lax: LatLon = { lat: 33.9425, lon: -118.4081 };
+    const jfk: LatLon = { lat: 40.6398, lon: -73.7789 };
+    expect(Math.abs(haversineMiles(lax, jfk) - 2475) / 2475).toBeLessThan(0.01);
+  });
+
+  it('crosses the antimeridian the short way', () => {
+    expect(haversineMiles({ lat: 0, lon: 179.5 }, { lat: 0, lon: -179.5 })).toBeCloseTo((2 * Math.PI * EARTH_RADIUS_MI) / 360, 6);
+  });
+
+  it('is symmetric, non-negative and within half the circumference (property)', () => {
+    fc.assert(
+      fc.property(point, point, (a, b) => {
+        const d = haversineMiles(a, b);
+        expect(d).toBeGreaterThanOrEqual(0);
+        expect(d).toBeLessThanOrEqual(Math.PI * EARTH_RADIUS_MI + 1e-6);
+        expect(haversineMiles(b, a)).toBeCloseTo(d, 6);
+      }),
+    );
+  });
+
+  it('obeys the triangle inequality (property)', () => {
+    fc.assert(
+      fc.property(point, point, point, (a, b, c) => {
+        expect(haversineMiles(a, c)).toBeLessThanOrEqual(haversineMiles(a, b) + haversineMiles(b, c) + 1e-6);
+      }),
+    );
+  });
+
+  it('rejects coordinates out of range', () => {
+    expect(() => haversineMiles({ lat: 91, lon: 0 }, { lat: 0, lon: 0 })).toThrow(RangeError);
+    expect(() => haversineMiles({ lat: 0, lon: 0 }, { lat: 0, lon: 181 })).toThrow(RangeError);
+    expect(() => haversineMiles({ lat: Number.NaN, lon: 0 }, { lat: 0, lon: 0 })).toThrow(RangeError);
+  });
+});

@@ -1,0 +1,4 @@
+export * from './cost-per-nutrient';
+export * from './delivered-price';
+export * from './distance';
+export * from './freight';

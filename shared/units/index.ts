@@ -1,0 +1,3 @@
+export * from './mass';
+export * from './money';
+export * from './rounding';

@@ -1,0 +1,70 @@
+import fc from 'fast-check';
+import {
+  asFedToDryMatterPerTonCents,
+  dollarsToCents,
+  formatCents,
+  pricePerBaleToPerTonCents,
+  roundCents,
+} from './money';
+
+describe('roundCents', () => {
+  it('rounds to whole cents half away from zero without float noise', () => {
+    expect(roundCents(45454.545)).toBe(45455);
+    expect(roundCents(0.285 * 100)).toBe(29);
+    expect(roundCents(-0.5)).toBe(-1);
+    expect(Object.is(roundCents(-0.4), 0)).toBe(true);
+  });
+
+  it('always returns an integer (property)', () => {
+    fc.assert(
+      fc.property(fc.double({ min: -1e9, max: 1e9, noNaN: true }), (c) => {
+        expect(Number.isInteger(roundCents(c))).toBe(true);
+      }),
+    );
+  });
+});
+
+describe('dollarsToCents', () => {
+  it('converts dollars to whole cents', () => {
+    expect(dollarsToCents(3.5)).toBe(350);
+    expect(dollarsToCents(0.1 + 0.2)).toBe(30);
+    expect(dollarsToCents(12.345)).toBe(1235);
+  });
+});
+
+describe('formatCents', () => {
+  it('formats as US dollars with thousands separators', () => {
+    expect(formatCents(105000)).toBe('$1,050.00');
+    expect(formatCents(4375)).toBe('$43.75');
+    expect(formatCents(5)).toBe('$0.05');
+    expect(formatCents(-550)).toBe('-$5.50');
+    expect(formatCents(123456789)).toBe('$1,234,567.89');
+  });
+
+  it('can drop the cents, rounding to whole dollars', () => {
+    expect(formatCents(105049, { showCents: false })).toBe('$1,050');
+    expect(formatCents(105050, { showCents: false })).toBe('$1,051');
+  });
+});
+
+describe('pricePerBaleToPerTonCents', () => {
+  it('gives $400.00/t for $12 per 60 lb bale (domain brief §11 worked example)', () => {
+    expect(pricePerBaleToPerTonCents(1200, 60)).toBe(40000);
+  });
+
+  it('rejects a bale weight that is not positive', () => {
+    expect(() => pricePerBaleToPerTonCents(1200, 0)).toThrow(RangeError);
+  });
+});
+
+describe('asFedToDryMatterPerTonCents', () => {
+  it('gives $454.55/t DM for $400/t as-fed at 88 % DM (domain brief §11: $454.5/t DM)', () => {
+    expect(asFedToDryMatterPerTonCents(40000, 88)).toBe(45455);
+  });
+
+  it('leaves the price unchanged at 100 % DM and rejects DM outside (0, 100]', () => {
+    expect(asFedToDryMatterPerTonCents(40000, 100)).toBe(40000);
+    expect(() => asFedToDryMatterPerTonCents(40000, 0)).toThrow(RangeError);
+    expect(() => asFedToDryMatterPerTonCents(40000, 101)).toThrow(RangeError);
+  });
+});

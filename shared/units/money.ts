@@ -1,0 +1,77 @@
+/**
+ * Money as integer US cents (conventions: "money as integer cents"). Totals are always whole
+ * cents; per-unit rates derived from them (cents per Mcal, per lb of protein) may be fractional
+ * and are rounded only for display.
+ */
+
+import { LB_PER_SHORT_TON } from './mass';
+import { groupThousands } from './rounding';
+
+/** Integer number of US cents. A plain number, documented rather than branded, so zod output fits. */
+export type Cents = number;
+
+/**
+ * Rounds a cent amount to a whole cent, half away from zero (0.5 → 1, −0.5 → −1),
+ * after removing floating-point noise (45454.499999999 stays 45454, 0.285 * 100 → 29).
+ */
+export function roundCents(cents: number): Cents {
+  if (!Number.isFinite(cents)) throw new RangeError(`cents must be finite; got ${cents}`);
+  const magnitude = Math.round(Number(Math.abs(cents).toPrecision(15)));
+  return magnitude === 0 ? 0 : Math.sign(cents) * magnitude;
+}
+
+/** Dollars (possibly with a fraction) → whole cents: 12.345 → 1235. */
+export function dollarsToCents(dollars: number): Cents {
+  return roundCents(dollars * 100);
+}
+
+export interface FormatCentsOptions {
+  /** Show the ".00" part. Default true; false rounds to whole dollars ("$1,050"). */
+  readonly showCents?: boolean;
+}
+
+/**
+ * Formats cents as US dollars: 105000 → "$1,050.00", -550 → "-$5.50".
+ * Works on integers only, so no float formatting can leak ("$0.30000000000000004").
+ */
+export function formatCents(cents: Cents, options: FormatCentsOptions = {}): string {
+  const whole = roundCents(cents);
+  const sign = whole < 0 ? '-' : '';
+  const abs = Math.abs(whole);
+  if (options.showCents === false) {
+    return `${sign}$${groupThousands(String(roundCents(abs / 100)))}`;
+  }
+  const dollars = Math.floor(abs / 100);
+  const remainder = abs % 100;
+  return `${sign}$${groupThousands(String(dollars))}.${String(remainder).padStart(2, '0')}`;
+}
+
+/**
+ * Price per bale → price per short ton, as-fed: $/ton = $/bale × 2000 / bale weight (lb)
+ * (domain brief §11). $12 for a 60 lb bale → $400.00/ton.
+ *
+ * @param pricePerBaleCents cents per bale
+ * @param baleWeightLb average bale weight in lb (ideally from a scale ticket), > 0
+ * @returns whole cents per short ton as-fed
+ */
+export function pricePerBaleToPerTonCents(pricePerBaleCents: Cents, baleWeightLb: number): Cents {
+  if (!(baleWeightLb > 0) || !Number.isFinite(baleWeightLb)) {
+    throw new RangeError(`baleWeightLb must be a positive number; got ${baleWeightLb}`);
+  }
+  return roundCents((pricePerBaleCents * LB_PER_SHORT_TON) / baleWeightLb);
+}
+
+/**
+ * Price per ton as-fed → price per ton of dry matter: $/t DM = $/t AF ÷ (DM% / 100)
+ * (domain brief §1, §11). $400.00/t AF at 88 % DM → $454.55/t DM.
+ *
+ * @param pricePerTonAsFedCents cents per short ton as-fed
+ * @param dryMatterPct dry matter, percent of as-fed weight, in (0, 100]
+ * @returns whole cents per short ton of dry matter
+ */
+export function asFedToDryMatterPerTonCents(pricePerTonAsFedCents: Cents, dryMatterPct: number): Cents {
+  if (!(dryMatterPct > 0 && dryMatterPct <= 100)) {
+    throw new RangeError(`dryMatterPct must be in (0, 100]; got ${dryMatterPct}`);
+  }
+  return roundCents(pricePerTonAsFedCents / (dryMatterPct / 100));
+}

@@ -1,0 +1,21 @@
+import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
+import { ApplicationConfig, inject, provideAppInitializer, provideBrowserGlobalErrorListeners } from '@angular/core';
+import { provideClientHydration, withEventReplay } from '@angular/platform-browser';
+import { provideRouter, withComponentInputBinding, withInMemoryScrolling } from '@angular/router';
+import { MatIconRegistry } from '@angular/material/icon';
+import { routes } from './app.routes';
+import { Session } from './core/session';
+import { forwardCookiesOnServer } from './core/ssr-cookie-interceptor';
+
+export const appConfig: ApplicationConfig = {
+  providers: [
+    provideBrowserGlobalErrorListeners(),
+    provideRouter(routes, withComponentInputBinding(), withInMemoryScrolling({ scrollPositionRestoration: 'enabled' })),
+    provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer])),
+    provideClientHydration(withEventReplay()),
+    provideAppInitializer(() => {
+      inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');
+      return inject(Session).load();
+    }),
+  ],
+};

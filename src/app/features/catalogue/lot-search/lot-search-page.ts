@@ -1,0 +1,99 @@
+import { ChangeDetectionStrategy, Component, computed, effect, inject } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatPaginator, PageEvent } from '@angular/material/paginator';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { ActivatedRoute, Router } from '@angular/router';
+import { catchError, map, of, startWith, switchMap } from 'rxjs';
+import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
+import type { LotSearchResult } from '../../../../../shared/contracts/lots';
+import { apiErrorMessage } from '../../../core/api-error';
+import { LotCard } from '../lot-card/lot-card';
+import { LotsApi } from '../lots-api';
+import { FILTER_KEYS, queryFromForm, SORT_OPTIONS } from './search-query';
+
+type SearchState = { status: 'loading' } | { status: 'ok'; result: LotSearchResult } | { status: 'error'; message: string };
+
+/** The catalogue: filters in the URL, results rendered on the server. */
+@Component({
+  selector: 'app-lot-search-page',
+  imports: [ReactiveFormsModule, LotCard, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, MatPaginator, MatProgressBar],
+  templateUrl: './lot-search-page.html',
+  styleUrl: './lot-search-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class LotSearchPage {
+  private readonly api = inject(LotsApi);
+  private readonly route = inject(ActivatedRoute);
+  private readonly router = inject(Router);
+
+  protected readonly forageTypes = Object.entries(FORAGE_TYPE_LABELS);
+  protected readonly baleTypes = Object.entries(BALE_TYPE_LABELS);
+  protected readonly sorts = SORT_OPTIONS;
+
+  protected readonly filters = inject(FormBuilder).nonNullable.group(
+    Object.fromEntries(FILTER_KEYS.map((k) => [k, k === 'compliantOnly' || k === 'verifiedOnly' ? false : ''])) as Record<string, string | boolean>,
+  );
+
+  private readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
+
+  protected readonly state = toSignal(
+    this.route.queryParams.pipe(
+      switchMap((params) =>
+        this.api.search(params).pipe(
+          map((result): SearchState => ({ status: 'ok', result })),
+          catchError((error) => of<SearchState>({ status: 'error', message: apiErrorMessage(error) })),
+          startWith<SearchState>({ status: 'loading' }),
+        ),
+      ),
+    ),
+    { initialValue: { status: 'loading' } as SearchState },
+  );
+
+  protected readonly result = computed(() => {
+    const s = this.state();
+    return s.status === 'ok' ? s.result : null;
+  });
+  protected readonly error = computed(() => {
+    const s = this.state();
+    return s.status === 'error' ? s.message : null;
+  });
+  protected readonly sort = computed(() => this.params()['sort'] ?? 'newest');
+  protected readonly hasFilters = computed(() => FILTER_KEYS.some((k) => this.params()[k] !== undefined));
+
+  constructor() {
+    // Keep the form showing what the URL says (also after back/forward).
+    effect(() => {
+      const p = this.params();
+      this.filters.reset(
+        Object.fromEntries(FILTER_KEYS.map((k) => [k, k.endsWith('Only') ? p[k] === 'true' : (p[k] ?? '')])),
+        { emitEvent: false },
+      );
+    });
+  }
+
+  protected applyFilters(): void {
+    this.navigate({ ...queryFromForm(this.filters.getRawValue()), sort: this.params()['sort'], page: undefined });
+  }
+
+  protected clearFilters(): void {
+    this.navigate({ sort: this.params()['sort'] });
+  }
+
+  protected changeSort(sort: string): void {
+    this.navigate({ ...this.params(), sort: sort === 'newest' ? undefined : sort, page: undefined });
+  }
+
+  protected changePage(event: PageEvent): void {
+    this.navigate({ ...this.params(), page: event.pageIndex > 0 ? String(event.pageIndex + 1) : undefined, pageSize: String(event.pageSize) });
+  }
+
+  private navigate(queryParams: Record<string, string | undefined>): void {
+    void this.router.navigate([], { relativeTo: this.route, queryParams });
+  }
+}

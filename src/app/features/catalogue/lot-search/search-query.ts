@@ -1,0 +1,42 @@
+/** Catalogue filters that live in the URL (their meaning is in shared/contracts/lots.ts). */
+export const FILTER_KEYS = [
+  'q',
+  'rfvMin',
+  'rfvMax',
+  'rfqMin',
+  'cpMin',
+  'cpMax',
+  'adfMax',
+  'ndfMax',
+  'nscMax',
+  'forageType',
+  'baleType',
+  'cutting',
+  'harvestYear',
+  'priceMax',
+  'tonsMin',
+  'zip',
+  'radiusMi',
+  'compliantOnly',
+  'verifiedOnly',
+] as const;
+
+export const SORT_OPTIONS = [
+  { value: 'newest', label: 'Newest' },
+  { value: 'price', label: 'Price per ton' },
+  { value: 'price_dm', label: 'Price per ton of dry matter' },
+  { value: 'rfv', label: 'Highest RFV' },
+  { value: 'protein', label: 'Highest protein' },
+  { value: 'distance', label: 'Nearest (needs ZIP)' },
+];
+
+/** URL query from the form: empty fields and unticked boxes are left out so links stay short. */
+export function queryFromForm(values: Record<string, string | boolean>): Record<string, string | undefined> {
+  const out: Record<string, string | undefined> = {};
+  for (const key of FILTER_KEYS) {
+    const v = values[key];
+    if (typeof v === 'boolean') out[key] = v ? 'true' : undefined;
+    else out[key] = v === undefined || String(v).trim() === '' ? undefined : String(v).trim();
+  }
+  return out;
+}

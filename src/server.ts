@@ -1,0 +1,57 @@
+import {
+  AngularNodeAppEngine,
+  createNodeRequestHandler,
+  isMainModule,
+  writeResponseToNodeResponse,
+} from '@angular/ssr/node';
+import express from 'express';
+import { join } from 'node:path';
+import { createApi } from '../server/api';
+import { createAppDeps } from '../server/app-deps';
+import { mediaRouter } from '../server/features/media/media.router';
+
+const browserDistFolder = join(import.meta.dirname, '../browser');
+
+const deps = createAppDeps();
+const app = express();
+app.disable('x-powered-by');
+const angularApp = new AngularNodeAppEngine();
+
+app.use('/api', createApi(deps));
+app.use('/media', mediaRouter(deps.storage));
+
+app.use(
+  express.static(browserDistFolder, {
+    maxAge: '1y',
+    index: false,
+    redirect: false,
+  }),
+);
+
+app.use((req, res, next) => {
+  angularApp
+    .handle(req)
+    .then((response) => (response ? writeResponseToNodeResponse(response, res) : next()))
+    .catch(next);
+});
+
+if (isMainModule(import.meta.url) || process.env['pm_id']) {
+  const port = deps.env.PORT;
+  const server = app.listen(port, '127.0.0.1', (error) => {
+    if (error) throw error;
+    deps.logger.info(`Baleproof listening on http://127.0.0.1:${port}`);
+  });
+  const shutdown = (signal: string) => {
+    deps.logger.info({ signal }, 'shutting down');
+    server.close(() => {
+      deps.db.$client.end().finally(() => process.exit(0));
+    });
+    // Keep-alive sockets would hold close() open; give in-flight requests a moment, then go.
+    setTimeout(() => process.exit(0), 5000).unref();
+    server.closeIdleConnections();
+  };
+  process.once('SIGTERM', () => shutdown('SIGTERM'));
+  process.once('SIGINT', () => shutdown('SIGINT'));
+}
+
+export const reqHandler = createNodeRequestHandler(app);

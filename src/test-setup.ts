@@ -1,0 +1,2 @@
+import { setupZonelessTestEnv } from 'jest-preset-angular/setup-env/zoneless';
+setupZonelessTestEnv();

@@ -1,0 +1,1 @@
+process.env.TZ = 'UTC';
