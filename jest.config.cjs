@@ -23,7 +23,6 @@ module.exports = {
       testEnvironment: 'jest-preset-angular/environments/jest-jsdom-env',
       roots: ['<rootDir>/src'],
       testMatch: ['**/*.spec.ts'],
-      setupFilesAfterEach: undefined,
       setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
     },
   ],

@@ -12,6 +12,7 @@ import { cookiesAreSecure, type Env } from './env';
 import { authRouter, configurePassport } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
+import { adminRouter } from './features/admin/admin.router';
 import type { Logger } from './logger';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -60,6 +61,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/health', healthRouter(db));
   api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT }));
   api.use('/lots', lotsRouter(db));
+  api.use('/admin', adminRouter(db));
 
   api.use(apiNotFound);
   api.use(errorHandler(logger));

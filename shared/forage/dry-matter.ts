@@ -12,17 +12,18 @@ export function dryMatterFromMoisture(moisturePct: number): number {
 
 /** Converts a DM-basis percentage to as-fed, given dry matter % of the sample. */
 export function toAsFed(valueDm: number, dryMatterPct: number): number {
-  return (valueDm * dryMatterPct) / 100;
+  // Scaling by the fraction (≤ 1) guarantees an as-fed value never exceeds its DM value in floating point.
+  return valueDm * (dryMatterPct / 100);
 }
 
 /** Converts an as-fed percentage to DM basis, given dry matter % of the sample (> 0). */
 export function toDryMatter(valueAsFed: number, dryMatterPct: number): number {
-  return (valueAsFed * 100) / dryMatterPct;
+  return valueAsFed / (dryMatterPct / 100);
 }
 
 /** Weight of dry matter in a weight of hay as fed (same unit in and out). */
 export function dryMatterWeight(asFedWeight: number, dryMatterPct: number): number {
-  return (asFedWeight * dryMatterPct) / 100;
+  return asFedWeight * (dryMatterPct / 100);
 }
 
 /** Nutrients moved from one basis to the other; `convert` is `toAsFed` or `toDryMatter`. */

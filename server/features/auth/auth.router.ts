@@ -1,5 +1,5 @@
 import { Router, type Request } from 'express';
-import { rateLimit } from 'express-rate-limit';
+import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { SignInSchema, SignUpSchema, type SessionUser } from '../../../shared/contracts/auth';
@@ -39,7 +39,7 @@ export function authRouter(db: Db, options: { signInLimit: number }): Router {
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     // Per address and account, so one attacker cannot lock out everyone behind the same address.
-    keyGenerator: (req) => `${req.ip}:${String(req.body?.email ?? '').toLowerCase()}`,
+    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}:${String(req.body?.email ?? '').toLowerCase()}`,
     handler: (_req, _res, next) =>
       next(new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
   });

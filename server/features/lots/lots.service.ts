@@ -16,9 +16,11 @@ export function locateZip(zip: string): { zip: string; city: string; state: stri
 
 /** Great-circle distance in miles from a point to the farm, in SQL (haversine). */
 function distanceSql(lat: number, lon: number): SQL<number> {
-  return sql<number>`(2 * ${EARTH_RADIUS_MI} * asin(sqrt(
-    power(sin(radians(${farms.latitude} - ${lat}) / 2), 2) +
-    cos(radians(${lat})) * cos(radians(${farms.latitude})) * power(sin(radians(${farms.longitude} - ${lon}) / 2), 2)
+  const la = sql`${lat}::float8`;
+  const lo = sql`${lon}::float8`;
+  return sql<number>`(2 * ${EARTH_RADIUS_MI}::float8 * asin(sqrt(
+    power(sin(radians(${farms.latitude} - ${la}) / 2), 2) +
+    cos(radians(${la})) * cos(radians(${farms.latitude})) * power(sin(radians(${farms.longitude} - ${lo}) / 2), 2)
   )))`;
 }
 
@@ -59,16 +61,16 @@ export class LotsService {
     if (query.cutting !== undefined) add(eq(lots.cutting, query.cutting));
     if (query.harvestYear !== undefined) add(sql`extract(year from ${lots.harvestStartedOn}) = ${query.harvestYear}`);
     if (query.priceMax !== undefined) add(lte(lots.priceCentsPerTon, Math.round(query.priceMax * 100)));
-    if (query.tonsMin !== undefined) add(sql`${tonsAvailable} >= ${query.tonsMin}`);
+    if (query.tonsMin !== undefined) add(sql`${tonsAvailable} >= ${query.tonsMin}::float8`);
     if (query.compliantOnly) add(eq(samplingRecords.compliant, true));
     if (query.verifiedOnly) add(and(eq(labAnalyses.verification, 'verified'), eq(labAnalyses.labCertified, true)));
     if (origin && distance && query.radiusMi !== undefined) {
       // A bounding box first lets the farms (lat, lon) index discard far rows before the exact distance.
       const dLat = query.radiusMi / 69.0;
       const dLon = query.radiusMi / (69.0 * Math.max(0.01, Math.cos((origin.latitude * Math.PI) / 180)));
-      add(sql`${farms.latitude} between ${origin.latitude - dLat} and ${origin.latitude + dLat}`);
-      add(sql`${farms.longitude} between ${origin.longitude - dLon} and ${origin.longitude + dLon}`);
-      add(sql`${distance} <= ${query.radiusMi}`);
+      add(sql`${farms.latitude} between ${origin.latitude - dLat}::float8 and ${origin.latitude + dLat}::float8`);
+      add(sql`${farms.longitude} between ${origin.longitude - dLon}::float8 and ${origin.longitude + dLon}::float8`);
+      add(sql`${distance} <= ${query.radiusMi}::float8`);
     }
 
     const order: SQL[] = {

@@ -1,0 +1,48 @@
+#!/usr/bin/env bash
+# npm test: everything CI runs. Type checks, Jest (unit + integration against a fresh database),
+# then Playwright journeys in Debian's Chromium against the built server-rendered app.
+set -euo pipefail
+source "$(dirname "$0")/env.sh"
+cd "$ROOT"
+
+# Test services use their own ports so they can run beside `npm start`.
+export SMTP_PORT="${TEST_SMTP_PORT:-1026}" MAILDEV_WEB_PORT="${TEST_MAILDEV_WEB_PORT:-1081}" STRIPE_FAKE_PORT="${TEST_STRIPE_FAKE_PORT:-12112}"
+export E2E_PORT="${E2E_PORT:-4100}"
+source "$(dirname "$0")/services.sh"
+
+bash scripts/ensure-deps.sh --with-browser
+
+STARTED_PG=0
+cleanup() {
+  stop_services
+  [ "$STARTED_PG" = 1 ] && [ "${KEEP_DB:-}" != 1 ] && bash scripts/db.sh stop
+  return 0
+}
+trap cleanup EXIT
+
+if [ -z "${TEST_DATABASE_URL:-}" ]; then
+  bash scripts/db.sh start
+  STARTED_PG=1
+  bash scripts/db.sh recreate baleproof_test
+  bash scripts/db.sh recreate baleproof_e2e
+  export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_test"
+  export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_e2e"
+fi
+
+log "type-checking"
+node_modules/.bin/tsc -p tsconfig.server.json
+
+DATABASE_URL="$TEST_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
+log "unit and integration tests (Jest)"
+NODE_ENV=test node_modules/.bin/jest --ci
+
+log "building the app for end-to-end tests"
+node_modules/.bin/ng build --configuration production
+
+log "preparing the end-to-end database"
+DATABASE_URL="${E2E_DATABASE_URL:?E2E_DATABASE_URL is required}" node --import tsx server/db/migrate-cli.ts
+DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node --import tsx server/db/seed/seed-cli.ts
+start_fakes
+
+log "end-to-end tests (Playwright, Chromium)"
+DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node_modules/.bin/playwright test

@@ -1,0 +1,35 @@
+import { startTestApi, uniqueEmail, type TestApi } from '../../../tests/support/test-api';
+import { hashPassword } from '../auth/password';
+import { users } from '../../db/schema';
+
+describe('admin routes', () => {
+  let t: TestApi;
+  beforeAll(async () => {
+    t = await startTestApi();
+  });
+  afterAll(() => t.close());
+
+  it('answers 401 to an anonymous visitor', async () => {
+    const res = await t.agent().get('/admin/users');
+    expect(res.status).toBe(401);
+    expect(res.body.error.code).toBe('unauthenticated');
+  });
+
+  it('answers 403 to a signed-in buyer', async () => {
+    const agent = t.agent();
+    await agent.post('/auth/sign-up', { email: uniqueEmail(), password: 'a-long-password', displayName: 'B', role: 'buyer' });
+    const res = await agent.get('/admin/users');
+    expect(res.status).toBe(403);
+    expect(res.body.error.code).toBe('forbidden');
+  });
+
+  it('lists users for an admin', async () => {
+    const email = uniqueEmail('admin');
+    await t.deps.db.insert(users).values({ email, displayName: 'Admin', role: 'admin', passwordHash: await hashPassword('admin-password-1') });
+    const agent = t.agent();
+    expect((await agent.post('/auth/sign-in', { email, password: 'admin-password-1' })).status).toBe(200);
+    const res = await agent.get(`/admin/users?q=${encodeURIComponent(email)}`);
+    expect(res.status).toBe(200);
+    expect(res.body.items).toEqual([expect.objectContaining({ email, role: 'admin' })]);
+  });
+});

@@ -1,0 +1,81 @@
+import { randomUUID } from 'node:crypto';
+import { createGrower, createLot } from '../../../tests/support/fixtures';
+import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+
+describe('lots API', () => {
+  let t: TestApi;
+  // A tag in every title keeps this file's lots apart from other tests sharing the database.
+  const tag = `T${randomUUID().slice(0, 8)}`;
+  let ids: Record<string, number>;
+
+  beforeAll(async () => {
+    t = await startTestApi();
+    const near = await createGrower(t.deps.db, '66502'); // Manhattan, KS
+    const far = await createGrower(t.deps.db, '68901'); // Hastings, NE
+    ids = {
+      rich: (await createLot(t.deps.db, near.farm.id, { title: `${tag} rich`, priceDollarsPerTon: 320, analysis: { adfPct: 28, ndfPct: 36, crudeProteinPct: 22 } })).id,
+      plain: (await createLot(t.deps.db, near.farm.id, { title: `${tag} plain`, priceDollarsPerTon: 200, analysis: { adfPct: 36, ndfPct: 50, crudeProteinPct: 15 } })).id,
+      far: (await createLot(t.deps.db, far.farm.id, { title: `${tag} far`, priceDollarsPerTon: 250, analysis: { adfPct: 30, ndfPct: 40, crudeProteinPct: 19 } })).id,
+      hidden: (await createLot(t.deps.db, near.farm.id, { title: `${tag} hidden`, status: 'in_review' })).id,
+    };
+  });
+  afterAll(() => t.close());
+
+  const search = (query: string) => t.agent().get(`/lots?q=${tag}&${query}`);
+  const titles = (body: { items: { title: string }[] }) => body.items.map((i) => i.title.replace(`${tag} `, ''));
+
+  it('lists only listed lots, with total and computed RFV and protein', async () => {
+    const res = await search('sort=price');
+    expect(res.status).toBe(200);
+    expect(res.body.total).toBe(3);
+    expect(titles(res.body)).toEqual(['plain', 'far', 'rich']);
+    const rich = res.body.items.find((i: { id: number }) => i.id === ids['rich']);
+    // RFV of ADF 28 / NDF 36 by Rohweder et al. (1978): (88.9 − 0.779·28)·(120/36)/1.29 = 173.35
+    expect(rich.rfv).toBeCloseTo(173.35, 1);
+    expect(rich.crudeProteinPct).toBe(22);
+    expect(rich.priceCentsPerDmTon).toBe(Math.round(32000 / 0.88));
+  });
+
+  it('filters by RFV and protein ranges', async () => {
+    expect(titles((await search('rfvMin=140')).body).sort()).toEqual(['far', 'rich']);
+    expect(titles((await search('cpMin=16&cpMax=20')).body)).toEqual(['far']);
+  });
+
+  it('filters by distance from a ZIP and reports miles', async () => {
+    const res = await search('zip=66502&radiusMi=50&sort=distance');
+    expect(titles(res.body).sort()).toEqual(['plain', 'rich']);
+    expect(res.body.items[0].distanceMi).toBeLessThan(1);
+    expect(res.body.origin).toMatchObject({ zip: '66502', state: 'KS' });
+    const all = await search('zip=66502&sort=distance');
+    expect(titles(all.body)[2]).toBe('far');
+    // Manhattan KS to Hastings NE is roughly 150 miles in a straight line (from memory; checked only loosely).
+    expect(all.body.items[2].distanceMi).toBeGreaterThan(120);
+    expect(all.body.items[2].distanceMi).toBeLessThan(180);
+  });
+
+  it('pages with a stable total', async () => {
+    const first = await search('sort=price&pageSize=2');
+    const second = await search('sort=price&pageSize=2&page=2');
+    expect(first.body.total).toBe(3);
+    expect(second.body.total).toBe(3);
+    expect([...titles(first.body), ...titles(second.body)]).toEqual(['plain', 'far', 'rich']);
+  });
+
+  it('rejects bad filters with 400 naming the field', async () => {
+    const res = await t.agent().get('/lots?rfvMin=abc&sort=cheapest&zip=123');
+    expect(res.status).toBe(400);
+    const paths = res.body.error.details.map((d: { path: string }) => d.path);
+    expect(paths).toEqual(expect.arrayContaining(['rfvMin', 'sort', 'zip']));
+    expect((await t.agent().get('/lots?radiusMi=10')).status).toBe(400);
+    expect((await t.agent().get('/lots?zip=00000')).body.error.code).toBe('unknown_zip');
+  });
+
+  it('shows a listed lot and hides one under review from the public', async () => {
+    const shown = await t.agent().get(`/lots/${ids['rich']}`);
+    expect(shown.status).toBe(200);
+    expect(shown.body.analysis).toMatchObject({ crudeProteinPct: 22, adfPct: 28, ndfPct: 36, verification: 'verified' });
+    expect(shown.body.sampling).toMatchObject({ coresTaken: 20, compliant: true });
+    expect((await t.agent().get(`/lots/${ids['hidden']}`)).status).toBe(404);
+    expect((await t.agent().get('/lots/not-a-number')).status).toBe(400);
+  });
+});

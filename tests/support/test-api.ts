@@ -1,0 +1,94 @@
+import { mkdtempSync } from 'node:fs';
+import type { AddressInfo } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import Stripe from 'stripe';
+import request from 'supertest';
+import { createStripeFake } from '../../docker-local-fakes/stripe/stripe-fake';
+import type { OutgoingMail } from '../../server/adapters/mail/mailer';
+import { createLocalStorage } from '../../server/adapters/storage/file-storage';
+import { createApi, type ApiDeps } from '../../server/api';
+import { createDb } from '../../server/db/client';
+import { readEnv } from '../../server/env';
+import { createLogger } from '../../server/logger';
+
+/**
+ * The real API against the migrated test database (TEST_DATABASE_URL, prepared by `npm test`),
+ * with a capturing mailer, a temporary upload folder and the Stripe fake on a free port.
+ */
+export async function startTestApi(overrides: Record<string, string> = {}) {
+  const url = process.env['TEST_DATABASE_URL'];
+  if (!url) throw new Error('TEST_DATABASE_URL is not set: run the suite with `npm test`, which prepares the test database.');
+  const stripeServer = await new Promise<import('node:http').Server>((resolve) => {
+    const s = createStripeFake().listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const stripePort = (stripeServer.address() as AddressInfo).port;
+  const env = readEnv({ NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'silent', SIGN_IN_RATE_LIMIT: '1000', ...overrides });
+  const mails: OutgoingMail[] = [];
+  const deps: ApiDeps = {
+    env,
+    db: createDb(url, 4),
+    logger: createLogger('silent'),
+    mailer: { send: async (mail) => void mails.push(mail) },
+    storage: createLocalStorage(mkdtempSync(join(tmpdir(), 'baleproof-test-'))),
+    stripe: new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: stripePort, protocol: 'http', maxNetworkRetries: 0, telemetry: false }),
+  };
+  const api = createApi(deps);
+  return {
+    api,
+    deps,
+    mails,
+    /** A supertest agent that keeps cookies and sends the CSRF header like the Angular app does. */
+    agent: () => csrfAgent(api),
+    close: async () => {
+      await deps.db.$client.end();
+      await new Promise((resolve) => stripeServer.close(resolve));
+    },
+  };
+}
+
+export type TestApi = Awaited<ReturnType<typeof startTestApi>>;
+
+export function csrfAgent(api: Parameters<typeof request.agent>[0]) {
+  const agent = request.agent(api);
+  let token = '';
+  // Remember the XSRF-TOKEN cookie whenever the server sets it, as the browser would.
+  const capture = <T extends { headers: Record<string, unknown> }>(res: T): T => {
+    const cookie = ([] as string[]).concat((res.headers['set-cookie'] as string[] | undefined) ?? []).find((c) => c.startsWith('XSRF-TOKEN='));
+    if (cookie) token = decodeURIComponent(cookie.split(';')[0]!.split('=').slice(1).join('='));
+    return res;
+  };
+  const prime = async () => {
+    if (!token) capture(await agent.get('/auth/me'));
+    return token;
+  };
+  return {
+    raw: agent,
+    get: async (path: string) => capture(await agent.get(path)),
+    // The agent attaches cookies when a request is created, so the token must exist first.
+    post: async (path: string, body?: object) => {
+      const t = await prime();
+      return capture(await agent.post(path).set('X-XSRF-TOKEN', t).send(body ?? {}));
+    },
+    put: async (path: string, body?: object) => {
+      const t = await prime();
+      return capture(await agent.put(path).set('X-XSRF-TOKEN', t).send(body ?? {}));
+    },
+    patch: async (path: string, body?: object) => {
+      const t = await prime();
+      return capture(await agent.patch(path).set('X-XSRF-TOKEN', t).send(body ?? {}));
+    },
+    delete: async (path: string) => {
+      const t = await prime();
+      return capture(await agent.delete(path).set('X-XSRF-TOKEN', t));
+    },
+    token: prime,
+  };
+}
+
+let counter = 0;
+/** A unique e-mail per call, so test files can share one database. */
+export function uniqueEmail(prefix = 'user'): string {
+  counter += 1;
+  return `${prefix}.${process.pid}.${Date.now().toString(36)}.${counter}@test.baleproof.example`;
+}
