@@ -23,10 +23,10 @@ trap cleanup EXIT
 if [ -z "${TEST_DATABASE_URL:-}" ]; then
   bash scripts/db.sh start
   STARTED_PG=1
-  bash scripts/db.sh recreate baleproof_test
-  bash scripts/db.sh recreate baleproof_e2e
-  export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_test"
-  export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_e2e"
+  bash scripts/db.sh recreate "baleproof_test${DB_SUFFIX:-}"
+  bash scripts/db.sh recreate "baleproof_e2e${DB_SUFFIX:-}"
+  export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_test${DB_SUFFIX:-}"
+  export E2E_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_e2e${DB_SUFFIX:-}"
 fi
 
 log "type-checking"

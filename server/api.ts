@@ -13,6 +13,7 @@ import { authRouter, configurePassport } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
 import { adminRouter } from './features/admin/admin.router';
+import { forageRouter } from './features/forage/forage.router';
 import type { Logger } from './logger';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -62,6 +63,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT }));
   api.use('/lots', lotsRouter(db));
   api.use('/admin', adminRouter(db));
+  api.use('/forage', forageRouter());
 
   api.use(apiNotFound);
   api.use(errorHandler(logger));

@@ -1,0 +1,31 @@
+import { expect, test } from '@playwright/test';
+
+test.describe('catalogue', () => {
+  test('the server-rendered HTML of the catalogue already lists demo lots', async ({ request }) => {
+    // A plain HTTP request runs no JavaScript: whatever is in the body was rendered on the server.
+    const res = await request.get('/hay');
+    expect(res.status()).toBe(200);
+    const html = await res.text();
+    expect(html).toContain('Alfalfa, 2nd cutting — North Pivot');
+    expect(html).toContain('Larkspur Bend Farm');
+  });
+
+  test('an unknown address answers 404 with a helpful page', async ({ request, page }) => {
+    expect((await request.get('/no-such-page')).status()).toBe(404);
+    await page.goto('/no-such-page');
+    await expect(page.getByRole('heading', { name: 'Page not found' })).toBeVisible();
+  });
+
+  test('a lot page shows its analysis and photos', async ({ page }) => {
+    await page.goto('/hay');
+    await page.getByRole('link', { name: 'Alfalfa, 2nd cutting — North Pivot' }).click();
+    await expect(page.getByRole('heading', { level: 1, name: 'Alfalfa, 2nd cutting — North Pivot' })).toBeVisible();
+    await expect(page.getByRole('heading', { name: 'Lab analysis' })).toBeVisible();
+    await expect(page.getByRole('rowheader', { name: 'Crude protein (CP)' })).toBeVisible();
+    const photo = page.locator('figure img').first();
+    await expect(photo).toHaveAttribute('src', /\.webp$/);
+    const src = await photo.getAttribute('src');
+    const image = await page.request.get(src!);
+    expect(image.headers()['content-type']).toBe('image/webp');
+  });
+});

@@ -1,0 +1,43 @@
+import { expect, test } from '@playwright/test';
+
+// Demo accounts from the seed (README lists them).
+const accounts = [
+  { role: 'grower', email: 'grower@demo.baleproof.example', password: 'demo-grower-pass', nav: 'My lots' },
+  { role: 'buyer', email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass', nav: 'Herd planner' },
+  { role: 'admin', email: 'admin@baleproof.example', password: 'admin-demo-pass', nav: 'Review desk' },
+];
+
+test.describe('signing in', () => {
+  for (const account of accounts) {
+    test(`the demo ${account.role} signs in through the form and sees their navigation`, async ({ page }) => {
+      await page.goto('/sign-in');
+      await page.getByLabel('E-mail').fill(account.email);
+      await page.getByLabel('Password').fill(account.password);
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await expect(page).toHaveURL(/\/hay/);
+      await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: account.nav })).toBeVisible();
+      await page.getByRole('button', { name: /Account menu/ }).click();
+      await page.getByRole('menuitem', { name: 'Sign out' }).click();
+      await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+    });
+  }
+
+  test('a wrong password shows a clear error and stays on the form', async ({ page }) => {
+    await page.goto('/sign-in');
+    await page.getByLabel('E-mail').fill('buyer@demo.baleproof.example');
+    await page.getByLabel('Password').fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect(page.getByRole('alert')).toContainText('E-mail or password is wrong.');
+    await expect(page).toHaveURL(/\/sign-in/);
+  });
+
+  test('a new buyer signs up and is signed in', async ({ page }) => {
+    await page.goto('/sign-up');
+    await page.getByLabel('Your name').fill('New Buyer');
+    await page.getByLabel('E-mail').fill(`new.${Date.now()}@e2e.baleproof.example`);
+    await page.getByLabel('Password').fill('a-long-enough-password');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect(page).toHaveURL(/\/hay/);
+    await expect(page.getByRole('button', { name: /Account menu for New Buyer/ })).toBeVisible();
+  });
+});
