@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { ForageEvaluation, SamplingEvaluation } from '../forage';
 
 export const FORAGE_TYPES = [
   'alfalfa',
@@ -185,8 +186,18 @@ export interface LotDetail {
     pickupHours: string;
   };
   analysis: LotAnalysisView | null;
+  /** The forage engine's figures for the current analysis (unrounded). */
+  evaluation: ForageEvaluation | null;
   sampling: LotSamplingView | null;
+  /** The sampling record checked against the protocol, as of the listing date. */
+  samplingReport: SamplingEvaluation | null;
   photos: PhotoView[];
+}
+
+/** The bale shape the sampling protocol cares about (where to core). */
+export function baleShapeOf(baleType: BaleType): 'small-square' | 'large-square' | 'round' {
+  if (baleType.startsWith('small')) return 'small-square';
+  return baleType.startsWith('round') ? 'round' : 'large-square';
 }
 
 export interface LotAnalysisView {

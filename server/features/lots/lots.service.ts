@@ -1,6 +1,7 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import zipcodes from 'zipcodes';
-import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '../../../shared/contracts/lots';
+import { baleShapeOf, type LotDetail, type LotSearch, type LotSearchResult, type LotSummary, type PhotoView } from '../../../shared/contracts/lots';
+import { evaluateForage, evaluateSampling } from '../../../shared/forage';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
@@ -38,8 +39,11 @@ export function photoView(row: { id: number; altText: string; width: number; hei
 export class LotsService {
   constructor(private readonly db: Db) {}
 
-  /** Public catalogue: listed lots with a current analysis, filtered and sorted in SQL. */
-  async search(query: LotSearch): Promise<LotSearchResult> {
+  /**
+   * Public catalogue: listed lots with a current analysis, filtered and sorted in SQL.
+   * `scope.lotIds` narrows the search to those lots (saved-search alerts ask "does this new lot match?").
+   */
+  async search(query: LotSearch, scope: { lotIds?: readonly number[] } = {}): Promise<LotSearchResult> {
     const origin = query.zip ? locateZip(query.zip) : null;
     const distance = origin ? distanceSql(origin.latitude, origin.longitude) : null;
     const tonsAvailable = sql<number>`(${lots.balesAvailable} * ${lots.avgBaleWeightLb} / 2000.0)`;
@@ -47,6 +51,7 @@ export class LotsService {
 
     const where: SQL[] = [eq(lots.status, 'listed'), sql`${lots.balesAvailable} > 0`];
     const add = (cond: SQL | undefined) => cond && where.push(cond);
+    if (scope.lotIds) add(inArray(lots.id, [...scope.lotIds]));
     if (query.q) add(sql`(${lots.title} ilike ${'%' + query.q + '%'} or ${farms.name} ilike ${'%' + query.q + '%'})`);
     if (query.rfvMin !== undefined) add(gte(labAnalyses.rfv, query.rfvMin));
     if (query.rfvMax !== undefined) add(lte(labAnalyses.rfv, query.rfvMax));
@@ -246,6 +251,45 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise
           reportedRfv: analysis.reportedRfv,
         }
       : null,
+    evaluation: analysis
+      ? evaluateForage({
+          forageClass: lot.forageClass,
+          basis: 'dm',
+          dryMatterPct: analysis.dryMatterPct,
+          crudeProteinPct: analysis.crudeProteinPct,
+          adfPct: analysis.adfPct,
+          ndfPct: analysis.ndfPct,
+          ...optional({
+            ndfd48Pct: analysis.ndfd48Pct,
+            fatPct: analysis.fatPct,
+            ashPct: analysis.ashPct,
+            escPct: analysis.escPct,
+            wscPct: analysis.wscPct,
+            starchPct: analysis.starchPct,
+            calciumPct: analysis.calciumPct,
+            phosphorusPct: analysis.phosphorusPct,
+            reportedRfv: analysis.reportedRfv,
+          }),
+        })
+      : null,
+    samplingReport: sampling
+      ? evaluateSampling(
+          {
+            sampledOn: sampling.sampledOn,
+            coresTaken: sampling.coresTaken,
+            balesSampled: sampling.balesSampled,
+            probeDiameterIn: sampling.probeDiameterIn,
+            probeLengthIn: sampling.probeLengthIn,
+            corePosition: sampling.corePosition,
+            baleShape: baleShapeOf(lot.baleType),
+            harvestStartedOn: lot.harvestStartedOn,
+            harvestEndedOn: lot.harvestEndedOn,
+            lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
+            sampledBy: sampling.sampledBy,
+          },
+          { listedOn: (lot.publishedAt ?? new Date()).toISOString() },
+        )
+      : null,
     sampling: sampling
       ? {
           sampledOn: sampling.sampledOn,
@@ -260,4 +304,9 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise
       : null,
     photos: photoRows.map(photoView),
   };
+}
+
+/** Drops null entries so optional engine inputs are simply absent. */
+function optional<T extends Record<string, number | null>>(values: T): { [K in keyof T]?: number } {
+  return Object.fromEntries(Object.entries(values).filter(([, v]) => v !== null)) as { [K in keyof T]?: number };
 }

@@ -1,14 +1,26 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { CORE_POSITION_LABELS } from '../../../../../shared/contracts/labels';
-import type { LotAnalysisView, LotDetail, LotSamplingView } from '../../../../../shared/contracts/lots';
+import type { LotAnalysisView, LotDetail } from '../../../../../shared/contracts/lots';
+import type { ForageEvaluation, Nutrients } from '../../../../../shared/forage';
+import { lotCautions } from '../../../../../shared/safety/lot-cautions';
 import { fixed } from '../format';
+import { DE_METHOD_LABELS, FIGURE_MEANINGS, NSC_FLAG_TEXT, NSC_METHOD_LABELS, TDN_METHOD_LABELS } from './figure-notes';
 
-interface NutrientRow {
-  label: string;
-  dm: number;
-}
+const NUTRIENT_ROWS: [keyof Nutrients, string][] = [
+  ['crudeProteinPct', 'Crude protein (CP)'],
+  ['adfPct', 'Acid detergent fibre (ADF)'],
+  ['ndfPct', 'Neutral detergent fibre (NDF)'],
+  ['fatPct', 'Crude fat (EE)'],
+  ['ashPct', 'Ash'],
+  ['escPct', 'Ethanol-soluble carbohydrate (ESC)'],
+  ['wscPct', 'Water-soluble carbohydrate (WSC)'],
+  ['starchPct', 'Starch'],
+  ['nscPct', 'Non-structural carbohydrate (NSC)'],
+  ['calciumPct', 'Calcium (Ca)'],
+  ['phosphorusPct', 'Phosphorus (P)'],
+];
 
-/** The lab analysis on dry-matter and as-fed bases, with the sampling record. */
+/** The lab analysis on dry-matter and as-fed bases, the computed indices, grades, findings and cautions. */
 @Component({
   selector: 'app-lot-analysis-panel',
   templateUrl: './lot-analysis-panel.html',
@@ -17,31 +29,30 @@ interface NutrientRow {
 })
 export class LotAnalysisPanel {
   readonly analysis = input.required<LotAnalysisView>();
-  readonly forageClass = input.required<LotDetail['forageClass']>();
-  readonly sampling = input<LotSamplingView | null>(null);
+  readonly evaluation = input.required<ForageEvaluation>();
   readonly lot = input.required<LotDetail>();
 
-  protected readonly rows = computed<NutrientRow[]>(() => {
-    const a = this.analysis();
-    const rows: [string, number | null][] = [
-      ['Crude protein (CP)', a.crudeProteinPct],
-      ['Acid detergent fibre (ADF)', a.adfPct],
-      ['Neutral detergent fibre (NDF)', a.ndfPct],
-      ['NDF digestibility, 48 h (% of NDF)', a.ndfd48Pct],
-      ['Crude fat (EE)', a.fatPct],
-      ['Ash', a.ashPct],
-      ['Ethanol-soluble carbohydrate (ESC)', a.escPct],
-      ['Water-soluble carbohydrate (WSC)', a.wscPct],
-      ['Starch', a.starchPct],
-      ['Calcium', a.calciumPct],
-      ['Phosphorus', a.phosphorusPct],
-    ];
-    return rows.filter((r): r is [string, number] => r[1] !== null).map(([label, dm]) => ({ label, dm }));
+  protected readonly rows = computed(() => {
+    const { dm, asFed } = this.evaluation();
+    return NUTRIENT_ROWS.filter(([key]) => dm[key] !== null).map(([key, label]) => ({ label, dm: dm[key], asFed: asFed[key] }));
   });
-  /** NDFD is a share of NDF, not of the hay, so it has no as-fed value. */
-  protected asFed(row: NutrientRow): string {
-    return row.label.startsWith('NDF digestibility') ? '—' : fixed((row.dm * this.analysis().dryMatterPct) / 100);
-  }
+  protected readonly cautions = computed(() => {
+    const lot = this.lot();
+    return lotCautions({
+      forageClass: lot.forageClass,
+      baleType: lot.baleType,
+      moistureAtBalingPct: lot.moistureAtBalingPct,
+      storage: lot.storage,
+      nscFlag: this.evaluation().nscFlag,
+    });
+  });
+  protected readonly deMcalPerLbDm = computed(() => this.evaluation().horseDe.mcalPerLbDm);
+
+  protected readonly meanings = FIGURE_MEANINGS;
+  protected readonly tdnMethods = TDN_METHOD_LABELS;
+  protected readonly deMethods = DE_METHOD_LABELS;
+  protected readonly nscMethods = NSC_METHOD_LABELS;
+  protected readonly nscFlags = NSC_FLAG_TEXT;
   protected readonly corePositions = CORE_POSITION_LABELS;
   protected readonly fixed = fixed;
 }

@@ -3,7 +3,7 @@ import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
-import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { MatProgressBar } from '@angular/material/progress-bar';
@@ -22,7 +22,7 @@ type SearchState = { status: 'loading' } | { status: 'ok'; result: LotSearchResu
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
   selector: 'app-lot-search-page',
-  imports: [ReactiveFormsModule, LotCard, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, MatPaginator, MatProgressBar],
+  imports: [ReactiveFormsModule, LotCard, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, MatPaginator, MatProgressBar],
   templateUrl: './lot-search-page.html',
   styleUrl: './lot-search-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,0 +1,39 @@
+import { lotCautions, SAFE_BALING_MOISTURE_PCT } from './lot-cautions';
+
+const base = { forageClass: 'grass' as const, baleType: 'small_square_2_string' as const, moistureAtBalingPct: 15, storage: 'barn' as const, nscFlag: null };
+const codes = (input: Parameters<typeof lotCautions>[0]) => lotCautions(input).map((c) => c.code);
+
+describe('lotCautions', () => {
+  it('uses the published safe baling moisture per bale type', () => {
+    // Source: Alberta Agriculture, "Bale moisture" (after Collins): small rectangular 18–20%, large rectangular 12–16%,
+    // rounds 4×4/4×5 15–18%, rounds 5×5/5×6 15% (upper end of each range).
+    expect(SAFE_BALING_MOISTURE_PCT.small_square_2_string).toBe(20);
+    expect(SAFE_BALING_MOISTURE_PCT.large_square_4x4x8).toBe(16);
+    expect(SAFE_BALING_MOISTURE_PCT.round_4x5).toBe(18);
+    expect(SAFE_BALING_MOISTURE_PCT.round_5x6).toBe(15);
+  });
+
+  it('warns about heating and fire only above the safe moisture for the bale type', () => {
+    expect(codes({ ...base, moistureAtBalingPct: 20 })).not.toContain('storage-moisture');
+    expect(codes({ ...base, moistureAtBalingPct: 20.5 })).toContain('storage-moisture');
+    expect(codes({ ...base, baleType: 'round_5x5', moistureAtBalingPct: 16 })).toContain('storage-moisture');
+    expect(codes({ ...base, moistureAtBalingPct: null })).not.toContain('storage-moisture');
+  });
+
+  it('warns about blister beetles for alfalfa and mixes but not for grass (Texas AgriLife; common practice)', () => {
+    expect(codes({ ...base, forageClass: 'legume' })).toContain('blister-beetles');
+    expect(codes({ ...base, forageClass: 'mixed' })).toContain('blister-beetles');
+    expect(codes(base)).not.toContain('blister-beetles');
+  });
+
+  it('flags NSC above the strict limit for metabolic horses (Frank et al. 2010, ACVIM consensus: < 10–12% DM)', () => {
+    expect(codes({ ...base, nscFlag: 'above-strict-limit' })).toContain('high-nsc');
+    expect(codes({ ...base, nscFlag: 'within-advised-limit' })).not.toContain('high-nsc');
+  });
+
+  it('always reminds about mould and dust, and every caution defers to a professional or checks', () => {
+    const all = lotCautions({ forageClass: 'legume', baleType: 'round_5x5', moistureAtBalingPct: 19, storage: 'outside', nscFlag: 'above-upper-limit' });
+    expect(all.map((c) => c.code)).toEqual(['storage-moisture', 'blister-beetles', 'high-nsc', 'outside-storage', 'mould-dust']);
+    for (const c of all.filter((c) => c.code !== 'outside-storage')) expect(c.message).toMatch(/veterinarian|fire service|fire guidance/);
+  });
+});

@@ -1,0 +1,82 @@
+import type { BaleType } from '../contracts/lots';
+
+/** A safety note shown with a lot; each ends by deferring to a professional or local guidance. */
+export interface Caution {
+  code: 'storage-moisture' | 'blister-beetles' | 'mould-dust' | 'high-nsc' | 'outside-storage';
+  title: string;
+  message: string;
+}
+
+/**
+ * Highest moisture at baling considered safe to store without preservative, % as fed, by bale type.
+ * Alberta Agriculture, "Bale moisture" (after Collins): small rectangular 18–20%, large rectangular
+ * 12–16%, rounds 4×4 and 4×5 ft 15–18%, rounds 5×5 and 5×6 ft 15%. The upper end of each range is used.
+ */
+export const SAFE_BALING_MOISTURE_PCT: Record<BaleType, number> = {
+  small_square_2_string: 20,
+  small_square_3_string: 20,
+  large_square_3x3x8: 16,
+  large_square_3x4x8: 16,
+  large_square_4x4x8: 16,
+  round_4x4: 18,
+  round_4x5: 18,
+  round_5x5: 15,
+  round_5x6: 15,
+};
+
+export interface CautionInput {
+  forageClass: 'legume' | 'grass' | 'mixed';
+  baleType: BaleType;
+  moistureAtBalingPct: number | null;
+  storage: 'barn' | 'tarped' | 'outside';
+  nscFlag: 'within-advised-limit' | 'above-strict-limit' | 'above-upper-limit' | null;
+}
+
+/** The cautions that apply to a lot, most serious first. */
+export function lotCautions(lot: CautionInput): Caution[] {
+  const out: Caution[] = [];
+  const safe = SAFE_BALING_MOISTURE_PCT[lot.baleType];
+  if (lot.moistureAtBalingPct !== null && lot.moistureAtBalingPct > safe) {
+    out.push({
+      code: 'storage-moisture',
+      title: 'Baled wetter than safe storage moisture',
+      message:
+        `This lot was baled at ${lot.moistureAtBalingPct}% moisture, above the ${safe}% usually advised for this bale type. ` +
+        'Wet hay can heat, lose protein and catch fire in the stack. Check bale temperatures with a probe thermometer ' +
+        '(150 °F: check twice a day; 175 °F: call the fire service) and follow local fire guidance.',
+    });
+  }
+  if (lot.forageClass !== 'grass') {
+    out.push({
+      code: 'blister-beetles',
+      title: 'Blister beetles in alfalfa',
+      message:
+        'Alfalfa can carry blister beetles, whose toxin (cantharidin) can kill horses even in small numbers and stays in the hay ' +
+        'after the beetles are removed. Ask the grower how the hay was cut, inspect flakes before feeding, and talk to your veterinarian.',
+    });
+  }
+  if (lot.nscFlag === 'above-strict-limit' || lot.nscFlag === 'above-upper-limit') {
+    out.push({
+      code: 'high-nsc',
+      title: 'Sugar and starch above the usual limit for metabolic horses',
+      message:
+        'NSC above about 10–12% of dry matter is commonly advised against for horses with insulin dysregulation or a history of laminitis. ' +
+        'Ask your veterinarian or an equine nutritionist before feeding it to such horses.',
+    });
+  }
+  if (lot.storage === 'outside') {
+    out.push({
+      code: 'outside-storage',
+      title: 'Stored outside',
+      message: 'Hay stored uncovered loses dry matter and can mould on the outer layers. Inspect bales on delivery.',
+    });
+  }
+  out.push({
+    code: 'mould-dust',
+    title: 'Mould and dust',
+    message:
+      'A lab report does not show mould or dust. Mouldy or dusty hay can cause respiratory disease (heaves) and carry mycotoxins: ' +
+      'do not feed it to horses. Check each bale, and ask your veterinarian if in doubt.',
+  });
+  return out;
+}
