@@ -149,6 +149,10 @@ describe('sampling-findings', () => {
     });
   });
 
+  it('throws for a listing date that is not an ISO date', () => {
+    expect(() => evaluateSampling(good, { listedOn: 'next Tuesday' })).toThrow(RangeError);
+  });
+
   it('is non-compliant when any finding is an error and compliant with warnings only', () => {
     const warningsOnly = evaluateSampling({ ...good, corePosition: 'grab', harvestEndedOn: '2024-06-14' }, listing);
     expect(warningsOnly.findings.length).toBe(2);

@@ -14,14 +14,21 @@ import type { BaleShape, CorePosition, Finding, SamplingEvaluation, SamplingReco
  * Compliant = no error. Dates without a time are whole UTC days.
  */
 
+/** Fewest cores (one per bale) for a representative composite sample. */
 export const MIN_CORES = 20;
+/** Largest lot one sample may describe, short tons as fed (≤ 200 t; S21 states it on DM, so as-fed is the stricter reading). */
 export const MAX_LOT_TONS = 200;
+/** Longest harvest window for one lot, hours. */
 export const MAX_HARVEST_WINDOW_HOURS = 48;
+/** Smallest probe internal diameter, inches. */
 export const MIN_PROBE_DIAMETER_IN = 3 / 8;
-/** Upper end of the usual probe diameter range (from memory, NFTA). */
+/** Upper end of the usual probe diameter range, inches (from memory, NFTA). */
 export const USUAL_MAX_PROBE_DIAMETER_IN = 3 / 4;
+/** Shortest probe that can core 12 in deep, inches. */
 export const MIN_PROBE_LENGTH_IN = 12;
+/** Recommended minimum probe length, inches. */
 export const IDEAL_PROBE_LENGTH_IN = 14;
+/** Default oldest acceptable sample at listing, days (Baleproof policy). */
 export const DEFAULT_MAX_SAMPLE_AGE_DAYS = 180;
 /** Days after baling before DM settles (Teutsch 2020: 3–4 weeks). */
 export const SWEAT_PERIOD_DAYS = 21;
@@ -221,9 +228,13 @@ function dateFindings(record: SamplingRecord, options: SamplingOptions): Finding
 
 /**
  * Checks how a lot was sampled. `record` should already be parsed by `SamplingRecordSchema`.
- * Compliant when no finding is an error.
+ * Compliant when no finding is an error. Throws RangeError for an unparseable `listedOn`
+ * (a programming error: it comes from the server, not the user).
  */
 export function evaluateSampling(record: SamplingRecord, options: SamplingOptions): SamplingEvaluation {
+  if (Number.isNaN(startOf(options.listedOn))) {
+    throw new RangeError(`listedOn must be an ISO date or date-time, got "${options.listedOn}"`);
+  }
   const findings = [
     ...lotFindings(record),
     ...corePositionFindings(record.baleShape, record.corePosition),

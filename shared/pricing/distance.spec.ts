@@ -38,7 +38,8 @@ describe('haversineMiles', () => {
   it('obeys the triangle inequality (property)', () => {
     fc.assert(
       fc.property(point, point, point, (a, b, c) => {
-        expect(haversineMiles(a, c)).toBeLessThanOrEqual(haversineMiles(a, b) + haversineMiles(b, c) + 1e-6);
+        // asin(√x) loses precision near antipodal points (x → 1), so allow 0.001 mi of floating-point slack.
+        expect(haversineMiles(a, c)).toBeLessThanOrEqual(haversineMiles(a, b) + haversineMiles(b, c) + 1e-3);
       }),
     );
   });
