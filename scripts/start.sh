@@ -18,8 +18,9 @@ cleanup() {
 trap cleanup EXIT INT TERM
 
 if [ -z "${DATABASE_URL:-}" ]; then
+  # Stop the cluster at the end only if this script started it.
+  bash scripts/db.sh status >/dev/null 2>&1 || STARTED_PG=1
   bash scripts/db.sh start
-  STARTED_PG=1
   bash scripts/db.sh create baleproof
   export DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof"
 else

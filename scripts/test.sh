@@ -21,8 +21,9 @@ cleanup() {
 trap cleanup EXIT
 
 if [ -z "${TEST_DATABASE_URL:-}" ]; then
+  # Stop the cluster at the end only if this script started it.
+  bash scripts/db.sh status >/dev/null 2>&1 || STARTED_PG=1
   bash scripts/db.sh start
-  STARTED_PG=1
   bash scripts/db.sh recreate "baleproof_test${DB_SUFFIX:-}"
   bash scripts/db.sh recreate "baleproof_e2e${DB_SUFFIX:-}"
   export TEST_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_test${DB_SUFFIX:-}"
