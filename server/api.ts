@@ -14,6 +14,9 @@ import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
 import { adminRouter } from './features/admin/admin.router';
 import { forageRouter } from './features/forage/forage.router';
+import { lotCompareRouter } from './features/lots/lot-compare.router';
+import { plannerRouter } from './features/planner/planner.router';
+import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
 import type { Logger } from './logger';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -61,9 +64,12 @@ export function createApi(deps: ApiDeps): Express {
 
   api.use('/health', healthRouter(db));
   api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT }));
+  api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(db));
   api.use('/admin', adminRouter(db));
   api.use('/forage', forageRouter());
+  api.use('/planner', plannerRouter(db));
+  api.use('/saved-searches', savedSearchesRouter(db));
 
   api.use(apiNotFound);
   api.use(errorHandler(logger));

@@ -1,0 +1,98 @@
+import { and, asc, eq, isNotNull, lte, sql } from 'drizzle-orm';
+import type { z } from 'zod';
+import type { PlanCandidate, PlanPurchaseLine, PurchasePlanRequestSchema, PurchasePlanResponse } from '../../../shared/contracts/planner';
+import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '../../../shared/planner';
+import type { Db } from '../../db/client';
+import { farms, labAnalyses, lots } from '../../db/schema';
+import { farmDistanceSql } from '../lots/distance-sql';
+import { locateZip } from '../lots/lots.service';
+
+/** More candidates than this slows the whole-load search without changing realistic plans. */
+export const MAX_PLAN_CANDIDATES = 30;
+
+type PurchasePlanRequest = z.infer<typeof PurchasePlanRequestSchema>;
+
+/** Listed lots in stock, with a freight rate, that the grower delivers to the ZIP: nearest first. */
+export async function loadPlanCandidates(db: Db, zip: string, maxDistanceMi: number): Promise<{ origin: ReturnType<typeof locateZip>; candidates: PlanCandidate[] }> {
+  const origin = locateZip(zip);
+  const distance = farmDistanceSql(origin.latitude, origin.longitude);
+  const rows = await db
+    .select({
+      lotId: lots.id,
+      title: lots.title,
+      farmName: farms.name,
+      distanceMi: distance,
+      priceCentsPerTon: lots.priceCentsPerTon,
+      freightCentsPerLoadedMile: lots.freightCentsPerLoadedMile,
+      balesAvailable: lots.balesAvailable,
+      avgBaleWeightLb: lots.avgBaleWeightLb,
+      minOrderTons: lots.minOrderTons,
+      dryMatterPct: labAnalyses.dryMatterPct,
+      crudeProteinPct: labAnalyses.crudeProteinPct,
+      deMcalPerKgDm: labAnalyses.deMcalPerKgDm,
+    })
+    .from(lots)
+    .innerJoin(farms, eq(farms.id, lots.farmId))
+    .innerJoin(labAnalyses, and(eq(labAnalyses.lotId, lots.id), eq(labAnalyses.isCurrent, true)))
+    .where(
+      and(
+        eq(lots.status, 'listed'),
+        sql`${lots.balesAvailable} > 0`,
+        isNotNull(lots.freightCentsPerLoadedMile),
+        lte(distance, sql`least(${farms.deliveryRadiusMi}::float8, ${maxDistanceMi}::float8)`),
+      ),
+    )
+    .orderBy(asc(distance), asc(lots.id))
+    .limit(MAX_PLAN_CANDIDATES);
+  return {
+    origin,
+    candidates: rows.map((r) => ({
+      ...r,
+      distanceMi: Number(r.distanceMi),
+      freightCentsPerLoadedMile: r.freightCentsPerLoadedMile ?? 0,
+      tonsAvailable: (r.balesAvailable * r.avgBaleWeightLb) / 2000,
+    })),
+  };
+}
+
+/** The herd's needs, then the cheapest delivered mix of candidate lots that meets them. */
+export async function planPurchase(db: Db, request: PurchasePlanRequest): Promise<PurchasePlanResponse> {
+  const { lot: _ignored, ...herdRequest } = request.herd;
+  const herd = planHerdNeeds(herdRequest);
+  const { origin, candidates } = await loadPlanCandidates(db, request.zip, request.maxDistanceMi);
+  const { needs, wasteFraction } = needsFromHerdPlan(herd);
+  const key = (id: number) => `#${id}`; // reads as "lot #12" in the plan's sentences
+  const plan = leastCostPlan({
+    needs,
+    wasteFraction,
+    freightModel: request.freightModel,
+    lots: candidates.map((c) => ({
+      lotId: key(c.lotId),
+      pricePerTonCents: c.priceCentsPerTon,
+      freightCentsPerLoadedMile: c.freightCentsPerLoadedMile,
+      distanceMi: c.distanceMi,
+      tonsAvailable: c.tonsAvailable,
+      // A grower with less left than the minimum order sells the remainder.
+      minOrderTons: Math.min(c.minOrderTons, c.tonsAvailable),
+      dryMatterPct: c.dryMatterPct,
+      crudeProteinPctDm: c.crudeProteinPct,
+      deMcalPerKgDm: c.deMcalPerKgDm,
+    })),
+  });
+  const byKey = new Map(candidates.map((c) => [key(c.lotId), c]));
+  const lines: PlanPurchaseLine[] = plan.lines.map((line) => {
+    const c = byKey.get(line.lotId)!;
+    return {
+      lotId: c.lotId,
+      title: c.title,
+      farmName: c.farmName,
+      tons: line.tons,
+      bales: Math.min(c.balesAvailable, Math.ceil(Number(((line.tons * 2000) / c.avgBaleWeightLb).toPrecision(12)))),
+      loads: line.loads,
+      hayCents: line.hayCents,
+      freightCents: line.freightCents,
+      costCents: line.costCents,
+    };
+  });
+  return { origin: { zip: origin.zip, city: origin.city, state: origin.state }, herd, candidates, plan, lines };
+}

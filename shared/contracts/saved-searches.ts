@@ -1,0 +1,34 @@
+import { z } from 'zod';
+import { LotSearchSchema } from './lots';
+
+/** Parts of a catalogue URL that are not part of what the buyer is looking for. */
+const NOT_SAVED = ['page', 'pageSize'] as const;
+
+/**
+ * POST /api/saved-searches — a catalogue query as it appears in the URL (string values), with a name.
+ * The query must itself be a valid catalogue search; paging is dropped.
+ */
+export const SavedSearchCreateSchema = z
+  .object({
+    name: z.string().trim().min(1, 'Give the search a name.').max(80, 'Keep the name under 80 characters.'),
+    query: z
+      .record(z.string(), z.string().max(100))
+      .transform((q) => Object.fromEntries(Object.entries(q).filter(([k, v]) => v !== '' && !(NOT_SAVED as readonly string[]).includes(k)))),
+    alerts: z.boolean().default(true),
+  })
+  .strict()
+  .superRefine((input, ctx) => {
+    const parsed = LotSearchSchema.safeParse(input.query);
+    if (parsed.success) return;
+    for (const issue of parsed.error.issues) ctx.addIssue({ code: 'custom', path: ['query', ...issue.path.map(String)], message: issue.message });
+  });
+export type SavedSearchCreate = z.input<typeof SavedSearchCreateSchema>;
+
+export interface SavedSearchView {
+  id: number;
+  name: string;
+  query: Record<string, string>;
+  alerts: boolean;
+  lastAlertedAt: string | null;
+  createdAt: string;
+}
