@@ -4,7 +4,7 @@ SERVICE_PIDS=()
 
 wait_for_url() {
   local url="$1" name="$2"
-  for _ in $(seq 1 100); do
+  for _ in $(seq 1 150); do
     if curl -fsS -o /dev/null "$url" 2>/dev/null; then return 0; fi
     sleep 0.2
   done
@@ -14,13 +14,13 @@ wait_for_url() {
 start_fakes() {
   local logdir="$ROOT/.data/logs"
   mkdir -p "$logdir" "$ROOT/.data/mail"
-  if curl -fsS -o /dev/null "http://127.0.0.1:$MAILDEV_WEB_PORT/healthz" 2>/dev/null; then
+  if curl -fsS -o /dev/null "http://127.0.0.1:$MAILDEV_WEB_PORT/api/healthz" 2>/dev/null; then
     log "mail catcher already running on :$MAILDEV_WEB_PORT"
   else
-    node "$ROOT/node_modules/maildev/bin/maildev" --smtp "$SMTP_PORT" --web "$MAILDEV_WEB_PORT" \
+    node "$ROOT/node_modules/.bin/maildev" --smtp "$SMTP_PORT" --web "$MAILDEV_WEB_PORT" \
       --ip 127.0.0.1 --web-ip 127.0.0.1 --mail-directory "$ROOT/.data/mail" >"$logdir/maildev.log" 2>&1 &
     SERVICE_PIDS+=($!)
-    wait_for_url "http://127.0.0.1:$MAILDEV_WEB_PORT/healthz" "maildev"
+    wait_for_url "http://127.0.0.1:$MAILDEV_WEB_PORT/api/healthz" "maildev"
     log "mail catcher: smtp 127.0.0.1:$SMTP_PORT, inbox http://127.0.0.1:$MAILDEV_WEB_PORT"
   fi
   if curl -fsS -o /dev/null "http://127.0.0.1:$STRIPE_FAKE_PORT/health" 2>/dev/null; then
