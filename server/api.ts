@@ -54,7 +54,17 @@ export function createApi(deps: ApiDeps): Express {
   const api = express();
   api.disable('x-powered-by');
   api.set('trust proxy', 'loopback');
-  api.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/health' } }));
+  api.use(
+    pinoHttp({
+      logger,
+      autoLogging: { ignore: (req) => req.url === '/health' },
+      // Method, path and status are enough; headers (cookies!) and bodies are never logged.
+      serializers: {
+        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
   api.use(helmet());
   api.use(express.json({ limit: '200kb' }));
   api.use(createSessionMiddleware(deps));

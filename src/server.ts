@@ -9,6 +9,8 @@ import { join } from 'node:path';
 import { createApi } from '../server/api';
 import { createAppDeps } from '../server/app-deps';
 import { mediaRouter } from '../server/features/media/media.router';
+import { cookiesAreSecure } from '../server/env';
+import { csrfProtection } from '../server/middleware/csrf';
 
 const browserDistFolder = join(import.meta.dirname, '../browser');
 
@@ -19,6 +21,9 @@ const angularApp = new AngularNodeAppEngine();
 
 app.use('/api', createApi(deps));
 app.use('/media', mediaRouter(deps.storage));
+
+// Pages hand out the CSRF cookie too: a server-rendered page may make its first API call a POST.
+app.use(csrfProtection(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)));
 
 app.use(
   express.static(browserDistFolder, {
