@@ -14,6 +14,10 @@ import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
 import { adminRouter } from './features/admin/admin.router';
 import { forageRouter } from './features/forage/forage.router';
+import { farmsRouter } from './features/farms/farms.router';
+import { sellingRouter } from './features/selling/selling.router';
+import { uploadsRouter } from './features/uploads/uploads.router';
+import { reviewRouter } from './features/review/review.router';
 import { lotCompareRouter } from './features/lots/lot-compare.router';
 import { plannerRouter } from './features/planner/planner.router';
 import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
@@ -78,6 +82,10 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/lots', lotsRouter(db));
   api.use('/admin', adminRouter(db));
   api.use('/forage', forageRouter());
+  api.use('/farms', farmsRouter(deps));
+  api.use('/selling', sellingRouter(deps));
+  api.use('/uploads', uploadsRouter(deps));
+  api.use('/review', reviewRouter(deps));
   api.use('/planner', plannerRouter(db));
   api.use('/saved-searches', savedSearchesRouter(db));
 

@@ -16,7 +16,8 @@ export function createStripeFake() {
 
   app.use(express.urlencoded({ extended: true }));
   app.use((req, res, next) => {
-    if (req.path === '/health') return next();
+    // The onboarding page is visited by the grower's browser, which holds no API key.
+    if (req.path === '/health' || req.path.startsWith('/fake/onboard/')) return next();
     const auth = req.get('authorization') ?? '';
     if (!auth.startsWith('Bearer sk_')) return fail(res, 401, 'invalid_request_error', 'Invalid API Key provided.');
     next();

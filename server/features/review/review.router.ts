@@ -1,0 +1,39 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { ReturnLotSchema } from '../../../shared/contracts/selling';
+import type { ApiDeps } from '../../api';
+import { requireRole } from '../../middleware/require-role';
+import { ReviewService } from './review.service';
+
+const LotParams = z.object({ id: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
+
+/** Admin verification of submitted lots. */
+export function reviewRouter(deps: ApiDeps): Router {
+  const service = new ReviewService(deps);
+  const router = Router();
+  router.use(requireRole('admin'));
+
+  router.get('/queue', async (_req, res) => {
+    res.json({ items: await service.queue() });
+  });
+
+  router.get('/lots/:id', async (req, res) => {
+    const { id } = LotParams.parse(req.params);
+    res.json(await service.lot(id));
+  });
+
+  router.post('/lots/:id/approve', async (req, res) => {
+    const { id } = LotParams.parse(req.params);
+    await service.approve(req.user!, id);
+    res.json(await service.lot(id));
+  });
+
+  router.post('/lots/:id/return', async (req, res) => {
+    const { id } = LotParams.parse(req.params);
+    const { reason } = ReturnLotSchema.parse(req.body);
+    await service.returnToGrower(req.user!, id, reason);
+    res.json(await service.lot(id));
+  });
+
+  return router;
+}

@@ -1,0 +1,97 @@
+import { and, asc, desc, eq, sql } from 'drizzle-orm';
+import type { ReviewLotView, ReviewQueueRow } from '../../../shared/contracts/selling';
+import type { ApiDeps } from '../../api';
+import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
+import { conflict } from '../../middleware/http-error';
+import { findLotWithFarm } from '../selling/lot-access';
+import { editableLot } from '../selling/lot-view';
+import { onLotApproved } from './lot-approved';
+import { approvedMail, returnedMail } from './review-mail';
+
+/** The admin's verification desk: the queue, one lot with its report, approve or return. */
+export class ReviewService {
+  constructor(private readonly deps: ApiDeps) {}
+
+  async queue(): Promise<ReviewQueueRow[]> {
+    const { db } = this.deps;
+    const rows = await db
+      .select({
+        id: lots.id,
+        title: lots.title,
+        farmName: farms.name,
+        growerEmail: users.email,
+        submittedAt: lots.updatedAt,
+        labName: labAnalyses.labName,
+        labCertified: labAnalyses.labCertified,
+        errorFindings: sql<number>`coalesce((select count(*) from jsonb_array_elements(${labAnalyses.findings}) f where f->>'severity' = 'error'), 0)`.mapWith(Number),
+        warningFindings: sql<number>`coalesce((select count(*) from jsonb_array_elements(${labAnalyses.findings}) f where f->>'severity' = 'warning'), 0)`.mapWith(Number),
+      })
+      .from(lots)
+      .innerJoin(farms, eq(farms.id, lots.farmId))
+      .innerJoin(users, eq(users.id, farms.ownerId))
+      .leftJoin(labAnalyses, and(eq(labAnalyses.lotId, lots.id), eq(labAnalyses.isCurrent, true)))
+      .where(eq(lots.status, 'in_review'))
+      .orderBy(asc(lots.updatedAt), asc(lots.id));
+    return rows.map((r) => ({ ...r, submittedAt: r.submittedAt.toISOString() }));
+  }
+
+  async lot(lotId: number): Promise<ReviewLotView> {
+    const { db } = this.deps;
+    const { farm } = await findLotWithFarm(db, lotId);
+    const [owner] = await db.select({ email: users.email }).from(users).where(eq(users.id, farm.ownerId));
+    const history = await db
+      .select({ action: auditEvents.action, at: auditEvents.createdAt, data: auditEvents.data })
+      .from(auditEvents)
+      .where(and(eq(auditEvents.entityType, 'lot'), eq(auditEvents.entityId, String(lotId))))
+      .orderBy(desc(auditEvents.createdAt))
+      .limit(50);
+    return {
+      lot: await editableLot(db, lotId),
+      farm: { name: farm.name, city: farm.city, state: farm.state, growerEmail: owner?.email ?? '', payoutsReady: farm.payoutsEnabled },
+      history: history.map((h) => ({ action: h.action, at: h.at.toISOString(), note: (h.data as { reason?: string }).reason ?? null })),
+    };
+  }
+
+  async approve(admin: Express.User, lotId: number): Promise<void> {
+    const { db, mailer, env, logger } = this.deps;
+    const { lot, farm } = await findLotWithFarm(db, lotId);
+    if (lot.status !== 'in_review') throw conflict('not_in_review', 'Only lots waiting for review can be approved.');
+    const view = await editableLot(db, lotId);
+    if (view.missing.length > 0) throw conflict('lot_incomplete', `This lot still lacks ${view.missing.join(', ')}.`);
+    const now = new Date();
+    await db.transaction(async (tx) => {
+      await tx
+        .update(lots)
+        .set({ status: lot.balesAvailable > 0 ? 'listed' : 'sold_out', publishedAt: lot.publishedAt ?? now, reviewedBy: admin.id, reviewedAt: now, reviewNote: null, updatedAt: now })
+        .where(eq(lots.id, lotId));
+      await tx
+        .update(labAnalyses)
+        .set({ verification: 'verified', verifiedBy: admin.id, verifiedAt: now })
+        .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+      await tx.insert(auditEvents).values({ actorId: admin.id, action: 'lot.approved', entityType: 'lot', entityId: String(lotId), data: { title: lot.title } });
+    });
+    await this.mailGrower(farm.ownerId, (to) => approvedMail(to, lot, env.PUBLIC_URL)).catch((err) => logger.error({ err, lotId }, 'approval e-mail failed'));
+    await onLotApproved(this.deps, lotId);
+  }
+
+  async returnToGrower(admin: Express.User, lotId: number, reason: string): Promise<void> {
+    const { db, env, logger } = this.deps;
+    const { lot, farm } = await findLotWithFarm(db, lotId);
+    if (lot.status !== 'in_review') throw conflict('not_in_review', 'Only lots waiting for review can be returned.');
+    const now = new Date();
+    await db.transaction(async (tx) => {
+      await tx.update(lots).set({ status: 'returned', reviewNote: reason, reviewedBy: admin.id, reviewedAt: now, updatedAt: now }).where(eq(lots.id, lotId));
+      await tx
+        .update(labAnalyses)
+        .set({ verification: 'rejected', verifiedBy: admin.id, verifiedAt: now })
+        .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+      await tx.insert(auditEvents).values({ actorId: admin.id, action: 'lot.returned', entityType: 'lot', entityId: String(lotId), data: { reason } });
+    });
+    await this.mailGrower(farm.ownerId, (to) => returnedMail(to, lot, reason, env.PUBLIC_URL)).catch((err) => logger.error({ err, lotId }, 'return e-mail failed'));
+  }
+
+  private async mailGrower(ownerId: number, make: (to: string) => Parameters<ApiDeps['mailer']['send']>[0]): Promise<void> {
+    const [owner] = await this.deps.db.select({ email: users.email }).from(users).where(eq(users.id, ownerId));
+    if (owner) await this.deps.mailer.send(make(owner.email));
+  }
+}

@@ -1,0 +1,41 @@
+import { BASIS_DEPENDENT_FIELDS, evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '../../../shared/forage';
+import type { labAnalyses } from '../../db/schema';
+
+type AnalysisRow = typeof labAnalyses.$inferSelect;
+const OPTIONAL = ['ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'reportedRfv'] as const;
+
+/** The stored (dry-matter) analysis as an engine request on the DM basis. */
+export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationRequest['forageClass']): ForageEvaluationRequest {
+  const request: ForageEvaluationRequest = {
+    forageClass,
+    basis: 'dm',
+    dryMatterPct: row.dryMatterPct,
+    crudeProteinPct: row.crudeProteinPct,
+    adfPct: row.adfPct,
+    ndfPct: row.ndfPct,
+  };
+  for (const field of OPTIONAL) {
+    const value = row[field];
+    if (value !== null) request[field] = value;
+  }
+  return request;
+}
+
+/** The values as the grower typed them: DM figures turned back to as-fed when that was the basis. */
+export function enteredValuesOf(row: AnalysisRow): Record<string, number | string> {
+  const out: Record<string, number | string> = { basis: row.enteredBasis, dryMatterPct: row.dryMatterPct };
+  const dependent = new Set<string>(BASIS_DEPENDENT_FIELDS);
+  for (const field of ['crudeProteinPct', 'adfPct', 'ndfPct', ...OPTIONAL] as const) {
+    const value = row[field];
+    if (value === null) continue;
+    const asEntered = row.enteredBasis === 'asFed' && dependent.has(field) ? (value * row.dryMatterPct) / 100 : value;
+    out[field] = Math.round(asEntered * 1000) / 1000;
+  }
+  return out;
+}
+
+/** The engine's figures for a stored analysis, with the findings saved when it was entered. */
+export function evaluationOf(row: AnalysisRow, forageClass: ForageEvaluationRequest['forageClass']): ForageEvaluation {
+  const evaluation = evaluateForage(dmRequestOf(row, forageClass));
+  return { ...evaluation, findings: row.findings as ForageEvaluation['findings'] };
+}

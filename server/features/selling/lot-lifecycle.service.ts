@@ -1,0 +1,112 @@
+import { and, desc, eq, sql } from 'drizzle-orm';
+import type { SellerLotRow } from '../../../shared/contracts/selling';
+import { stepIndex } from '../../../shared/contracts/selling';
+import type { Db } from '../../db/client';
+import { auditEvents, farms, labAnalyses, lots, orders } from '../../db/schema';
+import { conflict, HttpError } from '../../middleware/http-error';
+import { LotsService } from '../lots/lots.service';
+import { farmOf, ownedLot } from './lot-access';
+import { editableLot } from './lot-view';
+
+/** Submitting, withdrawing, relisting and copying lots, and the grower's list of them. */
+export class LotLifecycleService {
+  constructor(private readonly db: Db) {}
+
+  async submit(user: Express.User, lotId: number): Promise<void> {
+    const { lot } = await ownedLot(this.db, lotId, user);
+    if (lot.status !== 'draft' && lot.status !== 'returned') {
+      throw conflict('not_submittable', lot.status === 'in_review' ? 'This lot is already waiting for review.' : 'Only drafts and returned lots can be submitted.');
+    }
+    const view = await editableLot(this.db, lotId);
+    if (view.missing.length > 0) {
+      throw new HttpError(400, 'lot_incomplete', `Before submitting, add ${view.missing.join(', ')}.`, view.missing.map((m) => ({ path: 'lot', message: m })));
+    }
+    await this.db.transaction(async (tx) => {
+      await tx.update(lots).set({ status: 'in_review', reviewNote: null, updatedAt: new Date() }).where(eq(lots.id, lotId));
+      await tx.update(labAnalyses).set({ verification: 'pending' }).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true), eq(labAnalyses.verification, 'rejected')));
+      await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.submitted', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
+    });
+  }
+
+  /** Takes a lot off sale (or out of the queue); nothing is deleted. */
+  async withdraw(user: Express.User, lotId: number): Promise<void> {
+    const { lot } = await ownedLot(this.db, lotId, user);
+    if (!['listed', 'sold_out', 'in_review'].includes(lot.status)) throw conflict('not_withdrawable', 'Only listed lots or lots in review can be withdrawn.');
+    await this.db.transaction(async (tx) => {
+      await tx.update(lots).set({ status: 'withdrawn', updatedAt: new Date() }).where(eq(lots.id, lotId));
+      await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.withdrawn', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
+    });
+  }
+
+  /** Back on sale at once when the current analysis is still verified; otherwise back to review. */
+  async relist(user: Express.User, lotId: number): Promise<'listed' | 'in_review'> {
+    const { lot } = await ownedLot(this.db, lotId, user);
+    if (lot.status !== 'withdrawn') throw conflict('not_relistable', 'Only withdrawn lots can be relisted.');
+    const [analysis] = await this.db.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+    const next = analysis?.verification === 'verified' && lot.publishedAt ? (lot.balesAvailable > 0 ? 'listed' : 'sold_out') : 'in_review';
+    await this.db.transaction(async (tx) => {
+      await tx.update(lots).set({ status: next, updatedAt: new Date() }).where(eq(lots.id, lotId));
+      await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.relisted', entityType: 'lot', entityId: String(lotId), data: { to: next } });
+    });
+    return next === 'sold_out' ? 'listed' : next;
+  }
+
+  /**
+   * A new draft for the next cutting of the same field: the lot, quantity and price carry over; the
+   * sampling, analysis and photos do not (they belong to the hay that was tested).
+   */
+  async copyForNextCutting(user: Express.User, lotId: number): Promise<number> {
+    const { lot } = await ownedLot(this.db, lotId, user);
+    const cutting = Math.min(8, lot.cutting + 1);
+    const {
+      id: _id, status: _s, draftStep: _d, reviewNote: _rn, reviewedBy: _rb, reviewedAt: _ra, publishedAt: _p, viewCount: _v, createdAt: _c, updatedAt: _u, copiedFromId: _cf,
+      ...rest
+    } = lot;
+    const [row] = await this.db
+      .insert(lots)
+      .values({
+        ...rest,
+        cutting,
+        title: lot.title.replace(/\b\d+(st|nd|rd|th) cutting\b/, `${cutting}${cutting === 2 ? 'nd' : cutting === 3 ? 'rd' : 'th'} cutting`),
+        balesAvailable: lot.baleCount,
+        status: 'draft',
+        // The lot and quantity carry over; sampling and analysis must be entered for the new hay.
+        draftStep: Math.min(lot.draftStep, stepIndex('quantity')),
+        copiedFromId: lot.id,
+      })
+      .returning({ id: lots.id });
+    return row!.id;
+  }
+
+  async myLots(user: Express.User): Promise<SellerLotRow[]> {
+    const farm = await farmOf(this.db, user.id).catch(() => null);
+    if (!farm) return [];
+    const rows = await this.db
+      .select({
+        id: lots.id,
+        title: lots.title,
+        status: lots.status,
+        draftStep: lots.draftStep,
+        reviewNote: lots.reviewNote,
+        baleType: lots.baleType,
+        baleCount: lots.baleCount,
+        balesAvailable: lots.balesAvailable,
+        avgBaleWeightLb: lots.avgBaleWeightLb,
+        priceCentsPerTon: lots.priceCentsPerTon,
+        viewCount: lots.viewCount,
+        orderCount: sql<number>`(select count(*) from ${orders} where ${orders.lotId} = ${lots.id} and ${orders.status} <> 'cancelled')`.mapWith(Number),
+        updatedAt: lots.updatedAt,
+      })
+      .from(lots)
+      .innerJoin(farms, eq(farms.id, lots.farmId))
+      .where(eq(farms.ownerId, user.id))
+      .orderBy(desc(lots.updatedAt), desc(lots.id));
+    const covers = await new LotsService(this.db).coversFor(rows.map((r) => r.id));
+    return rows.map(({ avgBaleWeightLb, updatedAt, ...r }) => ({
+      ...r,
+      tonsAvailable: (r.balesAvailable * avgBaleWeightLb) / 2000,
+      cover: covers.get(r.id) ?? null,
+      updatedAt: updatedAt.toISOString(),
+    }));
+  }
+}

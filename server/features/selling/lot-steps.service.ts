@@ -1,0 +1,275 @@
+import { and, eq, sql } from 'drizzle-orm';
+import {
+  AnalysisStepSchema,
+  centsPerTonFromBale,
+  defaultLotTitle,
+  deriveQuantity,
+  FORAGE_CLASS_OF,
+  LotStepSchema,
+  parseAnalysisValues,
+  PriceStepSchema,
+  QuantityStepSchema,
+  SamplingStepSchema,
+  samplingShapeOf,
+  stepIndex,
+  type LotFormStep,
+} from '../../../shared/contracts/selling';
+import { evaluateSampling } from '../../../shared/forage';
+import type { Db } from '../../db/client';
+import { labAnalyses, lots, samplingRecords } from '../../db/schema';
+import { HttpError } from '../../middleware/http-error';
+import { analysisColumns } from '../lots/analysis-record';
+import { dmRequestOf } from './analysis-values';
+import { farmOf, ownedLot, type LotRow } from './lot-access';
+
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
+
+/**
+ * The lot form's writes, one per step. Rules:
+ * - steps are saved in order (a step needs the one before it), so columns of unsaved steps never show;
+ * - a draft row holds neutral placeholders for quantity and price until those steps are saved;
+ * - on a lot whose analysis was verified, changing what the analysis describes (the lot, its sampling,
+ *   its analysis or report) sends it back to review; stock, price and photos do not.
+ */
+export class LotStepsService {
+  constructor(private readonly db: Db) {}
+
+  /** Starts a draft from the first step. */
+  async create(user: Express.User, body: unknown): Promise<number> {
+    const input = LotStepSchema.parse(body);
+    const farm = await farmOf(this.db, user.id);
+    const [row] = await this.db
+      .insert(lots)
+      .values({
+        farmId: farm.id,
+        ...this.lotColumns(input),
+        // Placeholders until the quantity and price steps are saved (draftStep says they are not).
+        baleType: 'small_square_2_string',
+        baleCount: 1,
+        balesAvailable: 0,
+        avgBaleWeightLb: 60,
+        priceCentsPerTon: 1,
+        status: 'draft',
+        draftStep: stepIndex('lot'),
+      })
+      .returning({ id: lots.id });
+    return row!.id;
+  }
+
+  async saveLot(user: Express.User, lotId: number, body: unknown): Promise<void> {
+    const input = LotStepSchema.parse(body);
+    const { lot } = await this.editable(user, lotId, 'lot');
+    const columns = this.lotColumns(input);
+    const identityChanged =
+      columns.fieldName !== lot.fieldName ||
+      columns.cutting !== lot.cutting ||
+      columns.forageType !== lot.forageType ||
+      columns.harvestStartedOn !== lot.harvestStartedOn ||
+      columns.harvestEndedOn !== lot.harvestEndedOn;
+    await this.db.transaction(async (tx) => {
+      await tx.update(lots).set({ ...columns, ...this.progress(lot, 'lot') }).where(eq(lots.id, lotId));
+      if (columns.forageClass !== lot.forageClass) await this.reevaluate(tx, lotId, columns.forageClass);
+      if (identityChanged) await this.backToReview(tx, lot);
+    });
+  }
+
+  async saveQuantity(user: Express.User, lotId: number, body: unknown): Promise<void> {
+    const input = QuantityStepSchema.parse(body);
+    const { lot } = await this.editable(user, lotId, 'quantity');
+    const q = deriveQuantity(input)!;
+    const firstTime = lot.draftStep < stepIndex('quantity');
+    const sold = firstTime ? 0 : lot.baleCount - lot.balesAvailable;
+    const balesAvailable = input.balesAvailable ?? Math.max(0, q.baleCount - sold);
+    const perTon = lot.pricingUnit === 'bale' && lot.priceCentsPerBale !== null ? centsPerTonFromBale(lot.priceCentsPerBale, q.avgBaleWeightLb) : lot.priceCentsPerTon;
+    await this.db.transaction(async (tx) => {
+      await tx
+        .update(lots)
+        .set({
+          baleType: input.baleType,
+          baleCount: q.baleCount,
+          avgBaleWeightLb: Math.round(q.avgBaleWeightLb * 10) / 10,
+          balesAvailable,
+          priceCentsPerTon: perTon,
+          status: lot.status === 'sold_out' && balesAvailable > 0 ? 'listed' : lot.status === 'listed' && balesAvailable === 0 ? 'sold_out' : lot.status,
+          ...this.progress(lot, 'quantity'),
+        })
+        .where(eq(lots.id, lotId));
+      // The sampling verdict depends on the bale shape and lot size.
+      await this.recheckSampling(tx, lotId);
+    });
+  }
+
+  async saveSampling(user: Express.User, lotId: number, body: unknown): Promise<void> {
+    const input = SamplingStepSchema.parse(body);
+    const { lot } = await this.editable(user, lotId, 'sampling');
+    const verdict = evaluateSampling(
+      {
+        ...input,
+        baleShape: samplingShapeOf(lot.baleType),
+        harvestStartedOn: lot.harvestStartedOn,
+        harvestEndedOn: lot.harvestEndedOn,
+        lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
+      },
+      { listedOn: new Date().toISOString() },
+    );
+    await this.db.transaction(async (tx) => {
+      const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: new Date() };
+      await tx.insert(samplingRecords).values({ lotId, ...values }).onConflictDoUpdate({ target: samplingRecords.lotId, set: values });
+      await tx.update(lots).set(this.progress(lot, 'sampling')).where(eq(lots.id, lotId));
+      await this.backToReview(tx, lot);
+    });
+  }
+
+  async saveAnalysis(user: Express.User, lotId: number, body: unknown): Promise<void> {
+    const input = AnalysisStepSchema.parse(body);
+    const { lot } = await this.editable(user, lotId, 'analysis');
+    const request = parseAnalysisValues(input.values, lot.forageClass);
+    const { columns, evaluation } = analysisColumns(request);
+    const errors = evaluation.findings.filter((f) => f.severity === 'error');
+    if (errors.length > 0) {
+      throw new HttpError(400, 'analysis_inconsistent', errors[0]!.message, errors.map((f) => ({ path: `values.${pathOfFinding(f.code)}`, message: f.message, code: f.code })));
+    }
+    const lab = { labName: input.labName, labCertified: input.labCertified, reportNumber: input.reportNumber, reportDate: input.reportDate, method: input.method };
+    await this.db.transaction(async (tx) => {
+      await this.writeAnalysis(tx, lot, { ...lab, ...columns });
+      await tx.update(lots).set(this.progress(lot, 'analysis')).where(eq(lots.id, lotId));
+    });
+  }
+
+  /** Links an uploaded lab report (already stored) to the lot's current analysis, inside the caller's transaction. */
+  async attachReport(tx: Tx, lot: LotRow, fileId: number): Promise<void> {
+    const [current] = await tx.select({ id: labAnalyses.id }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lot.id), eq(labAnalyses.isCurrent, true)));
+    if (!current) throw new HttpError(409, 'analysis_required', 'Save the lab analysis values first, then attach the report PDF.');
+    await this.writeAnalysis(tx, lot, { reportFileId: fileId });
+    await tx.update(lots).set({ updatedAt: new Date() }).where(eq(lots.id, lot.id));
+  }
+
+  async savePhotosStep(user: Express.User, lotId: number): Promise<void> {
+    const { lot } = await this.editable(user, lotId, 'photos');
+    await this.db.update(lots).set(this.progress(lot, 'photos')).where(eq(lots.id, lotId));
+  }
+
+  async savePrice(user: Express.User, lotId: number, body: unknown): Promise<void> {
+    const input = PriceStepSchema.parse(body);
+    const { lot } = await this.editable(user, lotId, 'price');
+    const perTon = input.pricingUnit === 'bale' ? centsPerTonFromBale(input.priceCentsPerBale!, lot.avgBaleWeightLb) : input.priceCentsPerTon!;
+    await this.db
+      .update(lots)
+      .set({
+        pricingUnit: input.pricingUnit,
+        priceCentsPerTon: perTon,
+        priceCentsPerBale: input.pricingUnit === 'bale' ? input.priceCentsPerBale : null,
+        minOrderTons: input.minOrderTons,
+        deliveryTerms: input.deliveryTerms,
+        freightCentsPerLoadedMile: input.freightCentsPerLoadedMile,
+        pickupAllowed: input.pickupAllowed,
+        ...this.progress(lot, 'price'),
+      })
+      .where(eq(lots.id, lotId));
+  }
+
+  /** The owner's lot, when the step before `step` has been saved. */
+  async editable(user: Express.User, lotId: number, step: LotFormStep) {
+    const found = await ownedLot(this.db, lotId, user);
+    const need = stepIndex(step) - 1;
+    if (found.lot.draftStep < need) {
+      throw new HttpError(409, 'step_out_of_order', 'Save the earlier steps of the lot form first.', { draftStep: found.lot.draftStep });
+    }
+    return found;
+  }
+
+  private lotColumns(input: ReturnType<typeof LotStepSchema.parse>) {
+    return {
+      title: input.title || defaultLotTitle(input),
+      fieldName: input.fieldName,
+      cutting: input.cutting,
+      forageType: input.forageType,
+      forageClass: FORAGE_CLASS_OF[input.forageType],
+      mixDescription: input.mixDescription,
+      harvestStartedOn: input.harvestStartedOn,
+      harvestEndedOn: input.harvestEndedOn,
+      storage: input.storage,
+      moistureAtBalingPct: input.moistureAtBalingPct,
+      description: input.description,
+    };
+  }
+
+  private progress(lot: LotRow, step: LotFormStep) {
+    return { draftStep: Math.max(lot.draftStep, stepIndex(step)), updatedAt: new Date() };
+  }
+
+  /**
+   * Writes analysis columns. An analysis an admin has verified is never changed in place: a new current
+   * version is written (the verified one is kept), and the lot goes back to review.
+   */
+  private async writeAnalysis(tx: Tx, lot: LotRow, values: Partial<typeof labAnalyses.$inferInsert>): Promise<void> {
+    const [current] = await tx.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, lot.id), eq(labAnalyses.isCurrent, true)));
+    if (!current) {
+      await tx.insert(labAnalyses).values({ ...(values as typeof labAnalyses.$inferInsert), lotId: lot.id });
+      return;
+    }
+    if (current.verification !== 'verified') {
+      await tx.update(labAnalyses).set({ ...values, verification: 'pending', verifiedBy: null, verifiedAt: null }).where(eq(labAnalyses.id, current.id));
+      return;
+    }
+    const { id: _id, createdAt: _c, lotId: _l, ...previous } = current;
+    await tx.update(labAnalyses).set({ isCurrent: false }).where(eq(labAnalyses.id, current.id));
+    await tx.insert(labAnalyses).values({ ...previous, ...values, lotId: lot.id, isCurrent: true, verification: 'pending', verifiedBy: null, verifiedAt: null });
+    await this.backToReview(tx, lot);
+  }
+
+  /** A lot that buyers can see (or could relist) goes back to the review queue; its analysis needs checking again. */
+  private async backToReview(tx: Tx, lot: LotRow): Promise<void> {
+    if (lot.status === 'listed' || lot.status === 'sold_out') {
+      await tx.update(lots).set({ status: 'in_review', updatedAt: new Date() }).where(eq(lots.id, lot.id));
+    }
+    if (lot.status === 'listed' || lot.status === 'sold_out' || lot.status === 'withdrawn') {
+      await tx
+        .update(labAnalyses)
+        .set({ verification: 'pending', verifiedBy: null, verifiedAt: null })
+        .where(and(eq(labAnalyses.lotId, lot.id), eq(labAnalyses.isCurrent, true), eq(labAnalyses.verification, 'verified')));
+    }
+  }
+
+  private async reevaluate(tx: Tx, lotId: number, forageClass: LotRow['forageClass']): Promise<void> {
+    const [current] = await tx.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+    if (!current) return;
+    const { columns } = analysisColumns(dmRequestOf(current, forageClass));
+    await tx.update(labAnalyses).set({ ...columns, enteredBasis: current.enteredBasis }).where(eq(labAnalyses.id, current.id));
+  }
+
+  private async recheckSampling(tx: Tx, lotId: number): Promise<void> {
+    const [row] = await tx
+      .select({ s: samplingRecords, lot: lots })
+      .from(samplingRecords)
+      .innerJoin(lots, eq(lots.id, samplingRecords.lotId))
+      .where(eq(samplingRecords.lotId, lotId));
+    if (!row) return;
+    const { s, lot } = row;
+    const verdict = evaluateSampling(
+      {
+        sampledOn: s.sampledOn,
+        coresTaken: s.coresTaken,
+        balesSampled: s.balesSampled,
+        probeDiameterIn: s.probeDiameterIn,
+        probeLengthIn: s.probeLengthIn,
+        corePosition: s.corePosition,
+        sampledBy: s.sampledBy,
+        baleShape: samplingShapeOf(lot.baleType),
+        harvestStartedOn: lot.harvestStartedOn,
+        harvestEndedOn: lot.harvestEndedOn,
+        lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
+      },
+      { listedOn: new Date().toISOString() },
+    );
+    await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: sql`now()` }).where(eq(samplingRecords.id, s.id));
+  }
+}
+
+/** The form field an engine finding is about, so the UI can show it in place. */
+function pathOfFinding(code: string): string {
+  if (code === 'ndf-below-adf') return 'adfPct';
+  if (code === 'dm-moisture-mismatch') return 'moisturePct';
+  if (code === 'cp-ndf-fat-ash-over-100' || code === 'nfc-negative') return 'crudeProteinPct';
+  return 'dryMatterPct';
+}

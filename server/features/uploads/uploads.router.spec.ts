@@ -1,0 +1,204 @@
+import { eq } from 'drizzle-orm';
+import sharp from 'sharp';
+import type { FileStorage } from '../../adapters/storage/file-storage';
+import { createApi } from '../../api';
+import { photos, storedFiles } from '../../db/schema';
+import { csrfAgent, startTestApi, type TestApi } from '../../../tests/support/test-api';
+import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, makePdf, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { PDF_MAX_BYTES, PHOTO_MAX_BYTES } from './upload-limits';
+
+describe('uploads API', () => {
+  let t: TestApi;
+  let grower: Awaited<ReturnType<typeof signedInGrower>>;
+  let lotId: number;
+
+  beforeAll(async () => {
+    t = await startTestApi();
+    grower = await signedInGrower(t);
+    const created = await grower.agent.post('/selling/lots', LOT_STEP);
+    lotId = created.body.id;
+    await grower.agent.put(`/selling/lots/${lotId}/quantity`, QUANTITY_STEP);
+    await grower.agent.put(`/selling/lots/${lotId}/sampling`, SAMPLING_STEP);
+    await grower.agent.put(`/selling/lots/${lotId}/analysis`, ANALYSIS_STEP);
+  });
+  afterAll(() => t.close());
+
+  const upload = async (field: 'photos' | 'report', files: { data: Buffer; name: string }[], agent = grower.agent, id = lotId) => {
+    const token = await agent.token();
+    let req = agent.raw.post(`/uploads/lots/${id}/${field === 'photos' ? 'photos' : 'report'}`).set('X-XSRF-TOKEN', token);
+    for (const f of files) req = req.attach(field, f.data, f.name);
+    return req;
+  };
+  const photoCount = async () => (await t.deps.db.select().from(photos).where(eq(photos.lotId, lotId))).length;
+
+  it('stores a photo as WebP variants 320/800/1600, upright and without EXIF, and keeps the original', async () => {
+    const jpeg = await makeJpeg(2400, 1600);
+    const res = await upload('photos', [{ data: jpeg, name: 'barn.jpg' }]);
+    expect(res.status).toBe(201);
+    const [photo] = res.body.photos;
+    expect(photo.variants.map((v: { width: number }) => v.width)).toEqual([320, 800, 1600]);
+    // EXIF orientation 6 means "rotate 90°": the stored photo is portrait.
+    expect(photo.width).toBe(1600);
+    expect(photo.height).toBe(2400);
+    expect(photo.isCover).toBe(true);
+    const key = photo.variants[1].url.replace('/media/', '');
+    const variant = await t.deps.storage.read(key);
+    const bytes = await streamToBuffer(variant!.stream);
+    const meta = await sharp(bytes).metadata();
+    expect(meta.format).toBe('webp');
+    expect(meta.exif).toBeUndefined();
+    const [row] = await t.deps.db.select().from(photos).where(eq(photos.id, photo.id));
+    const [original] = await t.deps.db.select().from(storedFiles).where(eq(storedFiles.id, row!.originalFileId!));
+    expect(original).toMatchObject({ mimeType: 'image/jpeg', sizeBytes: jpeg.length, originalName: 'barn.jpg' });
+  });
+
+  it('rejects a photo over the size limit with 413 and a clear message', async () => {
+    const big = Buffer.alloc(PHOTO_MAX_BYTES + 1024, 1);
+    const res = await upload('photos', [{ data: big, name: 'huge.jpg' }]);
+    expect(res.status).toBe(413);
+    expect(res.body.error).toMatchObject({ code: 'file_too_large' });
+    expect(res.body.error.message).toMatch(/15 MB/);
+  });
+
+  it('rejects a PDF over its size limit with 413', async () => {
+    const big = Buffer.concat([Buffer.from('%PDF-1.4\n'), Buffer.alloc(PDF_MAX_BYTES, 32), Buffer.from('\n%%EOF\n')]);
+    const res = await upload('report', [{ data: big, name: 'report.pdf' }]);
+    expect(res.status).toBe(413);
+    expect(res.body.error.message).toMatch(/10 MB/);
+  });
+
+  it('decides the type by content: a text file renamed .jpg is refused', async () => {
+    const before = await photoCount();
+    const res = await upload('photos', [{ data: Buffer.from('these are not the pixels you are looking for\n'.repeat(20)), name: 'bales.jpg' }]);
+    expect(res.status).toBe(400);
+    expect(res.body.error).toMatchObject({ code: 'not_an_image' });
+    expect(res.body.error.message).toContain('bales.jpg');
+    expect(await photoCount()).toBe(before);
+  });
+
+  it('refuses a "PDF" that is not one, and a PDF that is cut short', async () => {
+    const fake = await upload('report', [{ data: Buffer.from('Lab results: CP 21, ADF 29\n'), name: 'report.pdf' }]);
+    expect(fake.status).toBe(400);
+    expect(fake.body.error.code).toBe('not_a_pdf');
+    const jpegAsPdf = await upload('report', [{ data: await makeJpeg(200, 100), name: 'scan.pdf' }]);
+    expect(jpegAsPdf.body.error.code).toBe('not_a_pdf');
+    const full = makePdf();
+    const truncated = await upload('report', [{ data: full.subarray(0, full.length - 40), name: 'report.pdf' }]);
+    expect(truncated.status).toBe(400);
+  });
+
+  it('refuses an image over the pixel limit before decoding it (decompression bomb)', async () => {
+    // 8,000 × 7,000 = 56 megapixels of one colour: a small PNG that would need ~170 MB to decode.
+    const bomb = await sharp({ create: { width: 8000, height: 7000, channels: 3, background: '#7a6' } }).png({ compressionLevel: 9 }).toBuffer();
+    expect(bomb.length).toBeLessThan(PHOTO_MAX_BYTES);
+    const res = await upload('photos', [{ data: bomb, name: 'bomb.png' }]);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('image_too_many_pixels');
+    expect(res.body.error.message).toMatch(/56 megapixels\); the limit is 50 megapixels/);
+  }, 30_000);
+
+  it('rejects the whole request when one of several photos is bad, storing none of them', async () => {
+    const before = await photoCount();
+    const res = await upload('photos', [
+      { data: await makeJpeg(400, 300), name: 'good.jpg' },
+      { data: Buffer.from('GIF89a not really'), name: 'bad.jpg' },
+    ]);
+    expect(res.status).toBe(400);
+    expect(await photoCount()).toBe(before);
+  });
+
+  it('leaves no orphan row or file when storage fails half-way through an upload', async () => {
+    const written: string[] = [];
+    const removed: string[] = [];
+    let puts = 0;
+    const flaky: FileStorage = {
+      async put(key, data) {
+        puts += 1;
+        // The original and the first variant are written; the second variant fails (disk full, say).
+        if (puts === 3) throw new Error('simulated storage failure');
+        written.push(key);
+        await t.deps.storage.put(key, data);
+      },
+      read: (key) => t.deps.storage.read(key),
+      async remove(key) {
+        removed.push(key);
+        await t.deps.storage.remove(key);
+      },
+    };
+    const agent = csrfAgent(createApi({ ...t.deps, storage: flaky }));
+    await agent.post('/auth/sign-in', { email: grower.email, password: grower.password });
+    const filesBefore = (await t.deps.db.select().from(storedFiles)).length;
+    const photosBefore = await photoCount();
+
+    const res = await upload('photos', [{ data: await makeJpeg(1700, 1000), name: 'doomed.jpg' }], agent);
+    expect(res.status).toBe(500);
+    expect(res.body.error.code).toBe('internal');
+    expect(await photoCount()).toBe(photosBefore);
+    expect((await t.deps.db.select().from(storedFiles)).length).toBe(filesBefore);
+    expect(written.length).toBe(2);
+    for (const key of written) {
+      expect(removed).toContain(key);
+      expect(await t.deps.storage.read(key)).toBeNull();
+    }
+  }, 20_000);
+
+  it('leaves no file behind when the database refuses the rows', async () => {
+    const keys: string[] = [];
+    const spying: FileStorage = { ...t.deps.storage, put: async (key, data) => void keys.push(key) ?? t.deps.storage.put(key, data) };
+    const agent = csrfAgent(createApi({ ...t.deps, storage: spying }));
+    await agent.post('/auth/sign-in', { email: grower.email, password: grower.password });
+    // A fresh draft has no analysis yet, so linking the report fails inside the transaction.
+    const draft = await agent.post('/selling/lots', LOT_STEP);
+    await agent.put(`/selling/lots/${draft.body.id}/quantity`, QUANTITY_STEP);
+    const res = await upload('report', [{ data: makePdf(), name: 'early.pdf' }], agent, draft.body.id);
+    expect(res.status).toBe(409);
+    expect(res.body.error.code).toBe('analysis_required');
+    expect(keys).toHaveLength(1);
+    expect(await t.deps.storage.read(keys[0]!)).toBeNull();
+    expect(await t.deps.db.select().from(storedFiles).where(eq(storedFiles.storageKey, keys[0]!))).toHaveLength(0);
+  }, 20_000);
+
+  it('serves the lab report only to its grower and admins until the lot is approved, then to signed-in users', async () => {
+    const owner = await signedInGrower(t);
+    const id = await completeLot(owner.agent);
+    const admin = await signedInUser(t, 'admin');
+    const buyer = await signedInUser(t, 'buyer');
+    const stranger = await signedInGrower(t);
+    expect((await owner.agent.get(`/uploads/lots/${id}/report`)).headers['content-type']).toBe('application/pdf');
+    expect((await admin.agent.get(`/uploads/lots/${id}/report`)).status).toBe(200);
+    expect((await buyer.agent.get(`/uploads/lots/${id}/report`)).status).toBe(404);
+    expect((await stranger.agent.get(`/uploads/lots/${id}/report`)).status).toBe(404);
+    expect((await t.agent().get(`/uploads/lots/${id}/report`)).status).toBe(401);
+
+    await owner.agent.post(`/selling/lots/${id}/submit`);
+    expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+    const pdf = await buyer.agent.raw.get(`/uploads/lots/${id}/report`).buffer(true);
+    expect(pdf.status).toBe(200);
+    expect(Buffer.from(pdf.body).subarray(0, 5).toString()).toBe('%PDF-');
+    expect((await t.agent().get(`/uploads/lots/${id}/report`)).status).toBe(401);
+  }, 30_000);
+
+  it('refuses uploads to another grower’s lot and from buyers', async () => {
+    const other = await signedInGrower(t);
+    const res = await upload('photos', [{ data: await makeJpeg(300, 200), name: 'x.jpg' }], other.agent);
+    expect(res.status).toBe(403);
+    const buyer = await signedInUser(t, 'buyer');
+    expect((await upload('photos', [{ data: await makeJpeg(300, 200), name: 'x.jpg' }], buyer.agent)).status).toBe(403);
+  }, 20_000);
+
+  it('tells the uploader what is missing when no file is sent or the field is wrong', async () => {
+    const token = await grower.agent.token();
+    const none = await grower.agent.raw.post(`/uploads/lots/${lotId}/photos`).set('X-XSRF-TOKEN', token).field('note', 'no file');
+    expect(none.status).toBe(400);
+    expect(none.body.error.code).toBe('no_file');
+    const wrongField = await grower.agent.raw.post(`/uploads/lots/${lotId}/photos`).set('X-XSRF-TOKEN', token).attach('file', await makeJpeg(300, 200), 'x.jpg');
+    expect(wrongField.status).toBe(400);
+    expect(wrongField.body.error.code).toBe('unexpected_file_field');
+  });
+});
+
+async function streamToBuffer(stream: NodeJS.ReadableStream): Promise<Buffer> {
+  const chunks: Buffer[] = [];
+  for await (const chunk of stream) chunks.push(Buffer.from(chunk as Buffer));
+  return Buffer.concat(chunks);
+}

@@ -1,0 +1,77 @@
+import { and, eq } from 'drizzle-orm';
+import { Router } from 'express';
+import { z } from 'zod';
+import type { ApiDeps } from '../../api';
+import { labAnalyses, storedFiles } from '../../db/schema';
+import { forbidden, notFound, unauthenticated } from '../../middleware/http-error';
+import { requireRole } from '../../middleware/require-role';
+import { findLotWithFarm, ownedLot } from '../selling/lot-access';
+import { addLotPhotos } from './photo-upload';
+import { attachLabReport } from './report-upload';
+import { acceptPhotos, acceptReport, filesOf } from './upload-limits';
+
+const LotParams = z.object({ id: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
+
+/**
+ * Bytes in and out: lot photos and the lab report PDF. Uploads are the owning grower's; the report is
+ * served to its grower and admins, and — once an admin has verified it against the listing — to any
+ * signed-in user (buyers checking the report before they pay). Visitors who are not signed in never get it.
+ */
+export function uploadsRouter(deps: ApiDeps): Router {
+  const { db, storage } = deps;
+  const router = Router();
+
+  router.post('/lots/:id/photos', requireRole('grower'), async (req, res, next) => {
+    // Ownership is checked before the body is read, so strangers' uploads are never buffered.
+    const { id } = LotParams.parse(req.params);
+    await ownedLot(db, id, req.user);
+    acceptPhotos(req, res, next);
+  }, async (req, res) => {
+    const { id } = LotParams.parse(req.params);
+    const { lot } = await ownedLot(db, id, req.user);
+    const added = await addLotPhotos(deps, lot, req.user!.id, filesOf(req, 'photo'));
+    res.status(201).json({ photos: added });
+  });
+
+  router.post('/lots/:id/report', requireRole('grower'), async (req, res, next) => {
+    const { id } = LotParams.parse(req.params);
+    await ownedLot(db, id, req.user);
+    acceptReport(req, res, next);
+  }, async (req, res) => {
+    const { id } = LotParams.parse(req.params);
+    const { lot } = await ownedLot(db, id, req.user);
+    const [file] = filesOf(req, 'lab report PDF');
+    const stored = await attachLabReport(deps, lot, req.user!.id, file!);
+    res.status(201).json({ reportFile: { ...stored, url: `/api/uploads/lots/${id}/report` } });
+  });
+
+  router.get('/lots/:id/report', async (req, res) => {
+    const { id } = LotParams.parse(req.params);
+    if (!req.user) throw unauthenticated();
+    const { lot, farm } = await findLotWithFarm(db, id);
+    const [row] = await db
+      .select({ file: storedFiles, verification: labAnalyses.verification })
+      .from(labAnalyses)
+      .innerJoin(storedFiles, eq(storedFiles.id, labAnalyses.reportFileId))
+      .where(and(eq(labAnalyses.lotId, id), eq(labAnalyses.isCurrent, true)));
+    const isOwner = farm.ownerId === req.user.id;
+    const isAdmin = req.user.role === 'admin';
+    const isPublic = (lot.status === 'listed' || lot.status === 'sold_out') && row?.verification === 'verified';
+    if (!isOwner && !isAdmin && !isPublic) {
+      // Do not reveal whether an unlisted lot exists.
+      if (lot.status !== 'listed' && lot.status !== 'sold_out') throw notFound('That lab report');
+      throw forbidden('The lab report is shown once an admin has verified it.');
+    }
+    if (!row) throw notFound('That lab report');
+    const file = await storage.read(row.file.storageKey);
+    if (!file) throw notFound('That lab report');
+    res.setHeader('Content-Type', 'application/pdf');
+    res.setHeader('Content-Length', String(file.size));
+    res.setHeader('Content-Disposition', `inline; filename="lab-report-lot-${id}.pdf"`);
+    res.setHeader('Cache-Control', 'private, no-cache');
+    res.setHeader('X-Content-Type-Options', 'nosniff');
+    file.stream.pipe(res);
+  });
+
+  return router;
+}
