@@ -5,6 +5,7 @@ import {
   writeResponseToNodeResponse,
 } from '@angular/ssr/node';
 import express from 'express';
+import helmet from 'helmet';
 import { join } from 'node:path';
 import { createApi } from '../server/api';
 import { createAppDeps } from '../server/app-deps';
@@ -21,6 +22,10 @@ const angularApp = new AngularNodeAppEngine();
 
 app.use('/api', createApi(deps));
 app.use('/media', mediaRouter(deps.storage));
+
+// Security headers for pages; the API sets its own stricter set. Angular's inline hydration script
+// needs a nonce-based CSP, left for when one is configured.
+app.use(helmet({ contentSecurityPolicy: false }));
 
 // Pages hand out the CSRF cookie too: a server-rendered page may make its first API call a POST.
 app.use(csrfProtection(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)));
