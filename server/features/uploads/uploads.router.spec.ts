@@ -144,7 +144,13 @@ describe('uploads API', () => {
 
   it('leaves no file behind when the database refuses the rows', async () => {
     const keys: string[] = [];
-    const spying: FileStorage = { ...t.deps.storage, put: async (key, data) => void keys.push(key) ?? t.deps.storage.put(key, data) };
+    const spying: FileStorage = {
+      ...t.deps.storage,
+      put: async (key, data) => {
+        keys.push(key);
+        await t.deps.storage.put(key, data);
+      },
+    };
     const agent = csrfAgent(createApi({ ...t.deps, storage: spying }));
     await agent.post('/auth/sign-in', { email: grower.email, password: grower.password });
     // A fresh draft has no analysis yet, so linking the report fails inside the transaction.
