@@ -3,11 +3,14 @@ import { expect, test } from '@playwright/test';
 test.describe('catalogue', () => {
   test('the server-rendered HTML of the catalogue already lists demo lots', async ({ request }) => {
     // A plain HTTP request runs no JavaScript: whatever is in the body was rendered on the server.
-    const res = await request.get('/hay');
+    const res = await request.get('/hay?q=North%20Pivot');
     expect(res.status()).toBe(200);
     const html = await res.text();
     expect(html).toContain('Alfalfa, 2nd cutting — North Pivot');
     expect(html).toContain('Larkspur Bend Farm');
+    // The first page of the unfiltered catalogue is in the HTML as well, with its total.
+    const first = await (await request.get('/hay')).text();
+    expect(first).toMatch(/<strong[^>]*>2\d<\/strong> lots/);
   });
 
   test('an unknown address answers 404 with a helpful page', async ({ request, page }) => {
@@ -17,7 +20,7 @@ test.describe('catalogue', () => {
   });
 
   test('a lot page shows its analysis and photos', async ({ page }) => {
-    await page.goto('/hay');
+    await page.goto('/hay?q=North%20Pivot');
     await page.getByRole('link', { name: 'Alfalfa, 2nd cutting — North Pivot' }).click();
     await expect(page.getByRole('heading', { level: 1, name: 'Alfalfa, 2nd cutting — North Pivot' })).toBeVisible();
     await expect(page.getByRole('heading', { name: 'Lab analysis' })).toBeVisible();
