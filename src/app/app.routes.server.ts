@@ -5,6 +5,11 @@ export const serverRoutes: ServerRoute[] = [
   { path: '', renderMode: RenderMode.Server },
   { path: 'hay', renderMode: RenderMode.Server },
   { path: 'hay/:id', renderMode: RenderMode.Server },
+  // Signed-in working pages: rendered in the browser (nothing there for search engines or first paint).
+  { path: 'selling', renderMode: RenderMode.Client },
+  { path: 'selling/**', renderMode: RenderMode.Client },
+  { path: 'admin', renderMode: RenderMode.Client },
+  { path: 'admin/**', renderMode: RenderMode.Client },
   { path: 'sign-in', renderMode: RenderMode.Server },
   { path: 'sign-up', renderMode: RenderMode.Server },
   { path: '**', renderMode: RenderMode.Server, status: 404 },

@@ -1,8 +1,11 @@
 import { Routes } from '@angular/router';
+import { roleGuard } from './core/auth-guard';
 
 export const routes: Routes = [
   { path: '', title: 'Baleproof — lab-tested hay', loadComponent: () => import('./features/home/home-page').then((m) => m.HomePage) },
   { path: 'hay', loadChildren: () => import('./features/catalogue/catalogue.routes').then((m) => m.CATALOGUE_ROUTES) },
+  { path: 'selling', canMatch: [roleGuard('grower')], loadChildren: () => import('./features/selling/selling.routes').then((m) => m.SELLING_ROUTES) },
+  { path: 'admin', canMatch: [roleGuard('admin')], loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES) },
   { path: 'sign-in', title: 'Sign in — Baleproof', loadComponent: () => import('./features/account/sign-in-page').then((m) => m.SignInPage) },
   { path: 'sign-up', title: 'Create an account — Baleproof', loadComponent: () => import('./features/account/sign-up-page').then((m) => m.SignUpPage) },
   { path: '**', title: 'Page not found — Baleproof', loadComponent: () => import('./features/not-found/not-found-page').then((m) => m.NotFoundPage) },

@@ -1,0 +1,123 @@
+import { expect, test, type Page } from '@playwright/test';
+import { makeJpeg, makePdf } from '../tests/support/upload-fixtures';
+
+// Demo accounts from the seed (README lists them).
+const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
+const ADMIN = { email: 'admin@baleproof.example', password: 'admin-demo-pass' };
+
+async function signIn(page: Page, account: { email: string; password: string }): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(account.email);
+  await page.getByLabel('Password').fill(account.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/hay/);
+}
+
+async function signOut(page: Page): Promise<void> {
+  await page.getByRole('button', { name: /Account menu/ }).click();
+  await page.getByRole('menuitem', { name: 'Sign out' }).click();
+  await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+}
+
+const saveAndContinue = (page: Page) => page.getByRole('button', { name: 'Save and continue' }).click();
+
+test('a grower lists a tested lot, an admin approves it, and buyers find it in the catalogue', async ({ page }) => {
+  test.setTimeout(120_000);
+  const field = `Creek Bend ${Date.now().toString(36)}`;
+  const title = `Alfalfa, 2nd cutting — ${field}`;
+  const photos = [
+    { name: 'stack-north.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(2400, 1800, 1) },
+    { name: 'bale-ends.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(2200, 1700, 2) },
+  ];
+
+  await signIn(page, GROWER);
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My lots' }).click();
+  await expect(page.getByRole('heading', { name: 'My lots' })).toBeVisible();
+  await page.getByRole('link', { name: 'New lot' }).click();
+
+  // Step 1: the lot.
+  await page.getByLabel('Field name').fill(field);
+  await page.getByLabel('Cutting').fill('2');
+  await page.getByLabel('Harvest started').fill('2026-06-10');
+  await page.getByLabel('Harvest ended').fill('2026-06-11');
+  await page.getByLabel('Moisture at baling').fill('15');
+  await expect(page.getByText('Blister beetles in alfalfa')).toBeVisible();
+  await saveAndContinue(page);
+
+  // The draft now has an address of its own and resumes at the quantity step.
+  await expect(page).toHaveURL(/\/selling\/lots\/\d+$/);
+  const lotId = Number(page.url().split('/').pop());
+  await page.getByLabel('Bale count').fill('500');
+  await page.getByLabel('Average bale weight').fill('60');
+  await expect(page.getByText('15.00 tons')).toBeVisible();
+  await saveAndContinue(page);
+
+  // Step 3: sampling, checked live against the protocol.
+  await page.getByLabel('Sample date').fill('2026-07-09');
+  await page.getByLabel('Who sampled').fill('Extension agent (invented)');
+  await expect(page.getByText('Sampled to protocol.')).toBeVisible();
+  await page.getByLabel('Cores taken').fill('12');
+  await expect(page.getByText(/Only 12 cores were taken/)).toBeVisible();
+  await page.getByLabel('Cores taken').fill('20');
+  await saveAndContinue(page);
+
+  // Step 4: the lab analysis, with a live preview from the engine and the report PDF.
+  await page.getByLabel('Lab name').fill('High Plains Forage Testing (invented)');
+  await page.getByLabel('Report number').fill('HP-2231');
+  await page.getByLabel('Report date').fill('2026-07-14');
+  await page.getByLabel('Dry matter (DM)').fill('88');
+  await page.getByLabel('Crude protein (CP)').fill('20');
+  await page.getByLabel('ADF', { exact: true }).fill('30');
+  await page.getByLabel('NDF', { exact: true }).fill('40');
+  // RFV of ADF 30 / NDF 40 (Rohweder et al. 1978): (88.9 − 0.779·30)·(120/40)/1.29 ≈ 152.
+  await expect(page.locator('[data-figure="rfv"]')).toHaveText('152');
+  await page.getByLabel('Lab report PDF').setInputFiles({ name: 'hp-2231.pdf', mimeType: 'application/pdf', buffer: makePdf('Report HP-2231') });
+  await saveAndContinue(page);
+
+  // Step 5: two photos, each with its own progress bar.
+  await page.getByLabel('Choose photos').setInputFiles(photos);
+  for (const p of photos) {
+    const bar = page.getByRole('progressbar', { name: `Upload of ${p.name}` });
+    await expect(bar).toBeVisible();
+    await expect(bar).toHaveAttribute('aria-valuenow', '100');
+  }
+  await expect(page.getByRole('list', { name: 'Photos of this lot' }).getByRole('listitem')).toHaveCount(2);
+  await page.getByRole('button', { name: 'Make cover' }).click();
+  await expect(page.getByRole('list', { name: 'Photos of this lot' }).getByText('Cover', { exact: true })).toHaveCount(1);
+  await saveAndContinue(page);
+
+  // Step 6: price and delivery.
+  await page.getByLabel('Price per ton (as fed)').fill('265');
+  await page.getByLabel('Freight per loaded mile').fill('3.50');
+  await saveAndContinue(page);
+
+  // Step 7: review and submit.
+  await expect(page.getByText('Cautions buyers will see')).toBeVisible();
+  await page.getByRole('button', { name: 'Submit for review' }).click();
+  await expect(page).toHaveURL(/\/selling\?submitted=/);
+  await expect(page.getByRole('listitem').filter({ hasText: title }).getByText('Waiting for review')).toBeVisible();
+  await signOut(page);
+
+  // The admin checks the report against the values and approves.
+  await signIn(page, ADMIN);
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Review desk' }).click();
+  await page.getByRole('link', { name: title }).click();
+  await expect(page.locator('iframe[title="Lab report PDF"]')).toHaveAttribute('src', `/api/uploads/lots/${lotId}/report`);
+  const pdf = await page.request.get(`/api/uploads/lots/${lotId}/report`);
+  expect(pdf.headers()['content-type']).toBe('application/pdf');
+  await page.getByRole('button', { name: 'Approve and list' }).click();
+  await expect(page.getByRole('status')).toContainText('on sale');
+  await signOut(page);
+
+  // Anyone now finds it in the catalogue, with WebP photo variants and its analysis.
+  await page.goto(`/hay?q=${encodeURIComponent(field)}`);
+  await page.getByRole('link', { name: title }).first().click();
+  await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Lab analysis' })).toBeVisible();
+  await expect(page.getByRole('rowheader', { name: 'Crude protein (CP)' })).toBeVisible();
+  const photo = page.locator('figure img').first();
+  await expect(photo).toHaveAttribute('src', /\/media\/photos\/.+\.webp$/);
+  const image = await page.request.get((await photo.getAttribute('src'))!);
+  expect(image.headers()['content-type']).toBe('image/webp');
+  await expect(page.locator('figure img').first()).toHaveAttribute('srcset', /320w.*800w.*1600w/);
+});

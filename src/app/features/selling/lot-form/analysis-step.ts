@@ -1,0 +1,163 @@
+import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject, input, output, signal } from '@angular/core';
+import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
+import { MatOption, MatSelect } from '@angular/material/select';
+import { catchError, debounceTime, firstValueFrom, last, of, switchMap, tap } from 'rxjs';
+import { readAnalysisCsv } from '../../../../../shared/contracts/analysis-csv';
+import type { EditableLot } from '../../../../../shared/contracts/selling';
+import { ForageEvaluationRequestSchema, type ForageEvaluation } from '../../../../../shared/forage';
+import { apiErrorMessage } from '../../../core/api-error';
+import { SellingApi } from '../selling-api';
+import { AnalysisPreview } from './analysis-preview';
+import { numberOrNull, StepSave } from './step-save';
+
+/** Lab values, in form order: [control, label, required]. */
+export const VALUE_FIELDS = [
+  ['dryMatterPct', 'Dry matter (DM)', true],
+  ['crudeProteinPct', 'Crude protein (CP)', true],
+  ['adfPct', 'ADF', true],
+  ['ndfPct', 'NDF', true],
+  ['ndfd48Pct', 'NDFD 48 h (% of NDF)', false],
+  ['fatPct', 'Crude fat (EE)', false],
+  ['ashPct', 'Ash', false],
+  ['escPct', 'ESC (sugars)', false],
+  ['wscPct', 'WSC (sugars + fructans)', false],
+  ['starchPct', 'Starch', false],
+  ['calciumPct', 'Calcium', false],
+  ['phosphorusPct', 'Phosphorus', false],
+  ['moisturePct', 'Moisture (checks DM)', false],
+  ['reportedRfv', 'RFV printed on report', false],
+] as const;
+type ValueField = (typeof VALUE_FIELDS)[number][0];
+
+/** Step 4: the lab's report — who, when, how — its values with a live preview of the engine's figures, and the PDF. */
+@Component({
+  selector: 'app-analysis-step',
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatRadioGroup, MatRadioButton, MatButton, MatIcon, MatProgressBar, AnalysisPreview],
+  templateUrl: './analysis-step.html',
+  styleUrls: ['./step-form.scss', './analysis-step.scss'],
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class AnalysisStep {
+  private readonly api = inject(SellingApi);
+  readonly lot = input.required<EditableLot>();
+  readonly saved = output<EditableLot>();
+
+  protected readonly fields = VALUE_FIELDS;
+  protected readonly templateUrl = this.api.templateUrl;
+  protected readonly saving = new StepSave();
+  protected readonly preview = signal<ForageEvaluation | null>(null);
+  protected readonly previewNote = signal('Enter dry matter, CP, ADF and NDF to see the figures.');
+  protected readonly csvErrors = signal<string[]>([]);
+  protected readonly pdf = signal<File | null>(null);
+  protected readonly pdfProgress = signal<number | null>(null);
+
+  private readonly fb = inject(FormBuilder).nonNullable;
+  protected readonly form = this.fb.group({
+    labName: ['', Validators.required],
+    labCertified: [true],
+    reportNumber: [''],
+    reportDate: ['', Validators.required],
+    method: ['nirs' as 'nirs' | 'wet_chemistry'],
+    basis: ['dm' as 'dm' | 'asFed'],
+    values: this.fb.group(Object.fromEntries(VALUE_FIELDS.map(([f]) => [f, '' as number | string])) as Record<ValueField, number | string>),
+  });
+
+  constructor() {
+    effect(() => {
+      const a = this.lot().analysis;
+      if (!a) return;
+      const { basis, ...values } = a.values;
+      this.form.reset({ labName: a.labName, labCertified: a.labCertified, reportNumber: a.reportNumber, reportDate: a.reportDate, method: a.method, basis: basis as 'dm', values: { ...this.emptyValues(), ...values } });
+    });
+    this.form.valueChanges
+      .pipe(
+        debounceTime(350),
+        switchMap(() => {
+          const request = ForageEvaluationRequestSchema.safeParse(this.request());
+          if (!request.success) {
+            this.previewNote.set(request.error.issues[0]?.message ?? 'Check the values.');
+            return of(null);
+          }
+          return this.api.evaluate(request.data).pipe(
+            tap(() => this.previewNote.set('')),
+            catchError((e) => {
+              this.previewNote.set(apiErrorMessage(e));
+              return of(null);
+            }),
+          );
+        }),
+        takeUntilDestroyed(inject(DestroyRef)),
+      )
+      .subscribe((evaluation) => this.preview.set(evaluation));
+  }
+
+  private emptyValues(): Record<ValueField, number | string> {
+    return Object.fromEntries(VALUE_FIELDS.map(([f]) => [f, ''])) as Record<ValueField, string>;
+  }
+
+  /** The engine request for what is typed: empty optional values are left out. */
+  private request(): Record<string, unknown> {
+    const v = this.form.getRawValue();
+    const values: Record<string, unknown> = { forageClass: this.lot().forageClass, basis: v.basis };
+    for (const [field] of VALUE_FIELDS) {
+      const n = numberOrNull(v.values[field]);
+      if (n !== null) values[field] = n;
+    }
+    return values;
+  }
+
+  protected async importCsv(event: Event): Promise<void> {
+    const inputEl = event.target as HTMLInputElement;
+    const file = inputEl.files?.[0];
+    inputEl.value = '';
+    if (!file) return;
+    const result = readAnalysisCsv(await file.text());
+    if (!result.ok) {
+      this.csvErrors.set(result.errors);
+      return;
+    }
+    this.csvErrors.set([]);
+    const { basis, ...values } = result.values;
+    this.form.patchValue({ basis: basis as 'dm', values: { ...this.emptyValues(), ...values } });
+  }
+
+  protected choosePdf(event: Event): void {
+    const inputEl = event.target as HTMLInputElement;
+    this.pdf.set(inputEl.files?.[0] ?? null);
+  }
+
+  protected async save(): Promise<void> {
+    if (this.form.invalid) {
+      this.form.markAllAsTouched();
+      return;
+    }
+    const v = this.form.getRawValue();
+    const { forageClass: _fc, ...values } = this.request();
+    const body = { labName: v.labName, labCertified: v.labCertified, reportNumber: v.reportNumber, reportDate: v.reportDate, method: v.method, values };
+    let lot = await this.saving.run(this.api.saveStep(this.lot().id, 'analysis', body));
+    if (!lot) return;
+    const pdf = this.pdf();
+    if (pdf) {
+      this.pdfProgress.set(0);
+      try {
+        await firstValueFrom(this.api.uploadReport(lot.id, pdf).pipe(tap((e) => e.kind === 'progress' && this.pdfProgress.set(e.progress)), last()));
+        this.pdf.set(null);
+        lot = await firstValueFrom(this.api.lot(lot.id));
+      } catch (e) {
+        this.saving.error.set(`The values were saved, but the PDF was not: ${apiErrorMessage(e)}`);
+        return;
+      } finally {
+        this.pdfProgress.set(null);
+      }
+    }
+    this.saved.emit(lot);
+  }
+}

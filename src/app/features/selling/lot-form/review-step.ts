@@ -1,0 +1,79 @@
+import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
+import { MatButton } from '@angular/material/button';
+import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
+import type { EditableLot } from '../../../../../shared/contracts/selling';
+import { dollars, fixed } from '../../catalogue/format';
+import { CautionsList } from '../ui/cautions-list';
+import { FindingsList } from '../ui/findings-list';
+import { SellingApi } from '../selling-api';
+import { AnalysisPreview } from './analysis-preview';
+import { StepSave } from './step-save';
+
+/** Step 7: the listing as a whole, what still blocks it, the cautions buyers will see, and submit. */
+@Component({
+  selector: 'app-review-step',
+  imports: [MatButton, AnalysisPreview, FindingsList, CautionsList],
+  template: `
+    @let l = lot();
+    <div class="cols">
+      <section>
+        <h3>{{ l.title }}</h3>
+        <dl class="bp-num">
+          @if (l.lot; as s) { <dt>Hay</dt><dd>{{ forage[s.forageType] }}, cutting {{ s.cutting }}, harvested {{ s.harvestStartedOn }} – {{ s.harvestEndedOn }}</dd> }
+          @if (l.quantity; as q) { <dt>Quantity</dt><dd>{{ q.baleCount }} × {{ bales[q.baleType] }} of {{ fixed(q.avgBaleWeightLb, 0) }} lb ≈ {{ fixed(q.totalTons, 1) }} tons</dd> }
+          @if (l.price; as p) { <dt>Price</dt><dd>{{ dollars(p.priceCentsPerTon ?? 0) }} per ton @if (p.priceCentsPerBale) { ({{ dollars(p.priceCentsPerBale, 2) }} per bale) }</dd> }
+          @if (l.analysis; as a) { <dt>Lab</dt><dd>{{ a.labName }}{{ a.labCertified ? ' (certified)' : '' }}, {{ a.reportDate }} — PDF {{ a.reportFile ? 'attached' : 'missing' }}</dd> }
+          <dt>Photos</dt><dd>{{ l.photos.length }}</dd>
+        </dl>
+        @if (l.samplingReport; as s) {
+          <h3>Sampling</h3>
+          <app-findings-list [findings]="s.findings" label="Sampling findings" [emptyText]="s.compliant ? 'Sampled to protocol.' : ''" />
+        }
+        @if (cautionInput(); as c) { <h3>Cautions buyers will see</h3><app-cautions-list [lot]="c" /> }
+      </section>
+      <aside><app-analysis-preview [evaluation]="l.evaluation" /></aside>
+    </div>
+    @if (l.missing.length > 0) {
+      <div class="bp-caution" role="note">Before submitting, add {{ l.missing.join(', ') }}.</div>
+    }
+    @if (saving.error()) { <div class="bp-error-box" role="alert">{{ saving.error() }}</div> }
+    <div class="actions">
+      @if (l.status === 'draft' || l.status === 'returned') {
+        <button mat-flat-button type="button" (click)="submit()" [disabled]="saving.busy() || l.missing.length > 0">Submit for review</button>
+        <span class="small">An admin checks the lab report against your values; you get an e-mail when it is listed.</span>
+      } @else {
+        <span>This lot is {{ l.status === 'in_review' ? 'waiting for review' : 'already past review' }}; changes you save are kept.</span>
+      }
+    </div>
+  `,
+  styleUrls: ['./step-form.scss'],
+  styles: `
+    .cols { display: grid; grid-template-columns: minmax(0, 1fr) 300px; gap: 24px; }
+    @media (max-width: 900px) { .cols { grid-template-columns: 1fr; } }
+    dl { display: grid; grid-template-columns: auto 1fr; gap: 4px 12px; }
+    dt { color: var(--mat-sys-on-surface-variant); } dd { margin: 0; }
+    .small { font-size: 0.875rem; color: var(--mat-sys-on-surface-variant); }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class ReviewStep {
+  private readonly api = inject(SellingApi);
+  readonly lot = input.required<EditableLot>();
+  readonly submitted = output<EditableLot>();
+
+  protected readonly saving = new StepSave();
+  protected readonly forage = FORAGE_TYPE_LABELS;
+  protected readonly bales = BALE_TYPE_LABELS;
+  protected readonly dollars = dollars;
+  protected readonly fixed = fixed;
+  protected readonly cautionInput = computed(() => {
+    const l = this.lot();
+    if (!l.lot || !l.quantity) return null;
+    return { forageClass: l.forageClass, baleType: l.quantity.baleType, moistureAtBalingPct: l.lot.moistureAtBalingPct, storage: l.lot.storage, nscFlag: l.evaluation?.nscFlag ?? null };
+  });
+
+  protected async submit(): Promise<void> {
+    const lot = await this.saving.run(this.api.act(this.lot().id, 'submit'));
+    if (lot) this.submitted.emit(lot);
+  }
+}

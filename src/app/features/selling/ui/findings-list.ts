@@ -1,0 +1,42 @@
+import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { MatIcon } from '@angular/material/icon';
+import type { Finding } from '../../../../../shared/forage';
+
+const ICONS = { error: 'error', warning: 'warning', info: 'info' } as const;
+
+/** The engine's findings, most serious first, each coloured by severity. */
+@Component({
+  selector: 'app-findings-list',
+  imports: [MatIcon],
+  template: `
+    @if (findings().length > 0) {
+      <ul class="findings" [attr.aria-label]="label()">
+        @for (f of sorted(); track f.code) {
+          <li [class]="f.severity"><mat-icon>{{ icons[f.severity] }}</mat-icon><span>{{ f.message }}</span></li>
+        }
+      </ul>
+    } @else if (emptyText()) {
+      <p class="ok"><mat-icon>check_circle</mat-icon> {{ emptyText() }}</p>
+    }
+  `,
+  styles: `
+    .findings { list-style: none; padding: 0; margin: 8px 0; display: grid; gap: 6px; }
+    li { display: flex; gap: 8px; align-items: flex-start; padding: 8px 10px; border-radius: 6px; }
+    li.error { background: var(--bp-error-bg); color: var(--bp-error); }
+    li.warning { background: var(--bp-warn-bg); color: var(--bp-warn); }
+    li.info { background: var(--bp-info-bg); color: var(--bp-info); }
+    li span { color: var(--mat-sys-on-surface); }
+    .ok { display: flex; gap: 8px; align-items: center; color: var(--bp-ok); }
+  `,
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class FindingsList {
+  readonly findings = input.required<Finding[]>();
+  readonly label = input('Findings');
+  readonly emptyText = input('');
+  protected readonly icons = ICONS;
+  protected sorted(): Finding[] {
+    const rank = { error: 0, warning: 1, info: 2 };
+    return [...this.findings()].sort((a, b) => rank[a.severity] - rank[b.severity]);
+  }
+}
