@@ -121,3 +121,35 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   expect(image.headers()['content-type']).toBe('image/webp');
   await expect(page.locator('figure img').first()).toHaveAttribute('srcset', /320w.*800w.*1600w/);
 });
+
+test('a new grower sets up the farm profile and a payout account before listing', async ({ page }) => {
+  await page.goto('/sign-up');
+  await page.getByRole('radio', { name: 'sell hay I grow' }).check();
+  await page.getByLabel('Your name').fill('New Grower');
+  await page.getByLabel('E-mail').fill(`grower.${Date.now()}@e2e.baleproof.example`);
+  await page.getByLabel('Password').fill('a-long-enough-password');
+  await page.getByRole('button', { name: 'Create account' }).click();
+
+  await expect(page).toHaveURL(/\/selling$/);
+  await expect(page.getByRole('note')).toContainText('set up your farm profile');
+  await expect(page.getByRole('link', { name: 'New lot' })).toHaveCount(0);
+  await page.getByRole('link', { name: 'set up your farm profile' }).click();
+
+  await page.getByLabel('Farm name').fill('Sandhill Meadow Hay (invented)');
+  await page.getByLabel('Address where hay is loaded').fill('4 Section Line Rd');
+  await page.getByLabel('ZIP code').fill('00000');
+  await page.getByLabel('Delivery radius').fill('90');
+  await page.getByRole('button', { name: 'Save farm profile' }).click();
+  await expect(page.getByRole('alert')).toContainText('ZIP code 00000 is not in our list');
+  await page.getByLabel('ZIP code').fill('68901');
+  await page.getByRole('button', { name: 'Save farm profile' }).click();
+  await expect(page.getByRole('status')).toContainText('Hastings, NE');
+
+  // Payouts go through the payment provider's onboarding (the local fake completes it at once).
+  await page.getByRole('button', { name: 'Set up payouts' }).click();
+  await expect(page).toHaveURL(/\/selling\/farm\?payouts=returned/);
+  await expect(page.getByText('Your payout account is ready.')).toBeVisible();
+
+  await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My lots' }).click();
+  await expect(page.getByRole('link', { name: 'New lot' })).toBeVisible();
+});
