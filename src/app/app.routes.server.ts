@@ -4,7 +4,10 @@ import { RenderMode, ServerRoute } from '@angular/ssr';
 export const serverRoutes: ServerRoute[] = [
   { path: '', renderMode: RenderMode.Server },
   { path: 'hay', renderMode: RenderMode.Server },
+  { path: 'hay/compare', renderMode: RenderMode.Server },
   { path: 'hay/:id', renderMode: RenderMode.Server },
+  { path: 'planner', renderMode: RenderMode.Server },
+  { path: 'cart', renderMode: RenderMode.Server },
   // Signed-in working pages: rendered in the browser (nothing there for search engines or first paint).
   { path: 'selling', renderMode: RenderMode.Client },
   { path: 'selling/**', renderMode: RenderMode.Client },

@@ -4,6 +4,8 @@ import { roleGuard } from './core/auth-guard';
 export const routes: Routes = [
   { path: '', title: 'Baleproof — lab-tested hay', loadComponent: () => import('./features/home/home-page').then((m) => m.HomePage) },
   { path: 'hay', loadChildren: () => import('./features/catalogue/catalogue.routes').then((m) => m.CATALOGUE_ROUTES) },
+  { path: 'planner', title: 'Herd planner — Baleproof', loadComponent: () => import('./features/planner/planner-page').then((m) => m.PlannerPage) },
+  { path: 'cart', title: 'Your cart — Baleproof', loadComponent: () => import('./features/orders/cart-page').then((m) => m.CartPage) },
   { path: 'selling', canMatch: [roleGuard('grower')], loadChildren: () => import('./features/selling/selling.routes').then((m) => m.SELLING_ROUTES) },
   { path: 'admin', canMatch: [roleGuard('admin')], loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES) },
   { path: 'sign-in', title: 'Sign in — Baleproof', loadComponent: () => import('./features/account/sign-in-page').then((m) => m.SignInPage) },

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, effect, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -8,12 +8,14 @@ import { MatInput } from '@angular/material/input';
 import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
-import { ActivatedRoute, Router } from '@angular/router';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { catchError, map, of, startWith, switchMap } from 'rxjs';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
 import type { LotSearchResult } from '../../../../../shared/contracts/lots';
 import { apiErrorMessage } from '../../../core/api-error';
 import { LotCard } from '../lot-card/lot-card';
+import { CompareSelection } from '../lot-compare/compare-selection';
+import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { LotsApi } from '../lots-api';
 import { FILTER_KEYS, queryFromForm, SORT_OPTIONS } from './search-query';
 
@@ -22,7 +24,7 @@ type SearchState = { status: 'loading' } | { status: 'ok'; result: LotSearchResu
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
   selector: 'app-lot-search-page',
-  imports: [ReactiveFormsModule, LotCard, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, MatPaginator, MatProgressBar],
+  imports: [ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, MatPaginator, MatProgressBar],
   templateUrl: './lot-search-page.html',
   styleUrl: './lot-search-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -31,6 +33,7 @@ export class LotSearchPage {
   private readonly api = inject(LotsApi);
   private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
+  protected readonly compare = inject(CompareSelection);
 
   protected readonly forageTypes = Object.entries(FORAGE_TYPE_LABELS);
   protected readonly baleTypes = Object.entries(BALE_TYPE_LABELS);
@@ -40,7 +43,7 @@ export class LotSearchPage {
     Object.fromEntries(FILTER_KEYS.map((k) => [k, k === 'compliantOnly' || k === 'verifiedOnly' ? false : ''])) as Record<string, string | boolean>,
   );
 
-  private readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
+  protected readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
 
   protected readonly state = toSignal(
     this.route.queryParams.pipe(
@@ -64,9 +67,12 @@ export class LotSearchPage {
     return s.status === 'error' ? s.message : null;
   });
   protected readonly sort = computed(() => this.params()['sort'] ?? 'newest');
+  /** The comparison link carries the ZIP so delivered prices use the same place. */
+  protected readonly compareParams = computed(() => ({ ids: this.compare.ids().join(','), zip: this.params()['zip'] }));
   protected readonly hasFilters = computed(() => FILTER_KEYS.some((k) => this.params()[k] !== undefined));
 
   constructor() {
+    afterNextRender(() => this.compare.restore());
     // Keep the form showing what the URL says (also after back/forward).
     effect(() => {
       const p = this.params();

@@ -1,0 +1,110 @@
+import { expect, test, type APIRequestContext } from '@playwright/test';
+
+/** Titles the API lists for a catalogue query (the oracle for what the page should show). */
+async function apiTitles(request: APIRequestContext, query: string): Promise<string[]> {
+  const res = await request.get(`/api/lots?${query}`);
+  expect(res.ok()).toBe(true);
+  return ((await res.json()) as { items: { title: string }[] }).items.map((i) => i.title);
+}
+
+test.describe('buyers find and choose hay', () => {
+  test('filters by RFV, protein and distance from a ZIP; the URL carries them and its server-rendered HTML lists only matching lots', async ({ page, request }) => {
+    await page.goto('/hay');
+    await page.getByLabel('RFV from').fill('120');
+    await page.getByLabel(/^(CP|Crude protein) from/).fill('15');
+    await page.getByLabel('Your ZIP').fill('66502');
+    await page.getByLabel('Within miles').fill('100');
+    await page.getByRole('button', { name: 'Show hay' }).click();
+
+    await expect(page).toHaveURL(/rfvMin=120/);
+    const url = new URL(page.url());
+    expect(Object.fromEntries(url.searchParams)).toMatchObject({ rfvMin: '120', cpMin: '15', zip: '66502', radiusMi: '100' });
+
+    const matching = await apiTitles(request, 'rfvMin=120&cpMin=15&zip=66502&radiusMi=100&pageSize=100');
+    const everything = await apiTitles(request, 'pageSize=100');
+    expect(matching.length).toBeGreaterThan(0);
+    expect(matching.length).toBeLessThan(everything.length);
+    await expect(page.getByText(new RegExp(`^\\s*${matching.length} lots near Manhattan, KS 66502`))).toBeVisible();
+    await expect(page.getByRole('list', { name: 'Hay lots' }).getByRole('listitem')).toHaveCount(matching.length);
+
+    // A plain HTTP request runs no JavaScript: the lots in its body were filtered and rendered on the server.
+    const html = await (await request.get(url.pathname + url.search)).text();
+    for (const title of matching) expect(html).toContain(title);
+    for (const title of everything.filter((t) => !matching.includes(t))) expect(html).not.toContain(title);
+
+    // Back restores the unfiltered catalogue from the URL.
+    await page.goBack();
+    await expect(page).toHaveURL(/\/hay$/);
+    await expect(page.getByLabel('RFV from')).toHaveValue('');
+  });
+
+  test('sorts by price and pages through the results with a stable total', async ({ page, request }) => {
+    await page.goto('/hay');
+    await page.getByRole('combobox', { name: 'Sort by' }).click();
+    await page.getByRole('option', { name: 'Price per ton', exact: true }).click();
+    await expect(page).toHaveURL(/sort=price/);
+
+    const byPrice = await apiTitles(request, 'sort=price&pageSize=100');
+    const cards = page.getByRole('list', { name: 'Hay lots' }).getByRole('heading', { level: 3 });
+    await expect(cards).toHaveCount(12);
+    expect(await cards.allTextContents()).toEqual(byPrice.slice(0, 12).map((t) => ` ${t} `.trim()).map((t) => expect.stringContaining(t)));
+    await expect(page.getByText(`${byPrice.length} lots`)).toBeVisible();
+
+    await page.getByRole('button', { name: 'Next page' }).click();
+    await expect(page).toHaveURL(/page=2/);
+    await expect(cards.first()).toHaveText(byPrice[12]!);
+    await expect(page.getByText(`${byPrice.length} lots`)).toBeVisible();
+    const html = await (await request.get(new URL(page.url()).pathname + new URL(page.url()).search)).text();
+    expect(html).toContain(byPrice[12]!);
+    expect(html).not.toContain(byPrice[0]!);
+  });
+
+  test('a comparison of two lots shows nutrients on a DM basis and the delivered cost per pound of protein', async ({ page, request }) => {
+    await page.goto('/hay?zip=66502&sort=rfv');
+    const [first, second] = await apiTitles(request, 'zip=66502&sort=rfv&pageSize=2');
+    await page.getByRole('button', { name: `Compare ${first}` }).click();
+    await page.getByRole('button', { name: `Compare ${second}` }).click();
+    await expect(page.getByRole('button', { name: `Compare ${first}` })).toHaveAttribute('aria-pressed', 'true');
+    await page.getByRole('link', { name: 'Compare 2 lots' }).click();
+
+    await expect(page).toHaveURL(/\/hay\/compare\?ids=\d+(%2C|,)\d+&zip=66502/);
+    await expect(page.getByRole('heading', { level: 1, name: 'Compare hay' })).toBeVisible();
+    await expect(page.getByRole('columnheader', { name: new RegExp(first!) })).toBeVisible();
+    const proteinRow = page.getByRole('row', { name: /Cost per lb of crude protein/ });
+    await expect(proteinRow.getByRole('cell')).toHaveCount(2);
+    await expect(proteinRow.getByRole('cell').first()).toHaveText(/\$\d+\.\d\d/);
+    await expect(page.getByRole('row', { name: /Freight/ }).getByRole('cell').first()).toHaveText(/\$[\d,]+ \(1 load × \d+ mi × \$\d+\.\d\d per loaded mile\)/);
+    await expect(page.getByRole('rowheader', { name: /Crude protein \(CP\)/ })).toBeVisible();
+    await expect(page.locator('app-nutrient-chart canvas')).toBeVisible();
+    await expect(page.getByRole('complementary', { name: 'Caution' })).toContainText('veterinarian or an equine nutritionist');
+
+    // The comparison is server-rendered too.
+    const html = await (await request.get(new URL(page.url()).pathname + new URL(page.url()).search)).text();
+    expect(html).toContain('Cost per lb of crude protein');
+    expect(html).toContain(first!);
+  });
+
+  test('a visitor plans a herd, gets the cheapest delivered mix and puts it in the cart', async ({ page }) => {
+    await page.goto('/hay');
+    await page.getByRole('link', { name: /herd planner/i }).first().click();
+    await expect(page.getByRole('heading', { level: 1, name: 'Herd planner' })).toBeVisible();
+    await expect(page.getByText(/NRC \(2007\)/).first()).toBeVisible();
+    await page.getByRole('spinbutton', { name: 'Horses' }).fill('4');
+    await page.getByLabel('Days to cover').fill('180');
+    // 4 × 1,100 lb at maintenance: 4 × 499.0 kg × 0.0333 = 66.5 Mcal a day (NRC 2007).
+    await expect(page.getByRole('row', { name: /Herd, per day/ })).toContainText('66.5 Mcal');
+
+    await page.getByLabel('Deliver to ZIP').fill('66044');
+    await page.getByRole('button', { name: 'Find the cheapest mix' }).click();
+    await expect(page.getByText(/^Buy [\d.,]+ t of hay from/)).toBeVisible({ timeout: 20_000 });
+    await page.getByRole('button', { name: 'Put this plan in my cart' }).click();
+    await page.getByRole('link', { name: 'Open your cart' }).click();
+
+    await expect(page.getByRole('heading', { level: 1, name: 'Your cart' })).toBeVisible();
+    await expect(page.getByRole('row', { name: /Total/ })).toContainText('$');
+    await expect(page.getByText('Checkout is not open yet.')).toBeVisible();
+    // The cart survives a reload (kept in the browser).
+    await page.reload();
+    await expect(page.getByRole('row', { name: /Total/ })).toBeVisible();
+  });
+});

@@ -1,0 +1,92 @@
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { toSignal } from '@angular/core/rxjs-interop';
+import { FormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { ActivatedRoute, Router, RouterLink } from '@angular/router';
+import { catchError, map, of, startWith, switchMap } from 'rxjs';
+import type { LotComparison } from '../../../../../shared/contracts/compare';
+import { apiErrorMessage } from '../../../core/api-error';
+import { CompareApi } from './compare-api';
+import { compareSections } from './compare-rows';
+import { CompareSelection } from './compare-selection';
+import { NutrientChart, type ChartSeries } from './nutrient-chart';
+
+type CompareState = { status: 'idle' } | { status: 'loading' } | { status: 'ok'; result: LotComparison } | { status: 'error'; message: string };
+
+/** Up to four lots side by side: nutrients on a DM basis and what each costs per unit delivered. */
+@Component({
+  selector: 'app-lot-compare-page',
+  imports: [FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar, NutrientChart],
+  templateUrl: './lot-compare-page.html',
+  styleUrl: './lot-compare-page.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class LotComparePage {
+  private readonly api = inject(CompareApi);
+  private readonly route = inject(ActivatedRoute);
+  private readonly router = inject(Router);
+  private readonly selection = inject(CompareSelection);
+
+  protected readonly params = toSignal(this.route.queryParamMap.pipe(map((p) => ({ ids: p.get('ids') ?? '', zip: p.get('zip') ?? '', tons: p.get('tons') ?? '' }))), {
+    initialValue: { ids: '', zip: '', tons: '' },
+  });
+  protected readonly ids = computed(() =>
+    this.params()
+      .ids.split(',')
+      .map((s) => Number(s.trim()))
+      .filter((n) => Number.isInteger(n) && n > 0),
+  );
+
+  protected readonly state = toSignal(
+    this.route.queryParamMap.pipe(
+      switchMap((p) => {
+        const ids = (p.get('ids') ?? '').split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0);
+        if (ids.length === 0) return of<CompareState>({ status: 'idle' });
+        return this.api.compare({ ids, zip: p.get('zip') ?? undefined, tons: p.get('tons') ?? undefined }).pipe(
+          map((result): CompareState => ({ status: 'ok', result })),
+          catchError((error) => of<CompareState>({ status: 'error', message: apiErrorMessage(error) })),
+          startWith<CompareState>({ status: 'loading' }),
+        );
+      }),
+    ),
+    { initialValue: { status: 'loading' } as CompareState },
+  );
+
+  protected readonly result = computed(() => {
+    const s = this.state();
+    return s.status === 'ok' ? s.result : null;
+  });
+  protected readonly error = computed(() => {
+    const s = this.state();
+    return s.status === 'error' ? s.message : null;
+  });
+  protected readonly sections = computed(() => compareSections(this.result()?.items ?? []));
+  protected readonly chartLabels = ['Crude protein', 'ADF', 'NDF', 'NSC', 'TDN'];
+  protected readonly chartSeries = computed<ChartSeries[]>(() =>
+    (this.result()?.items ?? []).map((l) => ({
+      label: l.title,
+      values: [l.nutrients.crudeProteinPct, l.nutrients.adfPct, l.nutrients.ndfPct, l.nutrients.nscPct, l.nutrients.tdnPct],
+    })),
+  );
+  protected readonly atFarmNotes = computed(() => {
+    const notes = (this.result()?.items ?? []).filter((l) => l.pricing.note).map((l) => `${l.title}: ${l.pricing.note}`);
+    return [...new Set(notes)];
+  });
+
+  constructor() {
+    afterNextRender(() => this.selection.restore());
+  }
+
+  protected priceDelivery(zip: string, tons: string): void {
+    void this.router.navigate([], { relativeTo: this.route, queryParams: { zip: zip.trim() || undefined, tons: tons.trim() || undefined }, queryParamsHandling: 'merge' });
+  }
+
+  protected removeLot(id: number): void {
+    this.selection.remove(id);
+    const ids = this.ids().filter((x) => x !== id);
+    void this.router.navigate([], { relativeTo: this.route, queryParams: { ids: ids.length ? ids.join(',') : undefined }, queryParamsHandling: 'merge' });
+  }
+}

@@ -1,0 +1,73 @@
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { FormsModule } from '@angular/forms';
+import { MatButton, MatIconButton } from '@angular/material/button';
+import { MatFormField, MatLabel } from '@angular/material/form-field';
+import { MatIcon } from '@angular/material/icon';
+import { MatInput } from '@angular/material/input';
+import { RouterLink } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import type { SavedSearchView } from '../../../../../shared/contracts/saved-searches';
+import { apiErrorMessage } from '../../../core/api-error';
+import { Session } from '../../../core/session';
+import { SavedSearchesApi } from './saved-searches-api';
+
+/** Save the catalogue query in the URL, with an e-mail when a newly approved lot matches; list and delete saved ones. */
+@Component({
+  selector: 'app-saved-searches-panel',
+  imports: [FormsModule, RouterLink, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatInput],
+  templateUrl: './saved-searches-panel.html',
+  styleUrl: './saved-searches-panel.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class SavedSearchesPanel {
+  private readonly api = inject(SavedSearchesApi);
+  protected readonly session = inject(Session);
+
+  /** The catalogue query currently in the URL. */
+  readonly query = input.required<Record<string, string>>();
+
+  protected readonly saved = signal<SavedSearchView[]>([]);
+  protected readonly name = signal('');
+  protected readonly message = signal<string | null>(null);
+  protected readonly busy = signal(false);
+  protected readonly isBuyer = computed(() => this.session.role() === 'buyer');
+  protected readonly returnTo = computed(() => '/hay?' + new URLSearchParams(this.query()).toString());
+
+  constructor() {
+    afterNextRender(() => void this.load());
+  }
+
+  protected async saveSearch(): Promise<void> {
+    const name = this.name().trim() || 'My hay search';
+    this.busy.set(true);
+    try {
+      const created = await firstValueFrom(this.api.save({ name, query: this.query(), alerts: true }));
+      this.saved.update((list) => [created, ...list]);
+      this.name.set('');
+      this.message.set(`Saved “${created.name}”. We'll e-mail you when a newly approved lot matches.`);
+    } catch (error) {
+      this.message.set(apiErrorMessage(error));
+    } finally {
+      this.busy.set(false);
+    }
+  }
+
+  protected async deleteSearch(search: SavedSearchView): Promise<void> {
+    try {
+      await firstValueFrom(this.api.remove(search.id));
+      this.saved.update((list) => list.filter((s) => s.id !== search.id));
+      this.message.set(`Deleted “${search.name}”.`);
+    } catch (error) {
+      this.message.set(apiErrorMessage(error));
+    }
+  }
+
+  private async load(): Promise<void> {
+    if (!this.isBuyer()) return;
+    try {
+      this.saved.set(await firstValueFrom(this.api.list()));
+    } catch (error) {
+      this.message.set(apiErrorMessage(error));
+    }
+  }
+}

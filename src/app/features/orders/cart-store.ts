@@ -1,0 +1,84 @@
+import { DOCUMENT, isPlatformBrowser } from '@angular/common';
+import { computed, inject, Injectable, PLATFORM_ID, signal } from '@angular/core';
+
+/**
+ * One lot in the cart. Prices are a snapshot taken when the line was added (integer cents);
+ * checkout will price the order again from the live lot.
+ */
+export interface CartLine {
+  lotId: number;
+  title: string;
+  farmName: string;
+  tons: number;
+  bales: number;
+  hayCents: number;
+  /** Freight estimate, whole cents; null when not quoted. */
+  freightCents: number | null;
+}
+
+const STORAGE_KEY = 'baleproof.cart.v1';
+
+/**
+ * The buyer's cart. Lives in the browser (localStorage) so it survives reloads and works signed out;
+ * the server always renders an empty cart, and `restore()` runs after the first render.
+ */
+@Injectable({ providedIn: 'root' })
+export class CartStore {
+  private readonly browser = isPlatformBrowser(inject(PLATFORM_ID));
+  private readonly document = inject(DOCUMENT);
+  private readonly storage = this.browser ? (this.document.defaultView?.localStorage ?? null) : null;
+  private readonly state = signal<readonly CartLine[]>([]);
+  private restored = false;
+
+  readonly lines = this.state.asReadonly();
+  readonly count = computed(() => this.state().length);
+  readonly tons = computed(() => this.state().reduce((sum, l) => sum + l.tons, 0));
+  readonly hayCents = computed(() => this.state().reduce((sum, l) => sum + l.hayCents, 0));
+  readonly freightCents = computed(() => this.state().reduce((sum, l) => sum + (l.freightCents ?? 0), 0));
+  readonly totalCents = computed(() => this.hayCents() + this.freightCents());
+
+  /** Adds lines; a lot already in the cart is replaced by the new quantity. */
+  addLines(lines: readonly CartLine[]): void {
+    this.restore();
+    const incoming = new Map(lines.map((l) => [l.lotId, l]));
+    this.save([...this.state().filter((l) => !incoming.has(l.lotId)), ...lines]);
+  }
+
+  remove(lotId: number): void {
+    this.save(this.state().filter((l) => l.lotId !== lotId));
+  }
+
+  clear(): void {
+    this.save([]);
+  }
+
+  restore(): void {
+    if (!this.browser || this.restored) return;
+    this.restored = true;
+    try {
+      const raw = JSON.parse(this.storage?.getItem(STORAGE_KEY) ?? '[]') as unknown;
+      if (Array.isArray(raw)) this.state.set(raw.filter(isCartLine));
+    } catch {
+      // A damaged cart is dropped rather than shown wrong.
+    }
+  }
+
+  private save(lines: readonly CartLine[]): void {
+    this.state.set(lines);
+    if (this.browser) this.storage?.setItem(STORAGE_KEY, JSON.stringify(lines));
+  }
+}
+
+function isCartLine(x: unknown): x is CartLine {
+  const l = x as Partial<CartLine> | null;
+  return (
+    !!l &&
+    Number.isInteger(l.lotId) &&
+    typeof l.title === 'string' &&
+    typeof l.farmName === 'string' &&
+    typeof l.tons === 'number' &&
+    Number.isInteger(l.bales) &&
+    Number.isInteger(l.hayCents) &&
+    (l.freightCents === null || Number.isInteger(l.freightCents))
+  );
+}

@@ -1,0 +1,62 @@
+import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { FormsModule } from '@angular/forms';
+import { MatButton } from '@angular/material/button';
+import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
+import { MatInput } from '@angular/material/input';
+import { MatProgressBar } from '@angular/material/progress-bar';
+import { RouterLink } from '@angular/router';
+import { firstValueFrom } from 'rxjs';
+import type { PurchasePlanResponse } from '../../../../shared/contracts/planner';
+import type { HerdNeedsRequest } from '../../../../shared/planner/herd-needs';
+import { apiErrorMessage } from '../../core/api-error';
+import { dollars, fixed } from '../catalogue/format';
+import { CartStore } from '../orders/cart-store';
+import { PlannerApi } from './planner-api';
+
+/** The cheapest delivered mix of listed lots that meets the herd's energy and protein, and one click to the cart. */
+@Component({
+  selector: 'app-purchase-plan-panel',
+  imports: [FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar],
+  templateUrl: './purchase-plan-panel.html',
+  styleUrl: './purchase-plan-panel.scss',
+  changeDetection: ChangeDetectionStrategy.OnPush,
+})
+export class PurchasePlanPanel {
+  private readonly api = inject(PlannerApi);
+  private readonly cart = inject(CartStore);
+
+  readonly herd = input.required<HerdNeedsRequest>();
+
+  protected readonly zip = signal('');
+  protected readonly maxDistanceMi = signal<number | null>(300);
+  protected readonly busy = signal(false);
+  protected readonly error = signal<string | null>(null);
+  protected readonly result = signal<PurchasePlanResponse | null>(null);
+  protected readonly added = signal(false);
+  protected readonly dollars = dollars;
+  protected readonly fixed = fixed;
+
+  protected async findPlan(): Promise<void> {
+    this.busy.set(true);
+    this.error.set(null);
+    this.added.set(false);
+    try {
+      const maxDistanceMi = this.maxDistanceMi();
+      this.result.set(
+        await firstValueFrom(this.api.purchasePlan({ herd: this.herd(), zip: this.zip().trim(), ...(maxDistanceMi ? { maxDistanceMi } : {}) })),
+      );
+    } catch (error) {
+      this.result.set(null);
+      this.error.set(apiErrorMessage(error));
+    } finally {
+      this.busy.set(false);
+    }
+  }
+
+  protected addPlanToCart(plan: PurchasePlanResponse): void {
+    this.cart.addLines(
+      plan.lines.map((l) => ({ lotId: l.lotId, title: l.title, farmName: l.farmName, tons: l.tons, bales: l.bales, hayCents: l.hayCents, freightCents: l.freightCents })),
+    );
+    this.added.set(true);
+  }
+}
