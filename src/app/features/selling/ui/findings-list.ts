@@ -26,7 +26,9 @@ const ICONS = { error: 'error', warning: 'warning', info: 'info' } as const;
     li.warning { background: var(--bp-warn-bg); color: var(--bp-warn); }
     li.info { background: var(--bp-info-bg); color: var(--bp-info); }
     li span { color: var(--mat-sys-on-surface); }
+    li mat-icon { flex: none; }
     .ok { display: flex; gap: 8px; align-items: center; color: var(--bp-ok); }
+    .ok mat-icon { flex: none; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
