@@ -13,6 +13,17 @@ test.describe('catalogue', () => {
     expect(first).toMatch(/<strong[^>]*>2\d<\/strong> lots/);
   });
 
+  test('the browser reuses the data the server rendered instead of fetching it again', async ({ page }) => {
+    const lotCalls: string[] = [];
+    page.on('request', (r) => {
+      if (new URL(r.url()).pathname.startsWith('/api/lots')) lotCalls.push(r.url());
+    });
+    await page.goto('/hay?q=North%20Pivot');
+    await expect(page.getByRole('link', { name: 'Alfalfa, 2nd cutting — North Pivot' })).toBeVisible();
+    await page.waitForLoadState('networkidle');
+    expect(lotCalls).toEqual([]);
+  });
+
   test('an unknown address answers 404 with a helpful page', async ({ request, page }) => {
     expect((await request.get('/no-such-page')).status()).toBe(404);
     await page.goto('/no-such-page');

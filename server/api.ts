@@ -22,7 +22,7 @@ import { lotCompareRouter } from './features/lots/lot-compare.router';
 import { plannerRouter } from './features/planner/planner.router';
 import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
 import type { Logger } from './logger';
-import { csrfProtection } from './middleware/csrf';
+import { createCsrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 
 export interface ApiDeps {
@@ -74,10 +74,11 @@ export function createApi(deps: ApiDeps): Express {
   api.use(createSessionMiddleware(deps));
   configurePassport(db);
   api.use(passport.session());
-  api.use(csrfProtection(env.SESSION_SECRET, cookiesAreSecure(env)));
+  const csrf = createCsrf(env.SESSION_SECRET, cookiesAreSecure(env));
+  api.use(csrf.requireToken);
 
   api.use('/health', healthRouter(db));
-  api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT }));
+  api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, issueCsrfCookie: csrf.issueCookie }));
   api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(db));
   api.use('/admin', adminRouter(db));

@@ -11,7 +11,7 @@ import { createApi } from '../server/api';
 import { createAppDeps } from '../server/app-deps';
 import { mediaRouter } from '../server/features/media/media.router';
 import { cookiesAreSecure } from '../server/env';
-import { csrfProtection } from '../server/middleware/csrf';
+import { createCsrf } from '../server/middleware/csrf';
 
 const browserDistFolder = join(import.meta.dirname, '../browser');
 
@@ -28,7 +28,7 @@ app.use('/media', mediaRouter(deps.storage));
 app.use(helmet({ contentSecurityPolicy: false }));
 
 // Pages hand out the CSRF cookie too: a server-rendered page may make its first API call a POST.
-app.use(csrfProtection(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)));
+app.use(createCsrf(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)).issueCookie);
 
 app.use(
   express.static(browserDistFolder, {

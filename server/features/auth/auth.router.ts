@@ -1,4 +1,4 @@
-import { Router, type Request } from 'express';
+import { Router, type Request, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
@@ -29,7 +29,7 @@ export function configurePassport(db: Db): void {
   });
 }
 
-export function authRouter(db: Db, options: { signInLimit: number }): Router {
+export function authRouter(db: Db, options: { signInLimit: number; issueCsrfCookie: RequestHandler }): Router {
   const auth = new AuthService(db);
   const router = Router();
 
@@ -44,7 +44,8 @@ export function authRouter(db: Db, options: { signInLimit: number }): Router {
       next(new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
   });
 
-  router.get('/me', (req, res) => {
+  // The app's first call: it also hands out the CSRF cookie for API clients that start here.
+  router.get('/me', options.issueCsrfCookie, (req, res) => {
     res.json({ user: req.user ?? null });
   });
 

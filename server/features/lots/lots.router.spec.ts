@@ -36,6 +36,12 @@ describe('lots API', () => {
     expect(rich.priceCentsPerDmTon).toBe(Math.round(32000 / 0.88));
   });
 
+  it('sets no cookie on a catalogue read, so server-rendered pages can hand the response to the browser', async () => {
+    const res = await t.agent().get(`/lots?q=${tag}`);
+    expect(res.status).toBe(200);
+    expect(res.headers['set-cookie']).toBeUndefined();
+  });
+
   it('filters by RFV and protein ranges', async () => {
     expect(titles((await search('rfvMin=140')).body).sort()).toEqual(['far', 'rich']);
     expect(titles((await search('cpMin=16&cpMax=20')).body)).toEqual(['far']);
