@@ -38,6 +38,14 @@ test.describe('buyers find and choose hay', () => {
     await expect(page.getByLabel('RFV from')).toHaveValue('');
   });
 
+  test('an empty result says so and offers to drop one filter at a time', async ({ page }) => {
+    await page.goto('/hay?rfvMin=390&forageType=alfalfa');
+    await expect(page.getByRole('heading', { name: 'No lots match' })).toBeVisible();
+    await page.getByRole('button', { name: 'Remove RFV from (390)' }).click();
+    await expect(page).toHaveURL(/\/hay\?forageType=alfalfa$/);
+    await expect(page.getByRole('list', { name: 'Hay lots' }).getByRole('listitem').first()).toBeVisible();
+  });
+
   test('sorts by price and pages through the results with a stable total', async ({ page, request }) => {
     await page.goto('/hay');
     await page.getByRole('combobox', { name: 'Sort by' }).click();

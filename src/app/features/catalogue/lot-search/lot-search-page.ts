@@ -17,7 +17,7 @@ import { LotCard } from '../lot-card/lot-card';
 import { CompareSelection } from '../lot-compare/compare-selection';
 import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { LotsApi } from '../lots-api';
-import { FILTER_KEYS, queryFromForm, SORT_OPTIONS } from './search-query';
+import { FILTER_KEYS, FILTER_LABELS, queryFromForm, SORT_OPTIONS } from './search-query';
 
 type SearchState = { status: 'loading' } | { status: 'ok'; result: LotSearchResult } | { status: 'error'; message: string };
 
@@ -69,6 +69,14 @@ export class LotSearchPage {
   protected readonly sort = computed(() => this.params()['sort'] ?? 'newest');
   /** The comparison link carries the ZIP so delivered prices use the same place. */
   protected readonly compareParams = computed(() => ({ ids: this.compare.ids().join(','), zip: this.params()['zip'] }));
+  /** Filters in the URL, each removable on its own from the empty state. */
+  protected readonly activeFilters = computed(() =>
+    FILTER_KEYS.filter((k) => this.params()[k] !== undefined && !(k === 'radiusMi' && this.params()['zip'] !== undefined)).map((key) => ({
+      key,
+      label: FILTER_LABELS[key],
+      value: key.endsWith('Only') ? '' : this.params()[key],
+    })),
+  );
   protected readonly hasFilters = computed(() => FILTER_KEYS.some((k) => this.params()[k] !== undefined));
 
   constructor() {
@@ -84,7 +92,13 @@ export class LotSearchPage {
   }
 
   protected applyFilters(): void {
-    this.navigate({ ...queryFromForm(this.filters.getRawValue()), sort: this.params()['sort'], page: undefined });
+    this.navigate({ ...queryFromForm(this.filters.getRawValue()), sort: this.params()['sort'], pageSize: this.params()['pageSize'], page: undefined });
+  }
+
+  protected removeFilter(key: string): void {
+    // A ZIP without it would leave a radius (or a distance sort) the API rejects, so they go together.
+    const drop = key === 'zip' ? { zip: undefined, radiusMi: undefined, sort: this.params()['sort'] === 'distance' ? undefined : this.params()['sort'] } : { [key]: undefined };
+    this.navigate({ ...this.params(), ...drop, page: undefined });
   }
 
   protected clearFilters(): void {

@@ -21,6 +21,29 @@ export const FILTER_KEYS = [
   'verifiedOnly',
 ] as const;
 
+/** Short names of the filters, for the empty state's "remove this filter" buttons. */
+export const FILTER_LABELS: Record<(typeof FILTER_KEYS)[number], string> = {
+  q: 'Search words',
+  rfvMin: 'RFV from',
+  rfvMax: 'RFV to',
+  rfqMin: 'Min RFQ',
+  cpMin: 'CP from',
+  cpMax: 'CP to',
+  adfMax: 'Max ADF',
+  ndfMax: 'Max NDF',
+  nscMax: 'Max NSC',
+  forageType: 'Forage',
+  baleType: 'Bale type',
+  cutting: 'Cutting',
+  harvestYear: 'Harvest year',
+  priceMax: 'Max $/ton',
+  tonsMin: 'Min tons',
+  zip: 'ZIP and distance',
+  radiusMi: 'Within miles',
+  compliantOnly: 'Sampled to protocol only',
+  verifiedOnly: 'Certified lab only',
+};
+
 export const SORT_OPTIONS = [
   { value: 'newest', label: 'Newest' },
   { value: 'price', label: 'Price per ton' },

@@ -31,7 +31,10 @@ export class SavedSearchesPanel {
   protected readonly message = signal<string | null>(null);
   protected readonly busy = signal(false);
   protected readonly isBuyer = computed(() => this.session.role() === 'buyer');
-  protected readonly returnTo = computed(() => '/hay?' + new URLSearchParams(this.query()).toString());
+  protected readonly returnTo = computed(() => {
+    const search = new URLSearchParams(this.query()).toString();
+    return search ? `/hay?${search}` : '/hay';
+  });
 
   constructor() {
     afterNextRender(() => void this.load());
