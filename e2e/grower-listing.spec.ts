@@ -1,5 +1,5 @@
 import { expect, test, type Page } from '@playwright/test';
-import { makeJpeg, makePdf } from '../tests/support/upload-fixtures';
+import { makeJpeg, makeNoisyJpeg, makePdf } from '../tests/support/upload-fixtures';
 
 // Demo accounts from the seed (README lists them).
 const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
@@ -27,7 +27,7 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   const title = `Alfalfa, 2nd cutting — ${field}`;
   const photos = [
     { name: 'stack-north.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(2400, 1800, 1) },
-    { name: 'bale-ends.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(2200, 1700, 2) },
+    { name: 'bale-ends.jpg', mimeType: 'image/jpeg', buffer: await makeNoisyJpeg(2200, 1700, 2) },
   ];
 
   await signIn(page, GROWER);
@@ -74,13 +74,28 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await page.getByLabel('Lab report PDF').setInputFiles({ name: 'hp-2231.pdf', mimeType: 'application/pdf', buffer: makePdf('Report HP-2231') });
   await saveAndContinue(page);
 
-  // Step 5: two photos, each with its own progress bar.
+  // Step 5: two photos, each with its own progress bar. Uploads are slowed down so progress can be seen.
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Network.enable');
+  await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 1_500_000 });
+  await page.evaluate(() => {
+    const seen: string[] = ((window as unknown as { progressSeen: string[] }).progressSeen = []);
+    new MutationObserver((records) => {
+      for (const r of records) {
+        const el = r.target as Element;
+        if (el.getAttribute('role') === 'progressbar') seen.push(el.getAttribute('aria-valuenow') ?? '');
+      }
+    }).observe(document.body, { subtree: true, attributes: true, attributeFilter: ['aria-valuenow'] });
+  });
   await page.getByLabel('Choose photos').setInputFiles(photos);
   for (const p of photos) {
     const bar = page.getByRole('progressbar', { name: `Upload of ${p.name}` });
     await expect(bar).toBeVisible();
-    await expect(bar).toHaveAttribute('aria-valuenow', '100');
+    await expect(bar).toHaveAttribute('aria-valuenow', '100', { timeout: 30_000 });
   }
+  const seen = await page.evaluate(() => (window as unknown as { progressSeen: string[] }).progressSeen.map(Number));
+  expect(seen.some((v) => v > 0 && v < 100)).toBe(true);
+  await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
   await expect(page.getByRole('list', { name: 'Photos of this lot' }).getByRole('listitem')).toHaveCount(2);
   await page.getByRole('button', { name: 'Make cover' }).click();
   await expect(page.getByRole('list', { name: 'Photos of this lot' }).getByText('Cover', { exact: true })).toHaveCount(1);

@@ -42,3 +42,14 @@ export function makePdf(text = 'Lab report'): Buffer {
   body += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
   return Buffer.from(body, 'latin1');
 }
+
+/** A JPEG of random pixels: it barely compresses, so it is large enough to watch an upload progress. */
+export async function makeNoisyJpeg(width = 1600, height = 1200, seed = 1): Promise<Buffer> {
+  const pixels = Buffer.alloc(width * height * 3);
+  let x = Math.imul(seed, 2654435761) >>> 0;
+  for (let i = 0; i < pixels.length; i++) {
+    x = (Math.imul(x, 1103515245) + 12345) >>> 0;
+    pixels[i] = x >>> 24;
+  }
+  return sharp(pixels, { raw: { width, height, channels: 3 } }).jpeg({ quality: 92 }).toBuffer();
+}

@@ -13,6 +13,7 @@ import { apiErrorMessage } from '../../core/api-error';
 import { fixed } from '../catalogue/format';
 import { AnalysisPreview } from '../selling/lot-form/analysis-preview';
 import { VALUE_FIELDS } from '../selling/lot-form/analysis-step';
+import { CautionsList } from '../selling/ui/cautions-list';
 import { FindingsList } from '../selling/ui/findings-list';
 import { STATUS_LABELS } from '../selling/ui/status-label';
 import { ReviewApi } from './review-api';
@@ -20,7 +21,7 @@ import { ReviewApi } from './review-api';
 /** One submitted lot: the report PDF beside the entered values and the engine's findings; approve or return. */
 @Component({
   selector: 'app-review-lot-page',
-  imports: [RouterLink, ReactiveFormsModule, MatButton, MatIcon, MatFormField, MatLabel, MatInput, AnalysisPreview, FindingsList],
+  imports: [RouterLink, ReactiveFormsModule, MatButton, MatIcon, MatFormField, MatLabel, MatInput, AnalysisPreview, FindingsList, CautionsList],
   templateUrl: './review-lot-page.html',
   styleUrl: './review-lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -39,6 +40,11 @@ export class ReviewLotPage implements OnInit {
   protected readonly positions = CORE_POSITION_LABELS;
   protected readonly fixed = fixed;
   protected readonly fields = VALUE_FIELDS;
+  protected readonly cautionInput = computed(() => {
+    const l = this.view()?.lot;
+    if (!l?.lot || !l.quantity) return null;
+    return { forageClass: l.forageClass, baleType: l.quantity.baleType, moistureAtBalingPct: l.lot.moistureAtBalingPct, storage: l.lot.storage, nscFlag: l.evaluation?.nscFlag ?? null };
+  });
   protected readonly pdfUrl = computed(() => {
     const url = this.view()?.lot.analysis?.reportFile?.url;
     // Our own API, same origin: safe to frame.

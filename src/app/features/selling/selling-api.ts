@@ -1,4 +1,4 @@
-import { HttpClient, HttpEventType } from '@angular/common/http';
+import { HttpClient, HttpEventType, HttpXhrBackend, HttpXsrfTokenExtractor } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { filter, map, Observable } from 'rxjs';
 import type { PhotoView } from '../../../../shared/contracts/lots';
@@ -12,6 +12,12 @@ export type UploadEvent<T> = { kind: 'progress'; progress: number } | { kind: 'd
 @Injectable({ providedIn: 'root' })
 export class SellingApi {
   private readonly http = inject(HttpClient);
+  /**
+   * Uploads go through XMLHttpRequest: the app's fetch-based client cannot report upload progress.
+   * This client skips the interceptors, so the CSRF header is added here.
+   */
+  private readonly xhr = new HttpClient(inject(HttpXhrBackend));
+  private readonly xsrf = inject(HttpXsrfTokenExtractor);
 
   readonly templateUrl = '/api/selling/analysis-template.csv';
 
@@ -65,7 +71,9 @@ export class SellingApi {
   }
 
   private upload<T>(url: string, body: FormData): Observable<UploadEvent<T>> {
-    return this.http.post<T>(url, body, { reportProgress: true, observe: 'events' }).pipe(
+    const token = this.xsrf.getToken();
+    const headers: Record<string, string> = token ? { 'X-XSRF-TOKEN': token } : {};
+    return this.xhr.post<T>(url, body, { reportProgress: true, observe: 'events', headers }).pipe(
       filter((e) => e.type === HttpEventType.UploadProgress || e.type === HttpEventType.Response),
       map((e): UploadEvent<T> =>
         e.type === HttpEventType.UploadProgress ? { kind: 'progress', progress: e.total ? e.loaded / e.total : 0 } : { kind: 'done', body: (e as { body: T }).body },
