@@ -18,7 +18,10 @@ export interface RenderedVariant {
  */
 export async function renderPhotoVariants(input: Buffer): Promise<{ width: number; height: number; variants: RenderedVariant[] }> {
   const base = sharp(input, { limitInputPixels: MAX_INPUT_PIXELS, failOn: 'error' }).rotate();
-  const { info } = await base.clone().toBuffer({ resolveWithObject: true });
+  // Upright size from the header (EXIF orientation applied): no need to decode the full image for it,
+  // which took most of the time of a large photo.
+  const meta = await sharp(input, { limitInputPixels: MAX_INPUT_PIXELS }).metadata();
+  const info = meta.autoOrient ?? { width: meta.width, height: meta.height };
   const variants: RenderedVariant[] = [];
   for (const width of VARIANT_WIDTHS) {
     if (variants.length > 0 && width > info.width) break;
