@@ -65,10 +65,16 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await page.getByLabel('Lab name').fill('High Plains Forage Testing (invented)');
   await page.getByLabel('Report number').fill('HP-2231');
   await page.getByLabel('Report date').fill('2026-07-14');
-  await page.getByLabel('Dry matter (DM)').fill('88');
-  await page.getByLabel('Crude protein (CP)').fill('20');
-  await page.getByLabel('ADF', { exact: true }).fill('30');
-  await page.getByLabel('NDF', { exact: true }).fill('40');
+  // The values come from the downloadable CSV template, filled in as a grower would in a spreadsheet.
+  const template = await (await page.request.get('/api/selling/analysis-template.csv')).text();
+  const filled = template
+    .replace('dryMatterPct,', 'dryMatterPct,88')
+    .replace('crudeProteinPct,', 'crudeProteinPct,20')
+    .replace('adfPct,', 'adfPct,30')
+    .replace('ndfPct,', 'ndfPct,40');
+  await page.getByLabel('Import values from CSV').setInputFiles({ name: 'values.csv', mimeType: 'text/csv', buffer: Buffer.from(filled) });
+  await expect(page.getByLabel('Dry matter (DM)')).toHaveValue('88');
+  await expect(page.getByLabel('NDF', { exact: true })).toHaveValue('40');
   // RFV of ADF 30 / NDF 40 (Rohweder et al. 1978): (88.9 − 0.779·30)·(120/40)/1.29 ≈ 152.
   await expect(page.locator('[data-figure="rfv"]')).toHaveText('152');
   await page.getByLabel('Lab report PDF').setInputFiles({ name: 'hp-2231.pdf', mimeType: 'application/pdf', buffer: makePdf('Report HP-2231') });
