@@ -171,8 +171,10 @@ export type AnalysisStep = z.infer<typeof AnalysisStepSchema>;
 
 /** The analysis values with the lot's forage class, parsed by the engine's own contract. */
 export function parseAnalysisValues(values: Record<string, unknown>, forageClass: 'legume' | 'grass' | 'mixed') {
-  const parsed = ForageEvaluationRequestSchema.parse({ ...values, forageClass });
-  return parsed;
+  const parsed = ForageEvaluationRequestSchema.safeParse({ ...values, forageClass });
+  if (parsed.success) return parsed.data;
+  // Report paths as the form sends them (`values.adfPct`), so messages land beside their fields.
+  throw new z.ZodError(parsed.error.issues.map((issue) => ({ ...issue, path: ['values', ...issue.path] })));
 }
 
 export const PriceStepSchema = z

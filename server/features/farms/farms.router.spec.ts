@@ -1,4 +1,6 @@
-import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+import Stripe from 'stripe';
+import { createApi } from '../../api';
+import { csrfAgent, startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
 
 const PROFILE = {
@@ -54,6 +56,19 @@ describe('farms API', () => {
     // A second link reuses the same account.
     const account = link.body.url.match(/acct_[a-f0-9]+/)![0];
     expect((await agent.post('/farms/mine/payouts/link')).body.url).toContain(account);
+  });
+
+  it('answers 502 with a clear message when the payment provider is down, keeping the profile', async () => {
+    const { agent: first, email } = await signedInUser(t, 'grower');
+    await first.put('/farms/mine', PROFILE);
+    // Port 9 (discard) on loopback: nothing listens, so every provider call fails fast.
+    const offline = new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: 9, protocol: 'http', maxNetworkRetries: 0, telemetry: false });
+    const agent = csrfAgent(createApi({ ...t.deps, stripe: offline }));
+    await agent.post('/auth/sign-in', { email, password: 'fixture-password' });
+    const res = await agent.post('/farms/mine/payouts/link');
+    expect(res.status).toBe(502);
+    expect(res.body.error).toMatchObject({ code: 'payments_unavailable' });
+    expect((await agent.get('/farms/mine')).body.farm).toMatchObject({ name: PROFILE.name, payouts: { state: 'none' } });
   });
 
   it('is for growers only', async () => {

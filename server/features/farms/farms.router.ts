@@ -21,17 +21,20 @@ export function farmsRouter(deps: ApiDeps): Router {
     res.json({ farm: farmProfileView(await service.save(req.user!.id, input)) });
   });
 
-  router.post('/mine/payouts/link', async (req, res) => {
-    const link = await service.payoutLink(req.user!, deps.env.PUBLIC_URL).catch((err: unknown) => {
+  /** Provider failures become a 502 the grower can act on; our own errors pass through. */
+  const providerCall = <T>(work: Promise<T>): Promise<T> =>
+    work.catch((err: unknown) => {
       if (err instanceof HttpError) throw err;
-      deps.logger.error({ err }, 'payout onboarding link failed');
+      deps.logger.error({ err }, 'payment provider call failed');
       throw new HttpError(502, 'payments_unavailable', 'The payment provider did not answer. Try again in a minute.');
     });
-    res.json(link);
+
+  router.post('/mine/payouts/link', async (req, res) => {
+    res.json(await providerCall(service.payoutLink(req.user!, deps.env.PUBLIC_URL)));
   });
 
   router.post('/mine/payouts/refresh', async (req, res) => {
-    res.json({ farm: farmProfileView(await service.refreshPayouts(req.user!.id)) });
+    res.json({ farm: farmProfileView(await providerCall(service.refreshPayouts(req.user!.id))) });
   });
 
   return router;

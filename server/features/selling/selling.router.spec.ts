@@ -52,6 +52,7 @@ describe('selling API', () => {
     expect(bad.body.error.details[0]).toMatchObject({ path: 'values.adfPct', code: 'ndf-below-adf' });
     const missing = await grower.agent.put(`/selling/lots/${body.id}/analysis`, { ...ANALYSIS_STEP, values: { basis: 'dm', dryMatterPct: 88 } });
     expect(missing.status).toBe(400);
+    expect(missing.body.error.details.map((d: { path: string }) => d.path)).toEqual(expect.arrayContaining(['values.crudeProteinPct', 'values.adfPct', 'values.ndfPct']));
   });
 
   it('stores as-fed values on a dry-matter basis and gives them back as typed', async () => {
