@@ -18,7 +18,7 @@ test.describe('signing in', () => {
       await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: account.nav })).toBeVisible();
       await page.getByRole('button', { name: /Account menu/ }).click();
       await page.getByRole('menuitem', { name: 'Sign out' }).click();
-      await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
+      await expect(page.getByRole('banner').getByRole('link', { name: 'Sign in', exact: true })).toBeVisible();
     });
   }
 
