@@ -1,6 +1,8 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
+import { USER_ROLES } from '../../../shared/contracts/auth';
+import { BALE_TYPES, FORAGE_TYPES } from '../../../shared/contracts/lots';
 
-export const userRole = pgEnum('user_role', ['buyer', 'grower', 'admin']);
+export const userRole = pgEnum('user_role', USER_ROLES);
 
 /** Where a lot is in its life: only `listed` lots are public. */
 export const lotStatus = pgEnum('lot_status', [
@@ -14,32 +16,10 @@ export const lotStatus = pgEnum('lot_status', [
 
 export const forageClass = pgEnum('forage_class', ['legume', 'grass', 'mixed']);
 
-export const forageType = pgEnum('forage_type', [
-  'alfalfa',
-  'clover',
-  'timothy',
-  'orchardgrass',
-  'bermudagrass',
-  'teff',
-  'bromegrass',
-  'fescue',
-  'oat',
-  'alfalfa_grass_mix',
-  'grass_mix',
-]);
+export const forageType = pgEnum('forage_type', FORAGE_TYPES);
 
-/** Bale types as the trade names them; nominal sizes in feet or inches. */
-export const baleType = pgEnum('bale_type', [
-  'small_square_2_string',
-  'small_square_3_string',
-  'large_square_3x3x8',
-  'large_square_3x4x8',
-  'large_square_4x4x8',
-  'round_4x4',
-  'round_4x5',
-  'round_5x5',
-  'round_5x6',
-]);
+/** Bale types as the trade names them; nominal sizes in feet. */
+export const baleType = pgEnum('bale_type', BALE_TYPES);
 
 export const storageKind = pgEnum('storage_kind', ['barn', 'tarped', 'outside']);
 
