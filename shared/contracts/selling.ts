@@ -287,8 +287,3 @@ export interface ReviewLotView {
 
 export type { Finding };
 
-/** The bale shape the sampling protocol cares about (where to core). */
-export function samplingShapeOf(baleType: BaleType): 'small-square' | 'large-square' | 'round' {
-  if (baleType.startsWith('small')) return 'small-square';
-  return baleType.startsWith('round') ? 'round' : 'large-square';
-}

@@ -1,10 +1,11 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import zipcodes from 'zipcodes';
-import { baleShapeOf, type LotDetail, type LotSearch, type LotSearchResult, type LotSummary, type PhotoView } from '../../../shared/contracts/lots';
-import { evaluateForage, evaluateSampling } from '../../../shared/forage';
+import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '../../../shared/contracts/lots';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
+import { evaluationOf } from '../selling/analysis-values';
+import { samplingReportOf } from './sampling-report';
 
 const EARTH_RADIUS_MI = 3958.8;
 
@@ -251,45 +252,8 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise
           reportedRfv: analysis.reportedRfv,
         }
       : null,
-    evaluation: analysis
-      ? evaluateForage({
-          forageClass: lot.forageClass,
-          basis: 'dm',
-          dryMatterPct: analysis.dryMatterPct,
-          crudeProteinPct: analysis.crudeProteinPct,
-          adfPct: analysis.adfPct,
-          ndfPct: analysis.ndfPct,
-          ...optional({
-            ndfd48Pct: analysis.ndfd48Pct,
-            fatPct: analysis.fatPct,
-            ashPct: analysis.ashPct,
-            escPct: analysis.escPct,
-            wscPct: analysis.wscPct,
-            starchPct: analysis.starchPct,
-            calciumPct: analysis.calciumPct,
-            phosphorusPct: analysis.phosphorusPct,
-            reportedRfv: analysis.reportedRfv,
-          }),
-        })
-      : null,
-    samplingReport: sampling
-      ? evaluateSampling(
-          {
-            sampledOn: sampling.sampledOn,
-            coresTaken: sampling.coresTaken,
-            balesSampled: sampling.balesSampled,
-            probeDiameterIn: sampling.probeDiameterIn,
-            probeLengthIn: sampling.probeLengthIn,
-            corePosition: sampling.corePosition,
-            baleShape: baleShapeOf(lot.baleType),
-            harvestStartedOn: lot.harvestStartedOn,
-            harvestEndedOn: lot.harvestEndedOn,
-            lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
-            sampledBy: sampling.sampledBy,
-          },
-          { listedOn: (lot.publishedAt ?? new Date()).toISOString() },
-        )
-      : null,
+    evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
+    samplingReport: sampling ? samplingReportOf(lot, sampling, lot.publishedAt ?? new Date()) : null,
     sampling: sampling
       ? {
           sampledOn: sampling.sampledOn,
@@ -306,7 +270,3 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise
   };
 }
 
-/** Drops null entries so optional engine inputs are simply absent. */
-function optional<T extends Record<string, number | null>>(values: T): { [K in keyof T]?: number } {
-  return Object.fromEntries(Object.entries(values).filter(([, v]) => v !== null)) as { [K in keyof T]?: number };
-}

@@ -10,11 +10,10 @@ import {
   PriceStepSchema,
   QuantityStepSchema,
   SamplingStepSchema,
-  samplingShapeOf,
   stepIndex,
   type LotFormStep,
 } from '../../../shared/contracts/selling';
-import { evaluateSampling } from '../../../shared/forage';
+import { samplingReportOf } from '../lots/sampling-report';
 import type { Db } from '../../db/client';
 import { labAnalyses, lots, samplingRecords } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
@@ -102,16 +101,7 @@ export class LotStepsService {
   async saveSampling(user: Express.User, lotId: number, body: unknown): Promise<void> {
     const input = SamplingStepSchema.parse(body);
     const { lot } = await this.editable(user, lotId, 'sampling');
-    const verdict = evaluateSampling(
-      {
-        ...input,
-        baleShape: samplingShapeOf(lot.baleType),
-        harvestStartedOn: lot.harvestStartedOn,
-        harvestEndedOn: lot.harvestEndedOn,
-        lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
-      },
-      { listedOn: new Date().toISOString() },
-    );
+    const verdict = samplingReportOf(lot, input, new Date());
     await this.db.transaction(async (tx) => {
       const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: new Date() };
       await tx.insert(samplingRecords).values({ lotId, ...values }).onConflictDoUpdate({ target: samplingRecords.lotId, set: values });
@@ -246,22 +236,7 @@ export class LotStepsService {
       .where(eq(samplingRecords.lotId, lotId));
     if (!row) return;
     const { s, lot } = row;
-    const verdict = evaluateSampling(
-      {
-        sampledOn: s.sampledOn,
-        coresTaken: s.coresTaken,
-        balesSampled: s.balesSampled,
-        probeDiameterIn: s.probeDiameterIn,
-        probeLengthIn: s.probeLengthIn,
-        corePosition: s.corePosition,
-        sampledBy: s.sampledBy,
-        baleShape: samplingShapeOf(lot.baleType),
-        harvestStartedOn: lot.harvestStartedOn,
-        harvestEndedOn: lot.harvestEndedOn,
-        lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
-      },
-      { listedOn: new Date().toISOString() },
-    );
+    const verdict = samplingReportOf(lot, s, new Date());
     await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: sql`now()` }).where(eq(samplingRecords.id, s.id));
   }
 }

@@ -1,9 +1,9 @@
 import { and, asc, desc, eq } from 'drizzle-orm';
-import { samplingShapeOf, type EditableLot, LOT_FORM_STEPS } from '../../../shared/contracts/selling';
-import { evaluateSampling } from '../../../shared/forage';
+import { type EditableLot, LOT_FORM_STEPS } from '../../../shared/contracts/selling';
 import type { Db } from '../../db/client';
 import { labAnalyses, photos, samplingRecords, storedFiles } from '../../db/schema';
 import { photoView } from '../lots/lots.service';
+import { samplingReportOf } from '../lots/sampling-report';
 import { enteredValuesOf, evaluationOf } from './analysis-values';
 import { findLotWithFarm } from './lot-access';
 
@@ -80,22 +80,7 @@ export async function editableLot(db: Db, lotId: number): Promise<EditableLot> {
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
     samplingReport:
       sampling && saved('quantity')
-        ? evaluateSampling(
-            {
-              sampledOn: sampling.sampledOn,
-              coresTaken: sampling.coresTaken,
-              balesSampled: sampling.balesSampled,
-              probeDiameterIn: sampling.probeDiameterIn,
-              probeLengthIn: sampling.probeLengthIn,
-              corePosition: sampling.corePosition,
-              baleShape: samplingShapeOf(lot.baleType),
-              harvestStartedOn: lot.harvestStartedOn,
-              harvestEndedOn: lot.harvestEndedOn,
-              lotTons: totalTons,
-              sampledBy: sampling.sampledBy,
-            },
-            { listedOn: (lot.publishedAt ?? new Date()).toISOString() },
-          )
+        ? samplingReportOf(lot, sampling, lot.publishedAt ?? new Date())
         : null,
     missing: [],
   };

@@ -6,7 +6,8 @@ import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/fo
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { CORE_POSITION_LABELS } from '../../../../../shared/contracts/labels';
-import { samplingShapeOf, SamplingStepSchema, type EditableLot } from '../../../../../shared/contracts/selling';
+import { baleShapeOf } from '../../../../../shared/contracts/lots';
+import { SamplingStepSchema, type EditableLot } from '../../../../../shared/contracts/selling';
 import { evaluateSampling } from '../../../../../shared/forage';
 import { FindingsList } from '../ui/findings-list';
 import { SellingApi } from '../selling-api';
@@ -74,7 +75,7 @@ export class SamplingStep {
     return evaluateSampling(
       {
         ...parsed.data,
-        baleShape: samplingShapeOf(lot.quantity.baleType),
+        baleShape: baleShapeOf(lot.quantity.baleType),
         harvestStartedOn: lot.lot.harvestStartedOn,
         harvestEndedOn: lot.lot.harvestEndedOn,
         lotTons: lot.quantity.totalTons,

@@ -1,0 +1,31 @@
+import { baleShapeOf } from '../../../shared/contracts/lots';
+import { evaluateSampling, type SamplingEvaluation, type SamplingRecord } from '../../../shared/forage';
+import type { lots, samplingRecords } from '../../db/schema';
+
+type LotFacts = Pick<typeof lots.$inferSelect, 'baleType' | 'harvestStartedOn' | 'harvestEndedOn' | 'baleCount' | 'avgBaleWeightLb'>;
+type SamplingFacts = Pick<
+  typeof samplingRecords.$inferSelect,
+  'sampledOn' | 'coresTaken' | 'balesSampled' | 'probeDiameterIn' | 'probeLengthIn' | 'corePosition' | 'sampledBy'
+>;
+
+/** The engine's sampling record for a lot: the grower's sampling facts plus the lot's shape, harvest and size. */
+export function samplingRecordOf(lot: LotFacts, s: SamplingFacts): SamplingRecord {
+  return {
+    sampledOn: s.sampledOn,
+    coresTaken: s.coresTaken,
+    balesSampled: s.balesSampled,
+    probeDiameterIn: s.probeDiameterIn,
+    probeLengthIn: s.probeLengthIn,
+    corePosition: s.corePosition,
+    sampledBy: s.sampledBy,
+    baleShape: baleShapeOf(lot.baleType),
+    harvestStartedOn: lot.harvestStartedOn,
+    harvestEndedOn: lot.harvestEndedOn,
+    lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
+  };
+}
+
+/** The sampling record checked against the protocol as of `listedOn` (the sample-age check needs a date). */
+export function samplingReportOf(lot: LotFacts, s: SamplingFacts, listedOn: Date): SamplingEvaluation {
+  return evaluateSampling(samplingRecordOf(lot, s), { listedOn: listedOn.toISOString() });
+}
