@@ -1,4 +1,5 @@
 import sharp from 'sharp';
+import { simplePdf } from '../../server/db/seed/simple-pdf';
 
 /*
  * Upload fixtures made in memory (no binary files in the repository): used by the API tests and the
@@ -20,27 +21,9 @@ export async function makeJpeg(width = 1200, height = 800, seed = 0): Promise<Bu
     .toBuffer();
 }
 
-/** The smallest PDF a reader accepts: one empty page, a cross-reference table and the end marker. */
+/** A small valid one-page PDF with one line of text. */
 export function makePdf(text = 'Lab report'): Buffer {
-  const objects = [
-    '<< /Type /Catalog /Pages 2 0 R >>',
-    '<< /Type /Pages /Kids [3 0 R] /Count 1 >>',
-    '<< /Type /Page /Parent 2 0 R /MediaBox [0 0 612 792] /Contents 4 0 R /Resources << /Font << /F1 5 0 R >> >> >>',
-    null,
-    '<< /Type /Font /Subtype /Type1 /BaseFont /Helvetica >>',
-  ];
-  const stream = `BT /F1 18 Tf 72 720 Td (${text.replace(/[()\\]/g, '')}) Tj ET`;
-  objects[3] = `<< /Length ${stream.length} >>\nstream\n${stream}\nendstream`;
-  let body = '%PDF-1.4\n';
-  const offsets: number[] = [];
-  objects.forEach((obj, i) => {
-    offsets.push(body.length);
-    body += `${i + 1} 0 obj\n${obj}\nendobj\n`;
-  });
-  const xref = body.length;
-  body += `xref\n0 ${objects.length + 1}\n0000000000 65535 f \n${offsets.map((o) => `${String(o).padStart(10, '0')} 00000 n \n`).join('')}`;
-  body += `trailer\n<< /Size ${objects.length + 1} /Root 1 0 R >>\nstartxref\n${xref}\n%%EOF\n`;
-  return Buffer.from(body, 'latin1');
+  return simplePdf([text], { fontSize: 18 });
 }
 
 /** A JPEG of random pixels: it barely compresses, so it is large enough to watch an upload progress. */

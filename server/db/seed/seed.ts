@@ -9,6 +9,7 @@ import { renderPhotoVariants } from '../../features/photos/photo-variants';
 import type { Db } from '../client';
 import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../schema';
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
+import { simplePdf } from './simple-pdf';
 import { DEMO_BUYERS, DEMO_FARMS, DEMO_LABS, DEMO_LOTS, DEMO_PASSWORDS, FORAGE_PROFILES, type DemoLotPlan } from './demo-scenario';
 
 export interface SeedOptions {
@@ -64,7 +65,7 @@ export async function seedDemo({ db, storage, adminEmail, adminPassword, log = (
     }
 
     for (const [index, plan] of DEMO_LOTS.entries()) {
-      const lotId = await insertDemoLot(tx as unknown as Db, plan, index, farmIds.get(plan.farm)!, adminId);
+      const lotId = await insertDemoLot(tx as unknown as Db, storage, plan, index, farmIds.get(plan.farm)!, adminId);
       await addDemoPhotos(tx as unknown as Db, storage, lotId, plan, index);
     }
   });
@@ -85,7 +86,7 @@ async function ensureUser(db: Db, u: { email: string; displayName: string; role:
 const round1 = (x: number) => Math.round(x * 10) / 10;
 const isoDay = (base: string, addDays: number) => new Date(Date.parse(`${base}T00:00:00Z`) + addDays * 86_400_000).toISOString().slice(0, 10);
 
-async function insertDemoLot(db: Db, plan: DemoLotPlan, index: number, farmId: number, adminId: number): Promise<number> {
+async function insertDemoLot(db: Db, storage: FileStorage, plan: DemoLotPlan, index: number, farmId: number, adminId: number): Promise<number> {
   const rand = mulberry32(1000 + index);
   const between = ([lo, hi]: [number, number]) => round1(lo + (hi - lo) * rand());
   const profile = FORAGE_PROFILES[plan.profile]!;
@@ -190,12 +191,23 @@ async function insertDemoLot(db: Db, plan: DemoLotPlan, index: number, farmId: n
     findings: samplingResult.findings,
   });
   if (plan.status !== 'draft') {
+    const labName = DEMO_LABS[index % DEMO_LABS.length]!;
+    const reportNumber = `D-${26000 + index * 17}`;
+    const reportDate = isoDay(sampledOn, 6);
+    const pdf = demoReportPdf({ labName, reportNumber, reportDate, sampledOn, field: plan.field, columns });
+    const reportKey = `reports/${lotId}/demo-${reportNumber}.pdf`;
+    await storage.put(reportKey, pdf);
+    const [report] = await db
+      .insert(storedFiles)
+      .values({ storageKey: reportKey, originalName: `${reportNumber}.pdf`, mimeType: 'application/pdf', sizeBytes: pdf.length, sha256: createHash('sha256').update(pdf).digest('hex') })
+      .returning({ id: storedFiles.id });
     await db.insert(labAnalyses).values({
       lotId,
-      labName: DEMO_LABS[index % DEMO_LABS.length]!,
+      labName,
       labCertified: index % 8 !== 6,
-      reportNumber: `D-${26000 + index * 17}`,
-      reportDate: isoDay(sampledOn, 6),
+      reportNumber,
+      reportDate,
+      reportFileId: report!.id,
       method: index % 3 === 1 ? 'wet_chemistry' : 'nirs',
       ...columns,
       verification: listed ? 'verified' : 'pending',
@@ -236,6 +248,32 @@ async function addDemoPhotos(db: Db, storage: FileStorage, lotId: number, plan: 
       variants,
     });
   }
+}
+
+/** An invented lab report in the layout a forage lab might print: clearly marked as demo data. */
+function demoReportPdf(r: { labName: string; reportNumber: string; reportDate: string; sampledOn: string; field: string; columns: ReturnType<typeof analysisColumns>['columns'] }): Buffer {
+  const c = r.columns;
+  const v = (x: number | null) => (x === null ? 'n/a' : x.toFixed(1));
+  return simplePdf([
+    `${r.labName} - FORAGE ANALYSIS REPORT`,
+    'DEMO DATA - invented for the Baleproof demonstration, not a real analysis',
+    `Report ${r.reportNumber}    Reported ${r.reportDate}    Sampled ${r.sampledOn}`,
+    `Sample: hay, composite of cores, field "${r.field}"`,
+    '',
+    'Component                      As fed     Dry matter',
+    `Dry matter, %                 ${v(c.dryMatterPct)}      100.0`,
+    `Crude protein, %              ${v((c.crudeProteinPct * c.dryMatterPct) / 100)}       ${v(c.crudeProteinPct)}`,
+    `ADF, %                        ${v((c.adfPct * c.dryMatterPct) / 100)}       ${v(c.adfPct)}`,
+    `NDF, %                        ${v((c.ndfPct * c.dryMatterPct) / 100)}       ${v(c.ndfPct)}`,
+    `NDFD 48 h, % of NDF                      ${v(c.ndfd48Pct)}`,
+    `Crude fat, %                                ${v(c.fatPct)}`,
+    `Ash, %                                      ${v(c.ashPct)}`,
+    `ESC, %                                      ${v(c.escPct)}`,
+    `WSC, %                                      ${v(c.wscPct)}`,
+    `Starch, %                                   ${v(c.starchPct)}`,
+    `Calcium, %                                  ${v(c.calciumPct)}`,
+    `Phosphorus, %                               ${v(c.phosphorusPct)}`,
+  ]);
 }
 
 function capitalise(s: string): string {

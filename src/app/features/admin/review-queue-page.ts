@@ -28,8 +28,8 @@ type QueueState = { status: 'loading' } | { status: 'ok'; items: ReviewQueueRow[
                 <a [routerLink]="['/admin/lots', row.id]" class="title">{{ row.title }}</a>
                 <span class="meta">{{ row.farmName }} · {{ row.growerEmail }} · submitted {{ row.submittedAt.slice(0, 16).replace('T', ' ') }}</span>
                 <span class="meta">{{ row.labName ?? 'no lab' }}{{ row.labCertified ? ' (certified)' : row.labCertified === false ? ' (not certified)' : '' }}
-                  @if (row.errorFindings > 0) { · <mat-icon inline class="err">error</mat-icon> {{ row.errorFindings }} errors }
-                  @if (row.warningFindings > 0) { · <mat-icon inline class="warn">warning</mat-icon> {{ row.warningFindings }} warnings }
+                  @if (row.errorFindings > 0) { · <mat-icon inline class="err">error</mat-icon> {{ row.errorFindings }} {{ row.errorFindings === 1 ? 'problem' : 'problems' }} }
+                  @if (row.warningFindings > 0) { · <mat-icon inline class="warn">warning</mat-icon> {{ row.warningFindings }} {{ row.warningFindings === 1 ? 'point to check' : 'points to check' }} }
                 </span>
               </li>
             }
