@@ -6,7 +6,7 @@
 set -euo pipefail
 source "$(dirname "$0")/env.sh"
 
-as_pg() { if [ "$(id -u)" = 0 ]; then runuser -u postgres -- "$@"; else "$@"; fi; }
+as_pg() { if [ "$(id -u)" = 0 ]; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi; }
 
 data_dir() {
   if [ -n "${BALEPROOF_PG_DIR:-}" ]; then echo "$BALEPROOF_PG_DIR"; return; fi
