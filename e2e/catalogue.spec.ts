@@ -26,6 +26,9 @@ test.describe('catalogue', () => {
 
   test('an unknown address answers 404 with a helpful page', async ({ request, page }) => {
     expect((await request.get('/no-such-page')).status()).toBe(404);
+    // A lot that does not exist (or is not public) answers 404 as well, with its own message.
+    expect((await request.get('/hay/999999')).status()).toBe(404);
+    expect(await (await request.get('/hay/999999')).text()).toContain('Lot not found');
     await page.goto('/no-such-page');
     await expect(page.getByRole('heading', { name: 'Page not found' })).toBeVisible();
   });

@@ -6,15 +6,15 @@ import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/fo
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { catchError, map, of, startWith, switchMap } from 'rxjs';
+import { map, of, switchMap } from 'rxjs';
 import type { LotComparison } from '../../../../../shared/contracts/compare';
-import { apiErrorMessage } from '../../../core/api-error';
+import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { CompareApi } from './compare-api';
 import { compareSections } from './compare-rows';
 import { CompareSelection } from './compare-selection';
 import { NutrientChart, type ChartSeries } from './nutrient-chart';
 
-type CompareState = { status: 'idle' } | { status: 'loading' } | { status: 'ok'; result: LotComparison } | { status: 'error'; message: string };
+type CompareState = { status: 'idle' } | RequestState<LotComparison>;
 
 /** Up to four lots side by side: nutrients on a DM basis and what each costs per unit delivered. */
 @Component({
@@ -45,24 +45,14 @@ export class LotComparePage {
       switchMap((p) => {
         const ids = (p.get('ids') ?? '').split(',').map(Number).filter((n) => Number.isInteger(n) && n > 0);
         if (ids.length === 0) return of<CompareState>({ status: 'idle' });
-        return this.api.compare({ ids, zip: p.get('zip') ?? undefined, tons: p.get('tons') ?? undefined }).pipe(
-          map((result): CompareState => ({ status: 'ok', result })),
-          catchError((error) => of<CompareState>({ status: 'error', message: apiErrorMessage(error) })),
-          startWith<CompareState>({ status: 'loading' }),
-        );
+        return requestState<LotComparison>(this.api.compare({ ids, zip: p.get('zip') ?? undefined, tons: p.get('tons') ?? undefined }));
       }),
     ),
     { initialValue: { status: 'loading' } as CompareState },
   );
 
-  protected readonly result = computed(() => {
-    const s = this.state();
-    return s.status === 'ok' ? s.result : null;
-  });
-  protected readonly error = computed(() => {
-    const s = this.state();
-    return s.status === 'error' ? s.message : null;
-  });
+  protected readonly result = computed(() => valueOf(this.state()));
+  protected readonly error = computed(() => errorOf(this.state()));
   protected readonly sections = computed(() => compareSections(this.result()?.items ?? []));
   protected readonly chartLabels = ['Crude protein', 'ADF', 'NDF', 'NSC', 'TDN'];
   protected readonly chartSeries = computed<ChartSeries[]>(() =>

@@ -2,16 +2,14 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, RESPONSE_I
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
-import { catchError, map, of, switchMap } from 'rxjs';
+import { switchMap, tap } from 'rxjs';
 import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, STORAGE_LABELS } from '../../../../../shared/contracts/labels';
 import type { LotDetail } from '../../../../../shared/contracts/lots';
-import { apiErrorMessage } from '../../../core/api-error';
+import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { dollars, fixed } from '../format';
 import { LotsApi } from '../lots-api';
 import { LotGallery } from './lot-gallery';
 import { LotAnalysisPanel } from './lot-analysis-panel';
-
-type LotState = { status: 'loading' } | { status: 'ok'; lot: LotDetail } | { status: 'missing' } | { status: 'error'; message: string };
 
 @Component({
   selector: 'app-lot-page',
@@ -28,33 +26,28 @@ export class LotPage {
 
   private readonly state = toSignal(
     toObservable(this.id).pipe(
-      switchMap((id) =>
-        this.api.get(Number(id)).pipe(
-          map((lot): LotState => ({ status: 'ok', lot })),
-          catchError((error) => {
-            if (error?.status === 404 || error?.status === 400) {
-              if (this.responseInit) this.responseInit.status = 404;
-              return of<LotState>({ status: 'missing' });
-            }
-            return of<LotState>({ status: 'error', message: apiErrorMessage(error) });
-          }),
-        ),
-      ),
+      switchMap((id) => requestState(this.api.get(Number(id)))),
+      // A missing lot answers 404 to the browser too, not a 200 page that says "not found".
+      tap((s) => {
+        if (this.responseInit && s.status === 'error' && isMissing(s.httpStatus)) this.responseInit.status = 404;
+      }),
     ),
-    { initialValue: { status: 'loading' } as LotState },
+    { initialValue: { status: 'loading' } as RequestState<LotDetail> },
   );
 
-  protected readonly lot = computed(() => {
+  protected readonly lot = computed(() => valueOf(this.state()));
+  protected readonly status = computed(() => {
     const s = this.state();
-    return s.status === 'ok' ? s.lot : null;
+    return s.status === 'error' && isMissing(s.httpStatus) ? 'missing' : s.status;
   });
-  protected readonly status = computed(() => this.state().status);
-  protected readonly errorMessage = computed(() => {
-    const s = this.state();
-    return s.status === 'error' ? s.message : '';
-  });
+  protected readonly errorMessage = computed(() => errorOf(this.state()) ?? '');
 
   protected readonly labels = { forage: FORAGE_TYPE_LABELS, bale: BALE_TYPE_LABELS, storage: STORAGE_LABELS, core: CORE_POSITION_LABELS };
   protected readonly dollars = dollars;
   protected readonly fixed = fixed;
+}
+
+/** 400 (not a lot id) and 404 both mean there is no such lot to show. */
+function isMissing(httpStatus: number): boolean {
+  return httpStatus === 404 || httpStatus === 400;
 }

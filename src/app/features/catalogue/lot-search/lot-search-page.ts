@@ -9,17 +9,16 @@ import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { catchError, map, of, startWith, switchMap } from 'rxjs';
+import { switchMap } from 'rxjs';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
 import type { LotSearchResult } from '../../../../../shared/contracts/lots';
-import { apiErrorMessage } from '../../../core/api-error';
+import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { LotCard } from '../lot-card/lot-card';
 import { CompareSelection } from '../lot-compare/compare-selection';
 import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { LotsApi } from '../lots-api';
 import { FILTER_KEYS, FILTER_LABELS, queryFromForm, SORT_OPTIONS } from './search-query';
 
-type SearchState = { status: 'loading' } | { status: 'ok'; result: LotSearchResult } | { status: 'error'; message: string };
 
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
@@ -45,27 +44,11 @@ export class LotSearchPage {
 
   protected readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
 
-  protected readonly state = toSignal(
-    this.route.queryParams.pipe(
-      switchMap((params) =>
-        this.api.search(params).pipe(
-          map((result): SearchState => ({ status: 'ok', result })),
-          catchError((error) => of<SearchState>({ status: 'error', message: apiErrorMessage(error) })),
-          startWith<SearchState>({ status: 'loading' }),
-        ),
-      ),
-    ),
-    { initialValue: { status: 'loading' } as SearchState },
-  );
-
-  protected readonly result = computed(() => {
-    const s = this.state();
-    return s.status === 'ok' ? s.result : null;
+  protected readonly state = toSignal(this.route.queryParams.pipe(switchMap((params) => requestState(this.api.search(params)))), {
+    initialValue: { status: 'loading' } as RequestState<LotSearchResult>,
   });
-  protected readonly error = computed(() => {
-    const s = this.state();
-    return s.status === 'error' ? s.message : null;
-  });
+  protected readonly result = computed(() => valueOf(this.state()));
+  protected readonly error = computed(() => errorOf(this.state()));
   protected readonly sort = computed(() => this.params()['sort'] ?? 'newest');
   /** The comparison link carries the ZIP so delivered prices use the same place. */
   protected readonly compareParams = computed(() => ({ ids: this.compare.ids().join(','), zip: this.params()['zip'] }));
