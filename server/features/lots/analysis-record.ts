@@ -1,4 +1,5 @@
 import { evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '../../../shared/forage';
+import type { labAnalyses } from '../../db/schema';
 
 /**
  * Lab-analysis columns as stored: nutrients converted to a dry-matter basis, plus the figures the
@@ -39,29 +40,33 @@ export function analysisColumns(request: ForageEvaluationRequest): { columns: An
   };
 }
 
-export interface AnalysisColumns {
-  enteredBasis: 'dm' | 'asFed';
-  dryMatterPct: number;
-  crudeProteinPct: number;
-  adfPct: number;
-  ndfPct: number;
-  ndfd48Pct: number | null;
-  fatPct: number | null;
-  ashPct: number | null;
-  escPct: number | null;
-  wscPct: number | null;
-  starchPct: number | null;
-  calciumPct: number | null;
-  phosphorusPct: number | null;
-  reportedRfv: number | null;
-  rfv: number;
-  rfq: number | null;
-  tdnPct: number;
-  tdnMethod: string;
-  deMcalPerKgDm: number;
-  deMethod: string;
-  nscPct: number | null;
-  usdaGrade: string;
-  afgcGrade: string | null;
-  findings: unknown[];
-}
+/** The lab_analyses columns this module fills, typed from the Drizzle schema (the single source of truth). */
+export type AnalysisColumns = Required<
+  Pick<
+    typeof labAnalyses.$inferInsert,
+    | 'enteredBasis'
+    | 'dryMatterPct'
+    | 'crudeProteinPct'
+    | 'adfPct'
+    | 'ndfPct'
+    | 'ndfd48Pct'
+    | 'fatPct'
+    | 'ashPct'
+    | 'escPct'
+    | 'wscPct'
+    | 'starchPct'
+    | 'calciumPct'
+    | 'phosphorusPct'
+    | 'reportedRfv'
+    | 'rfv'
+    | 'rfq'
+    | 'tdnPct'
+    | 'tdnMethod'
+    | 'deMcalPerKgDm'
+    | 'deMethod'
+    | 'nscPct'
+    | 'usdaGrade'
+    | 'afgcGrade'
+    | 'findings'
+  >
+>;
