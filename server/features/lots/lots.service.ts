@@ -5,7 +5,7 @@ import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
 import { evaluationOf } from '../selling/analysis-values';
-import { samplingReportOf } from './sampling-report';
+import { samplingFactsOf, samplingReportOf } from './sampling-report';
 
 const EARTH_RADIUS_MI = 3958.8;
 
@@ -254,18 +254,7 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise
       : null,
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
     samplingReport: sampling ? samplingReportOf(lot, sampling, lot.publishedAt ?? new Date()) : null,
-    sampling: sampling
-      ? {
-          sampledOn: sampling.sampledOn,
-          coresTaken: sampling.coresTaken,
-          balesSampled: sampling.balesSampled,
-          probeDiameterIn: sampling.probeDiameterIn,
-          probeLengthIn: sampling.probeLengthIn,
-          corePosition: sampling.corePosition,
-          sampledBy: sampling.sampledBy,
-          compliant: sampling.compliant,
-        }
-      : null,
+    sampling: sampling ? { ...samplingFactsOf(sampling), compliant: sampling.compliant } : null,
     photos: photoRows.map(photoView),
   };
 }

@@ -8,8 +8,8 @@ type SamplingFacts = Pick<
   'sampledOn' | 'coresTaken' | 'balesSampled' | 'probeDiameterIn' | 'probeLengthIn' | 'corePosition' | 'sampledBy'
 >;
 
-/** The engine's sampling record for a lot: the grower's sampling facts plus the lot's shape, harvest and size. */
-export function samplingRecordOf(lot: LotFacts, s: SamplingFacts): SamplingRecord {
+/** The grower's sampling facts alone (a stored row carries more columns than pages should see). */
+export function samplingFactsOf(s: SamplingFacts): SamplingFacts {
   return {
     sampledOn: s.sampledOn,
     coresTaken: s.coresTaken,
@@ -18,6 +18,13 @@ export function samplingRecordOf(lot: LotFacts, s: SamplingFacts): SamplingRecor
     probeLengthIn: s.probeLengthIn,
     corePosition: s.corePosition,
     sampledBy: s.sampledBy,
+  };
+}
+
+/** The engine's sampling record for a lot: the grower's sampling facts plus the lot's shape, harvest and size. */
+export function samplingRecordOf(lot: LotFacts, s: SamplingFacts): SamplingRecord {
+  return {
+    ...samplingFactsOf(s),
     baleShape: baleShapeOf(lot.baleType),
     harvestStartedOn: lot.harvestStartedOn,
     harvestEndedOn: lot.harvestEndedOn,

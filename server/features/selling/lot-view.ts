@@ -3,7 +3,7 @@ import { type EditableLot, LOT_FORM_STEPS } from '../../../shared/contracts/sell
 import type { Db } from '../../db/client';
 import { labAnalyses, photos, samplingRecords, storedFiles } from '../../db/schema';
 import { photoView } from '../lots/lots.service';
-import { samplingReportOf } from '../lots/sampling-report';
+import { samplingFactsOf, samplingReportOf } from '../lots/sampling-report';
 import { enteredValuesOf, evaluationOf } from './analysis-values';
 import { findLotWithFarm } from './lot-access';
 
@@ -42,17 +42,7 @@ export async function editableLot(db: Db, lotId: number): Promise<EditableLot> {
     quantity: saved('quantity')
       ? { baleType: lot.baleType, baleCount: lot.baleCount, avgBaleWeightLb: lot.avgBaleWeightLb, totalTons, balesAvailable: lot.balesAvailable }
       : null,
-    sampling: sampling
-      ? {
-          sampledOn: sampling.sampledOn,
-          coresTaken: sampling.coresTaken,
-          balesSampled: sampling.balesSampled,
-          probeDiameterIn: sampling.probeDiameterIn,
-          probeLengthIn: sampling.probeLengthIn,
-          corePosition: sampling.corePosition,
-          sampledBy: sampling.sampledBy,
-        }
-      : null,
+    sampling: sampling ? samplingFactsOf(sampling) : null,
     analysis: analysis
       ? {
           labName: analysis.labName,

@@ -1,5 +1,5 @@
-import { DOCUMENT, isPlatformBrowser } from '@angular/common';
-import { computed, inject, Injectable, PLATFORM_ID, signal } from '@angular/core';
+import { computed, Injectable } from '@angular/core';
+import { storedList } from '../../core/stored-list';
 
 /**
  * One lot in the cart. Prices are a snapshot taken when the line was added (integer cents);
@@ -24,13 +24,10 @@ const STORAGE_KEY = 'baleproof.cart.v1';
  */
 @Injectable({ providedIn: 'root' })
 export class CartStore {
-  private readonly browser = isPlatformBrowser(inject(PLATFORM_ID));
-  private readonly document = inject(DOCUMENT);
-  private readonly storage = this.browser ? (this.document.defaultView?.localStorage ?? null) : null;
-  private readonly state = signal<readonly CartLine[]>([]);
-  private restored = false;
+  private readonly stored = storedList('local', STORAGE_KEY, isCartLine);
+  private readonly state = this.stored.items;
 
-  readonly lines = this.state.asReadonly();
+  readonly lines = this.state;
   readonly count = computed(() => this.state().length);
   readonly tons = computed(() => this.state().reduce((sum, l) => sum + l.tons, 0));
   readonly hayCents = computed(() => this.state().reduce((sum, l) => sum + l.hayCents, 0));
@@ -53,19 +50,11 @@ export class CartStore {
   }
 
   restore(): void {
-    if (!this.browser || this.restored) return;
-    this.restored = true;
-    try {
-      const raw = JSON.parse(this.storage?.getItem(STORAGE_KEY) ?? '[]') as unknown;
-      if (Array.isArray(raw)) this.state.set(raw.filter(isCartLine));
-    } catch {
-      // A damaged cart is dropped rather than shown wrong.
-    }
+    this.stored.restore();
   }
 
   private save(lines: readonly CartLine[]): void {
-    this.state.set(lines);
-    if (this.browser) this.storage?.setItem(STORAGE_KEY, JSON.stringify(lines));
+    this.stored.save(lines);
   }
 }
 

@@ -1,6 +1,6 @@
-import { DOCUMENT, isPlatformBrowser } from '@angular/common';
-import { computed, inject, Injectable, PLATFORM_ID, signal } from '@angular/core';
+import { computed, Injectable } from '@angular/core';
 import { MAX_COMPARED_LOTS } from '../../../../../shared/contracts/compare';
+import { storedList } from '../../../core/stored-list';
 
 const STORAGE_KEY = 'baleproof.compare';
 
@@ -11,13 +11,10 @@ const STORAGE_KEY = 'baleproof.compare';
  */
 @Injectable({ providedIn: 'root' })
 export class CompareSelection {
-  private readonly browser = isPlatformBrowser(inject(PLATFORM_ID));
-  private readonly document = inject(DOCUMENT);
-  private readonly storage = this.browser ? (this.document.defaultView?.sessionStorage ?? null) : null;
-  private readonly selected = signal<readonly number[]>([]);
-  private restored = false;
+  private readonly stored = storedList('session', STORAGE_KEY, (x): x is number => Number.isInteger(x) && (x as number) > 0, MAX_COMPARED_LOTS);
+  private readonly selected = this.stored.items;
 
-  readonly ids = this.selected.asReadonly();
+  readonly ids = this.selected;
   readonly count = computed(() => this.selected().length);
   readonly full = computed(() => this.selected().length >= MAX_COMPARED_LOTS);
   readonly max = MAX_COMPARED_LOTS;
@@ -41,18 +38,10 @@ export class CompareSelection {
   }
 
   restore(): void {
-    if (!this.browser || this.restored) return;
-    this.restored = true;
-    try {
-      const raw = JSON.parse(this.storage?.getItem(STORAGE_KEY) ?? '[]') as unknown;
-      if (Array.isArray(raw)) this.selected.set(raw.filter((x): x is number => Number.isInteger(x) && x > 0).slice(0, MAX_COMPARED_LOTS));
-    } catch {
-      // A damaged entry is simply forgotten.
-    }
+    this.stored.restore();
   }
 
   private save(ids: readonly number[]): void {
-    this.selected.set(ids);
-    if (this.browser) this.storage?.setItem(STORAGE_KEY, JSON.stringify(ids));
+    this.stored.save(ids);
   }
 }
