@@ -7,6 +7,9 @@ const swc = ['@swc/jest', {
   module: { type: 'commonjs' },
 }];
 
+// `@shared/…` is the path alias of tsconfig.json for the pure domain code in shared/.
+const sharedAlias = { '^@shared/(.*)$': '<rootDir>/shared/$1' };
+
 module.exports = {
   projects: [
     {
@@ -16,6 +19,7 @@ module.exports = {
       testMatch: ['**/*.spec.ts'],
       transform: { '^.+\\.(t|j)s$': swc },
       setupFiles: ['<rootDir>/tests/setup-env.cjs'],
+      moduleNameMapper: sharedAlias,
     },
     {
       displayName: 'web',
@@ -24,6 +28,7 @@ module.exports = {
       roots: ['<rootDir>/src'],
       testMatch: ['**/*.spec.ts'],
       setupFilesAfterEnv: ['<rootDir>/src/test-setup.ts'],
+      moduleNameMapper: sharedAlias,
     },
   ],
 };

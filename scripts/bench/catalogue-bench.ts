@@ -10,7 +10,7 @@
  */
 import { sql } from 'drizzle-orm';
 import { performance } from 'node:perf_hooks';
-import { LotSearchSchema } from '../../shared/contracts/lots';
+import { LotSearchSchema } from '@shared/contracts/lots';
 import { createDb } from '../../server/db/client';
 import { LotsService } from '../../server/features/lots/lots.service';
 

@@ -1,5 +1,5 @@
 import type { RequestHandler } from 'express';
-import type { UserRole } from '../../shared/contracts/auth';
+import type { UserRole } from '@shared/contracts/auth';
 import { forbidden, unauthenticated } from './http-error';
 
 /** 401 when nobody is signed in; 403 when the user lacks every one of the roles. */

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { ForageEvaluationRequest } from '../../shared/forage';
+import type { ForageEvaluationRequest } from '@shared/forage';
 import type { Db } from '../../server/db/client';
 import { farms, labAnalyses, lots, samplingRecords, users } from '../../server/db/schema';
 import { hashPassword } from '../../server/features/auth/password';

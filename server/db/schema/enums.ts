@@ -1,6 +1,6 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
-import { USER_ROLES } from '../../../shared/contracts/auth';
-import { BALE_TYPES, FORAGE_TYPES } from '../../../shared/contracts/lots';
+import { USER_ROLES } from '@shared/contracts/auth';
+import { BALE_TYPES, FORAGE_TYPES } from '@shared/contracts/lots';
 
 export const userRole = pgEnum('user_role', USER_ROLES);
 

@@ -1,4 +1,4 @@
-import type { BaleType, ForageType } from '../../../shared/contracts/lots';
+import type { BaleType, ForageType } from '@shared/contracts/lots';
 
 /*
  * The demo scenario. Everything here is invented for demonstration: the "Cottonwood Basin" region,

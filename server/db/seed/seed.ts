@@ -1,6 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
-import { evaluateSampling } from '../../../shared/forage';
+import { evaluateSampling } from '@shared/forage';
 import type { FileStorage } from '../../adapters/storage/file-storage';
 import { hashPassword } from '../../features/auth/password';
 import { analysisColumns } from '../../features/lots/analysis-record';

@@ -2,7 +2,7 @@ import { Router, type Request, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import passport from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
-import { SignInSchema, SignUpSchema, type SessionUser } from '../../../shared/contracts/auth';
+import { SignInSchema, SignUpSchema, type SessionUser } from '@shared/contracts/auth';
 import type { Db } from '../../db/client';
 import { HttpError } from '../../middleware/http-error';
 import { AuthService } from './auth.service';

@@ -1,5 +1,5 @@
 import { eq, sql } from 'drizzle-orm';
-import type { SessionUser, SignIn, SignUp } from '../../../shared/contracts/auth';
+import type { SessionUser, SignIn, SignUp } from '@shared/contracts/auth';
 import type { Db } from '../../db/client';
 import { auditEvents, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';

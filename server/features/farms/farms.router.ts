@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { FarmProfileInputSchema } from '../../../shared/contracts/selling';
+import { FarmProfileInputSchema } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api';
 import { HttpError } from '../../middleware/http-error';
 import { requireRole } from '../../middleware/require-role';

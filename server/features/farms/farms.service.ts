@@ -1,6 +1,6 @@
 import { eq } from 'drizzle-orm';
 import type Stripe from 'stripe';
-import type { FarmProfile, FarmProfileInput } from '../../../shared/contracts/selling';
+import type { FarmProfile, FarmProfileInput } from '@shared/contracts/selling';
 import type { Db } from '../../db/client';
 import { farms } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';

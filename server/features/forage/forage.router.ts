@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { evaluateForage, ForageEvaluationRequestSchema } from '../../../shared/forage';
+import { evaluateForage, ForageEvaluationRequestSchema } from '@shared/forage';
 
 /**
  * POST /api/forage/evaluate: the forage engine over HTTP (the lot form's live preview uses it; other

@@ -1,4 +1,4 @@
-import { evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '../../../shared/forage';
+import { evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '@shared/forage';
 import type { labAnalyses } from '../../db/schema';
 
 /**

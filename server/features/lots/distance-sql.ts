@@ -1,5 +1,5 @@
 import { sql, type SQL } from 'drizzle-orm';
-import { EARTH_RADIUS_MI } from '../../../shared/pricing/distance';
+import { EARTH_RADIUS_MI } from '@shared/pricing/distance';
 import { farms } from '../../db/schema';
 
 /** Great-circle miles from a point to each farm (haversine, the same sphere as shared/pricing). */

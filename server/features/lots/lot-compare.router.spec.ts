@@ -3,7 +3,7 @@ import { eq } from 'drizzle-orm';
 import { labAnalyses, lots } from '../../db/schema';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { KG_PER_SHORT_TON } from '../../../shared/units/mass';
+import { KG_PER_SHORT_TON } from '@shared/units/mass';
 
 describe('GET /lots/compare', () => {
   let t: TestApi;

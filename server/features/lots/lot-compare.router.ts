@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { LotCompareQuerySchema } from '../../../shared/contracts/compare';
+import { LotCompareQuerySchema } from '@shared/contracts/compare';
 import type { Db } from '../../db/client';
 import { compareLots } from './lot-compare.service';
 

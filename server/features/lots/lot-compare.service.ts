@@ -1,6 +1,6 @@
 import { and, eq, inArray, sql } from 'drizzle-orm';
-import type { ComparedLot, ComparedPricing, LotCompareQuery, LotComparison } from '../../../shared/contracts/compare';
-import { costPerLbCrudeProteinCents, costPerMcalDeCents, costPerTonDryMatterCents, deliveredPrice, DEFAULT_TONS_PER_LOAD } from '../../../shared/pricing';
+import type { ComparedLot, ComparedPricing, LotCompareQuery, LotComparison } from '@shared/contracts/compare';
+import { costPerLbCrudeProteinCents, costPerMcalDeCents, costPerTonDryMatterCents, deliveredPrice, DEFAULT_TONS_PER_LOAD } from '@shared/pricing';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { farmDistanceSql } from './distance-sql';

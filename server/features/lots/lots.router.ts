@@ -1,7 +1,7 @@
 import { eq, sql } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
-import { LotSearchSchema } from '../../../shared/contracts/lots';
+import { LotSearchSchema } from '@shared/contracts/lots';
 import type { Db } from '../../db/client';
 import { lots } from '../../db/schema';
 import { notFound } from '../../middleware/http-error';

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import zipcodes from 'zipcodes';
-import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '../../../shared/contracts/lots';
+import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '@shared/contracts/lots';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';

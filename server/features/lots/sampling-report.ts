@@ -1,5 +1,5 @@
-import { baleShapeOf } from '../../../shared/contracts/lots';
-import { evaluateSampling, type SamplingEvaluation, type SamplingRecord } from '../../../shared/forage';
+import { baleShapeOf } from '@shared/contracts/lots';
+import { evaluateSampling, type SamplingEvaluation, type SamplingRecord } from '@shared/forage';
 import type { lots, samplingRecords } from '../../db/schema';
 
 type LotFacts = Pick<typeof lots.$inferSelect, 'baleType' | 'harvestStartedOn' | 'harvestEndedOn' | 'baleCount' | 'avgBaleWeightLb'>;

@@ -3,7 +3,7 @@ import { eq, inArray } from 'drizzle-orm';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { KG_PER_SHORT_TON } from '../../../shared/units/mass';
+import { KG_PER_SHORT_TON } from '@shared/units/mass';
 
 describe('planner API', () => {
   let t: TestApi;

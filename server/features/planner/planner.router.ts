@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import { PurchasePlanRequestSchema } from '../../../shared/contracts/planner';
-import { horseRequirements, RequirementsRequestSchema } from '../../../shared/nutrition';
-import { HerdNeedsRequestSchema, planHerdNeeds } from '../../../shared/planner';
+import { PurchasePlanRequestSchema } from '@shared/contracts/planner';
+import { horseRequirements, RequirementsRequestSchema } from '@shared/nutrition';
+import { HerdNeedsRequestSchema, planHerdNeeds } from '@shared/planner';
 import type { Db } from '../../db/client';
 import { HttpError } from '../../middleware/http-error';
 import { planPurchase } from './planner.service';

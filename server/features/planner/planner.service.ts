@@ -1,7 +1,7 @@
 import { and, asc, eq, isNotNull, lte, sql } from 'drizzle-orm';
 import type { z } from 'zod';
-import type { PlanCandidate, PlanPurchaseLine, PurchasePlanRequestSchema, PurchasePlanResponse } from '../../../shared/contracts/planner';
-import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '../../../shared/planner';
+import type { PlanCandidate, PlanPurchaseLine, PurchasePlanRequestSchema, PurchasePlanResponse } from '@shared/contracts/planner';
+import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '@shared/planner';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { farmDistanceSql } from '../lots/distance-sql';

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { ReturnLotSchema } from '../../../shared/contracts/selling';
+import { ReturnLotSchema } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api';
 import { requireRole } from '../../middleware/require-role';
 import { ReviewService } from './review.service';

@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
-import type { ReviewLotView, ReviewQueueRow } from '../../../shared/contracts/selling';
+import type { ReviewLotView, ReviewQueueRow } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api';
 import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { SavedSearchCreateSchema } from '../../../shared/contracts/saved-searches';
+import { SavedSearchCreateSchema } from '@shared/contracts/saved-searches';
 import type { Db } from '../../db/client';
 import { requireRole } from '../../middleware/require-role';
 import { SavedSearchesService } from './saved-searches.service';

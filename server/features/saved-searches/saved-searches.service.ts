@@ -1,5 +1,5 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
-import type { SavedSearchView } from '../../../shared/contracts/saved-searches';
+import type { SavedSearchView } from '@shared/contracts/saved-searches';
 import type { Db } from '../../db/client';
 import { savedSearches } from '../../db/schema';
 import { conflict, notFound } from '../../middleware/http-error';

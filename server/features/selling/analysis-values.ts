@@ -1,4 +1,4 @@
-import { BASIS_DEPENDENT_FIELDS, evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '../../../shared/forage';
+import { BASIS_DEPENDENT_FIELDS, evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '@shared/forage';
 import type { labAnalyses } from '../../db/schema';
 
 type AnalysisRow = typeof labAnalyses.$inferSelect;

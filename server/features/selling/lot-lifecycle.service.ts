@@ -1,6 +1,6 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
-import type { SellerLotRow } from '../../../shared/contracts/selling';
-import { stepIndex } from '../../../shared/contracts/selling';
+import type { SellerLotRow } from '@shared/contracts/selling';
+import { stepIndex } from '@shared/contracts/selling';
 import type { Db } from '../../db/client';
 import { auditEvents, farms, labAnalyses, lots, orders } from '../../db/schema';
 import { conflict, HttpError } from '../../middleware/http-error';

@@ -12,7 +12,7 @@ import {
   SamplingStepSchema,
   stepIndex,
   type LotFormStep,
-} from '../../../shared/contracts/selling';
+} from '@shared/contracts/selling';
 import { samplingReportOf } from '../lots/sampling-report';
 import type { Db } from '../../db/client';
 import { labAnalyses, lots, samplingRecords } from '../../db/schema';

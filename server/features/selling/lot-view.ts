@@ -1,5 +1,5 @@
 import { and, asc, desc, eq } from 'drizzle-orm';
-import { type EditableLot, LOT_FORM_STEPS } from '../../../shared/contracts/selling';
+import { type EditableLot, LOT_FORM_STEPS } from '@shared/contracts/selling';
 import type { Db } from '../../db/client';
 import { labAnalyses, photos, samplingRecords, storedFiles } from '../../db/schema';
 import { photoView } from '../lots/lots.service';

@@ -1,8 +1,8 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
-import { analysisCsvTemplate } from '../../../shared/contracts/analysis-csv';
-import { PhotoOrderSchema } from '../../../shared/contracts/selling';
+import { analysisCsvTemplate } from '@shared/contracts/analysis-csv';
+import { PhotoOrderSchema } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api';
 import { photos } from '../../db/schema';
 import { HttpError, notFound } from '../../middleware/http-error';

@@ -1,6 +1,6 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { eq, sql } from 'drizzle-orm';
-import type { PhotoView } from '../../../shared/contracts/lots';
+import type { PhotoView } from '@shared/contracts/lots';
 import type { ApiDeps } from '../../api';
 import { photos, storedFiles, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';

@@ -1,6 +1,6 @@
 import { inject } from '@angular/core';
 import { CanMatchFn, Router } from '@angular/router';
-import type { UserRole } from '../../../shared/contracts/auth';
+import type { UserRole } from '@shared/contracts/auth';
 import { Session } from './session';
 
 /** Lets a route match only for the given roles; others are sent to sign in (with a way back). */

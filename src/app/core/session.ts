@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { SessionUser, SignIn, SignUp, UserRole } from '../../../shared/contracts/auth';
+import type { SessionUser, SignIn, SignUp, UserRole } from '@shared/contracts/auth';
 
 /** Who is signed in. The only place that calls the auth API. */
 @Injectable({ providedIn: 'root' })

@@ -1,4 +1,4 @@
-import type { UserRole } from '../../../../shared/contracts/auth';
+import type { UserRole } from '@shared/contracts/auth';
 
 export interface NavLink {
   path: string;

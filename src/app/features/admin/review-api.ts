@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { ReviewLotView, ReviewQueueRow } from '../../../../shared/contracts/selling';
+import type { ReviewLotView, ReviewQueueRow } from '@shared/contracts/selling';
 
 /** The review desk's door to the API (admins only). */
 @Injectable({ providedIn: 'root' })

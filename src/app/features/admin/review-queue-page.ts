@@ -3,7 +3,7 @@ import { toSignal } from '@angular/core/rxjs-interop';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { catchError, map, of } from 'rxjs';
-import type { ReviewQueueRow } from '../../../../shared/contracts/selling';
+import type { ReviewQueueRow } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../core/api-error';
 import { ReviewApi } from './review-api';
 

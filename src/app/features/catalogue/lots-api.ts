@@ -1,7 +1,7 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { LotDetail, LotSearchResult } from '../../../../shared/contracts/lots';
+import type { LotDetail, LotSearchResult } from '@shared/contracts/lots';
 
 /** The catalogue's only door to the API. */
 @Injectable({ providedIn: 'root' })

@@ -1,6 +1,6 @@
-import type { HorseClass } from '../../../../shared/nutrition/horse-class';
-import type { FeedingMethod } from '../../../../shared/planner/feeding-methods';
-import type { HerdNeedsRequest } from '../../../../shared/planner/herd-needs';
+import type { HorseClass } from '@shared/nutrition/horse-class';
+import type { FeedingMethod } from '@shared/planner/feeding-methods';
+import type { HerdNeedsRequest } from '@shared/planner/herd-needs';
 
 /** A group of horses as the form holds it (numbers may be blank while typing). */
 export interface GroupDraft {

@@ -1,9 +1,9 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, Observable } from 'rxjs';
-import type { ComparedLot, LotComparison } from '../../../../shared/contracts/compare';
-import type { LotSearchResult } from '../../../../shared/contracts/lots';
-import type { PurchasePlanRequest, PurchasePlanResponse } from '../../../../shared/contracts/planner';
+import type { ComparedLot, LotComparison } from '@shared/contracts/compare';
+import type { LotSearchResult } from '@shared/contracts/lots';
+import type { PurchasePlanRequest, PurchasePlanResponse } from '@shared/contracts/planner';
 
 /** The planner's door to the API. */
 @Injectable({ providedIn: 'root' })

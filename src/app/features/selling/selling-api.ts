@@ -1,9 +1,9 @@
 import { HttpClient, HttpEventType, HttpXhrBackend, HttpXsrfTokenExtractor } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { filter, map, Observable } from 'rxjs';
-import type { PhotoView } from '../../../../shared/contracts/lots';
-import type { EditableLot, FarmProfile, FarmProfileInput, LotFormStep, PhotoOrder, SellerLotRow } from '../../../../shared/contracts/selling';
-import type { ForageEvaluation } from '../../../../shared/forage';
+import type { PhotoView } from '@shared/contracts/lots';
+import type { EditableLot, FarmProfile, FarmProfileInput, LotFormStep, PhotoOrder, SellerLotRow } from '@shared/contracts/selling';
+import type { ForageEvaluation } from '@shared/forage';
 
 /** Upload progress: `progress` 0–1 while sending, then `done` with the server's answer. */
 export type UploadEvent<T> = { kind: 'progress'; progress: number } | { kind: 'done'; body: T };

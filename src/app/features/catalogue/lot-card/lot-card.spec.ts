@@ -1,6 +1,6 @@
 import { TestBed } from '@angular/core/testing';
 import { provideRouter } from '@angular/router';
-import type { LotSummary } from '../../../../../shared/contracts/lots';
+import type { LotSummary } from '@shared/contracts/lots';
 import { LotCard } from './lot-card';
 
 describe('LotCard', () => {

@@ -1,8 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
-import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
-import type { LotSummary } from '../../../../../shared/contracts/lots';
+import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
+import type { LotSummary } from '@shared/contracts/lots';
 import { dollars, fixed } from '../format';
 import { CompareSelection } from '../lot-compare/compare-selection';
 

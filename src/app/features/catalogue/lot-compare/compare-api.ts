@@ -1,7 +1,7 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { Observable } from 'rxjs';
-import type { LotComparison } from '../../../../../shared/contracts/compare';
+import type { LotComparison } from '@shared/contracts/compare';
 
 /** The comparison's door to the API. */
 @Injectable({ providedIn: 'root' })

@@ -1,4 +1,4 @@
-import type { ComparedLot } from '../../../../../shared/contracts/compare';
+import type { ComparedLot } from '@shared/contracts/compare';
 import { compareSections } from './compare-rows';
 
 describe('compareSections', () => {

@@ -1,5 +1,5 @@
-import type { ComparedLot } from '../../../../../shared/contracts/compare';
-import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
+import type { ComparedLot } from '@shared/contracts/compare';
+import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import { dollars, fixed } from '../format';
 
 /** One row of the comparison table: a label and a display value per lot; `best` marks the lowest cost. */

@@ -7,7 +7,7 @@ import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { map, of, switchMap } from 'rxjs';
-import type { LotComparison } from '../../../../../shared/contracts/compare';
+import type { LotComparison } from '@shared/contracts/compare';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { CompareApi } from './compare-api';
 import { compareSections } from './compare-rows';

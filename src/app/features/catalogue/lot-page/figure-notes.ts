@@ -1,4 +1,4 @@
-import type { ForageEvaluation } from '../../../../../shared/forage';
+import type { ForageEvaluation } from '@shared/forage';
 
 /** Plain-language names of the engine's method ids, so every figure says how it was computed. */
 export const TDN_METHOD_LABELS: Record<ForageEvaluation['tdnMethod'], string> = {

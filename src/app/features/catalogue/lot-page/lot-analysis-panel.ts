@@ -1,8 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { CORE_POSITION_LABELS } from '../../../../../shared/contracts/labels';
-import type { LotAnalysisView, LotDetail } from '../../../../../shared/contracts/lots';
-import type { ForageEvaluation, Nutrients } from '../../../../../shared/forage';
-import { lotCautions } from '../../../../../shared/safety/lot-cautions';
+import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
+import type { LotAnalysisView, LotDetail } from '@shared/contracts/lots';
+import type { ForageEvaluation, Nutrients } from '@shared/forage';
+import { lotCautions } from '@shared/safety/lot-cautions';
 import { fixed } from '../format';
 import { DE_METHOD_LABELS, FIGURE_MEANINGS, NSC_FLAG_TEXT, NSC_METHOD_LABELS, TDN_METHOD_LABELS } from './figure-notes';
 

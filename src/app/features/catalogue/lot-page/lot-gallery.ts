@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input, signal } from '@angular/core';
-import type { PhotoView } from '../../../../../shared/contracts/lots';
+import type { PhotoView } from '@shared/contracts/lots';
 
 /** Lot photos: a large view with responsive WebP sources and a row of thumbnails. */
 @Component({

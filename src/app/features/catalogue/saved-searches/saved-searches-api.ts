@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, Observable } from 'rxjs';
-import type { SavedSearchCreate, SavedSearchView } from '../../../../../shared/contracts/saved-searches';
+import type { SavedSearchCreate, SavedSearchView } from '@shared/contracts/saved-searches';
 
 /** Saved searches' door to the API (signed-in buyers only). */
 @Injectable({ providedIn: 'root' })

@@ -6,7 +6,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
-import type { SavedSearchView } from '../../../../../shared/contracts/saved-searches';
+import type { SavedSearchView } from '@shared/contracts/saved-searches';
 import { apiErrorMessage } from '../../../core/api-error';
 import { Session } from '../../../core/session';
 import { SavedSearchesApi } from './saved-searches-api';

@@ -7,7 +7,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
-import type { FarmProfile } from '../../../../../shared/contracts/selling';
+import type { FarmProfile } from '@shared/contracts/selling';
 import { apiErrorMessage, apiFieldErrors } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 

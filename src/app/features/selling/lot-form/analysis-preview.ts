@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import type { ForageEvaluation } from '../../../../../shared/forage';
+import type { ForageEvaluation } from '@shared/forage';
 import { fixed } from '../../catalogue/format';
 import { FindingsList } from '../ui/findings-list';
 

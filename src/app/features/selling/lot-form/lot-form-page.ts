@@ -5,7 +5,7 @@ import { MatIcon } from '@angular/material/icon';
 import { MatStep, MatStepper } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom, map } from 'rxjs';
-import type { EditableLot } from '../../../../../shared/contracts/selling';
+import type { EditableLot } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 import { STATUS_LABELS } from '../ui/status-label';

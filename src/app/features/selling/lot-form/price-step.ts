@@ -6,7 +6,7 @@ import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatHint, MatLabel, MatPrefix, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
-import { centsPerTonFromBale, type EditableLot } from '../../../../../shared/contracts/selling';
+import { centsPerTonFromBale, type EditableLot } from '@shared/contracts/selling';
 import { dollars } from '../../catalogue/format';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave, toCents, toDollars } from './step-save';

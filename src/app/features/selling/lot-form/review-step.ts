@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
-import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '../../../../../shared/contracts/labels';
-import type { EditableLot } from '../../../../../shared/contracts/selling';
+import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
+import type { EditableLot } from '@shared/contracts/selling';
 import { dollars, fixed } from '../../catalogue/format';
 import { CautionsList } from '../ui/cautions-list';
 import { FindingsList } from '../ui/findings-list';

@@ -1,6 +1,6 @@
 import { HttpErrorResponse } from '@angular/common/http';
 import { of, throwError } from 'rxjs';
-import type { EditableLot } from '../../../../../shared/contracts/selling';
+import type { EditableLot } from '@shared/contracts/selling';
 import { numberOrNull, StepSave, toCents, toDollars } from './step-save';
 
 describe('StepSave', () => {

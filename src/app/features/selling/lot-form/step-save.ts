@@ -1,6 +1,6 @@
 import { signal } from '@angular/core';
 import { firstValueFrom, type Observable } from 'rxjs';
-import type { EditableLot } from '../../../../../shared/contracts/selling';
+import type { EditableLot } from '@shared/contracts/selling';
 import { apiErrorMessage, apiFieldErrors } from '../../../core/api-error';
 
 /** Saving state of one step: busy flag, the API's message and its field-level messages. */

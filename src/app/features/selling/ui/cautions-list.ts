@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { lotCautions, type CautionInput } from '../../../../../shared/safety/lot-cautions';
+import { lotCautions, type CautionInput } from '@shared/safety/lot-cautions';
 
 /** Storage and feeding cautions for a lot; each defers to a veterinarian or local guidance. */
 @Component({

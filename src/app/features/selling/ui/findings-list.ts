@@ -1,6 +1,6 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import { MatIcon } from '@angular/material/icon';
-import type { Finding } from '../../../../../shared/forage';
+import type { Finding } from '@shared/forage';
 
 const ICONS = { error: 'error', warning: 'warning', info: 'info' } as const;
 

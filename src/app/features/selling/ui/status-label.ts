@@ -1,4 +1,4 @@
-import type { LotStatus } from '../../../../../shared/contracts/selling';
+import type { LotStatus } from '@shared/contracts/selling';
 
 /** How each lot state is named to its grower. */
 export const STATUS_LABELS: Record<LotStatus, string> = {
