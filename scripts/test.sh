@@ -33,9 +33,6 @@ fi
 log "type-checking"
 node_modules/.bin/tsc -p tsconfig.server.json
 
-log "checking for import loops (madge)"
-node_modules/.bin/madge --circular --no-spinner --extensions ts --ts-config tsconfig.json server shared src
-
 DATABASE_URL="$TEST_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
 log "unit and integration tests (Jest)"
 NODE_ENV=test node_modules/.bin/jest --ci

@@ -1,5 +1,6 @@
 import { sql } from 'drizzle-orm';
-import { bigint, check, index, integer, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { bigint, check, index, integer, jsonb, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import type { ReportReading } from '@shared/contracts/report-reading';
 import { users } from './users';
 
 /** An uploaded document kept as sent (lab report PDFs, photo originals). */
@@ -14,6 +15,8 @@ export const storedFiles = pgTable(
     mimeType: text().notNull(),
     sizeBytes: bigint({ mode: 'number' }).notNull(),
     sha256: text().notNull(),
+    /** For lab report PDFs: the analysis values read from the PDF's text layer at upload. */
+    reading: jsonb().$type<ReportReading>(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
   },
   (t) => [

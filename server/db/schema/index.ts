@@ -12,3 +12,4 @@ export * from './claims';
 export * from './payouts';
 export * from './audit-events';
 export * from './saved-searches';
+export * from './platform-settings';

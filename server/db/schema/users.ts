@@ -13,7 +13,9 @@ export const users = pgTable(
     role: userRole().notNull().default('buyer'),
     zip: text(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),
+    /** Set while an admin has suspended the account; sign-in and every request are refused. */
     disabledAt: timestamp({ withTimezone: true }),
+    disabledReason: text(),
   },
   (t) => [
     uniqueIndex('users_email_lower_key').on(sql`lower(${t.email})`),

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { ReviewLotView, ReviewQueueRow } from '@shared/contracts/selling';
-import type { ApiDeps } from '../../api-deps';
+import type { ApiDeps } from '../../api';
 import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';
 import { findLotWithFarm } from '../selling/lot-access';

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import type { ApiDeps } from '../../api-deps';
+import type { ApiDeps } from '../../api';
 import { storedFiles } from '../../db/schema';
 import type { LotRow } from '../selling/lot-access';
 import { LotStepsService } from '../selling/lot-steps.service';

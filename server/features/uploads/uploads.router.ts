@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
-import type { ApiDeps } from '../../api-deps';
+import type { ApiDeps } from '../../api';
 import { labAnalyses, storedFiles } from '../../db/schema';
 import { forbidden, notFound, unauthenticated } from '../../middleware/http-error';
 import { requireRole } from '../../middleware/require-role';
