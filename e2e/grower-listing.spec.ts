@@ -19,6 +19,12 @@ async function signOut(page: Page): Promise<void> {
   await expect(page.getByRole('link', { name: 'Sign in' })).toBeVisible();
 }
 
+/**
+ * A day relative to today (ISO, UTC). The server checks sample age and harvest dates against its own
+ * clock, so the journey's dates move with the calendar instead of going stale.
+ */
+const daysAgo = (days: number) => new Date(Date.now() - days * 86_400_000).toISOString().slice(0, 10);
+
 const saveAndContinue = (page: Page) => page.getByRole('button', { name: 'Save and continue' }).click();
 
 test('a grower lists a tested lot, an admin approves it, and buyers find it in the catalogue', async ({ page }) => {
@@ -38,8 +44,8 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   // Step 1: the lot.
   await page.getByLabel('Field name').fill(field);
   await page.getByLabel('Cutting').fill('2');
-  await page.getByLabel('Harvest started').fill('2026-06-10');
-  await page.getByLabel('Harvest ended').fill('2026-06-11');
+  await page.getByLabel('Harvest started').fill(daysAgo(60));
+  await page.getByLabel('Harvest ended').fill(daysAgo(59));
   await page.getByLabel('Moisture at baling').fill('15');
   await expect(page.getByText('Blister beetles in alfalfa')).toBeVisible();
   await saveAndContinue(page);
@@ -53,7 +59,7 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await saveAndContinue(page);
 
   // Step 3: sampling, checked live against the protocol.
-  await page.getByLabel('Sample date').fill('2026-07-09');
+  await page.getByLabel('Sample date').fill(daysAgo(30));
   await page.getByLabel('Who sampled').fill('Extension agent (invented)');
   await expect(page.getByText('Sampled to protocol.')).toBeVisible();
   await page.getByLabel('Cores taken').fill('12');
@@ -64,7 +70,7 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   // Step 4: the lab analysis, with a live preview from the engine and the report PDF.
   await page.getByLabel('Lab name').fill('High Plains Forage Testing (invented)');
   await page.getByLabel('Report number').fill('HP-2231');
-  await page.getByLabel('Report date').fill('2026-07-14');
+  await page.getByLabel('Report date').fill(daysAgo(25));
   // The values come from the downloadable CSV template, filled in as a grower would in a spreadsheet.
   const template = await (await page.request.get('/api/selling/analysis-template.csv')).text();
   const filled = template

@@ -6,6 +6,7 @@ import passport from 'passport';
 import { pinoHttp } from 'pino-http';
 import type Stripe from 'stripe';
 import type { Mailer } from './adapters/mail/mailer';
+import type { Clock } from './clock';
 import type { FileStorage } from './adapters/storage/file-storage';
 import type { Db } from './db/client';
 import { cookiesAreSecure, type Env } from './env';
@@ -32,6 +33,8 @@ export interface ApiDeps {
   mailer: Mailer;
   storage: FileStorage;
   stripe: Stripe;
+  /** The current time for every service (a fixed clock in tests). */
+  clock: Clock;
 }
 
 export const SESSION_COOKIE = 'baleproof.sid';
@@ -80,7 +83,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/health', healthRouter(db));
   api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, issueCsrfCookie: csrf.issueCookie }));
   api.use('/lots/compare', lotCompareRouter(db));
-  api.use('/lots', lotsRouter(db));
+  api.use('/lots', lotsRouter(deps));
   api.use('/admin', adminRouter(db));
   api.use('/forage', forageRouter());
   api.use('/farms', farmsRouter(deps));

@@ -2,6 +2,7 @@ import { createSmtpMailer } from './adapters/mail/mailer';
 import { createStripeClient } from './adapters/payments/stripe-client';
 import { createLocalStorage } from './adapters/storage/file-storage';
 import type { ApiDeps } from './api';
+import { clockFromEnv } from './clock';
 import { createDb } from './db/client';
 import { readEnv } from './env';
 import { createLogger } from './logger';
@@ -16,5 +17,6 @@ export function createAppDeps(): ApiDeps {
     mailer: createSmtpMailer(env.SMTP_URL, env.MAIL_FROM),
     storage: createLocalStorage(env.UPLOAD_DIR),
     stripe: createStripeClient(env),
+    clock: clockFromEnv(env),
   };
 }

@@ -24,6 +24,8 @@ const EnvSchema = z.object({
   UPLOAD_DIR: z.string().default('.uploads'),
   ADMIN_EMAIL: z.string().email().default('admin@baleproof.example'),
   ADMIN_PASSWORD: z.string().min(10).default('admin-demo-pass'),
+  /** An ISO date-time the server treats as "now" (demos, end-to-end runs); ignored in production. */
+  BALEPROOF_FIXED_NOW: z.iso.datetime({ offset: true }).optional(),
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
 });
 

@@ -6,6 +6,7 @@ import { hashPassword } from '../../server/features/auth/password';
 import { analysisColumns } from '../../server/features/lots/analysis-record';
 import { locateZip } from '../../server/features/lots/lots.service';
 import { uniqueEmail } from './test-api';
+import { TEST_NOW } from './test-clock';
 
 let passwordHash: Promise<string> | undefined;
 
@@ -46,7 +47,7 @@ export async function createLot(
       avgBaleWeightLb: 60,
       priceCentsPerTon: (opts.priceDollarsPerTon ?? 300) * 100,
       status: opts.status ?? 'listed',
-      publishedAt: opts.status && opts.status !== 'listed' ? null : new Date(),
+      publishedAt: opts.status && opts.status !== 'listed' ? null : new Date(TEST_NOW),
     })
     .returning();
   const { columns } = analysisColumns({ forageClass: 'legume', basis: 'dm', dryMatterPct: 88, crudeProteinPct: 20, adfPct: 30, ndfPct: 40, ...opts.analysis });

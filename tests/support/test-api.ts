@@ -11,6 +11,7 @@ import { createApi, type ApiDeps } from '../../server/api';
 import { createDb } from '../../server/db/client';
 import { readEnv } from '../../server/env';
 import { createLogger } from '../../server/logger';
+import { testClock } from './test-clock';
 
 /**
  * The real API against the migrated test database (TEST_DATABASE_URL, prepared by `npm test`),
@@ -25,12 +26,14 @@ export async function startTestApi(overrides: Record<string, string> = {}) {
   const stripePort = (stripeServer.address() as AddressInfo).port;
   const env = readEnv({ NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'silent', SIGN_IN_RATE_LIMIT: '1000', ...overrides });
   const mails: OutgoingMail[] = [];
+  const clock = testClock();
   const deps: ApiDeps = {
     env,
     db: createDb(url, 4),
     logger: createLogger('silent'),
     mailer: { send: async (mail) => void mails.push(mail) },
     storage: createLocalStorage(mkdtempSync(join(tmpdir(), 'baleproof-test-'))),
+    clock,
     stripe: new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: stripePort, protocol: 'http', maxNetworkRetries: 0, telemetry: false }),
   };
   const api = createApi(deps);
@@ -38,6 +41,8 @@ export async function startTestApi(overrides: Record<string, string> = {}) {
     api,
     deps,
     mails,
+    /** The fixed clock the API runs on (TEST_NOW); `clock.set(...)` lets time pass. */
+    clock,
     /** A supertest agent that keeps cookies and sends the CSRF header like the Angular app does. */
     agent: () => csrfAgent(api),
     close: async () => {

@@ -2,14 +2,14 @@ import { eq, sql } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
 import { LotSearchSchema } from '@shared/contracts/lots';
-import type { Db } from '../../db/client';
+import type { ApiDeps } from '../../api';
 import { lots } from '../../db/schema';
 import { notFound } from '../../middleware/http-error';
 import { findLotDetail, LotsService } from './lots.service';
 
 const IdParams = z.object({ id: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
 
-export function lotsRouter(db: Db): Router {
+export function lotsRouter({ db, clock }: Pick<ApiDeps, 'db' | 'clock'>): Router {
   const service = new LotsService(db);
   const router = Router();
 
@@ -20,7 +20,7 @@ export function lotsRouter(db: Db): Router {
 
   router.get('/:id', async (req, res) => {
     const { id } = IdParams.parse(req.params);
-    const lot = await findLotDetail(db, id, req.user);
+    const lot = await findLotDetail(db, id, req.user, clock);
     if (!lot) throw notFound('That lot');
     if (lot.status === 'listed' && req.user?.role !== 'admin' && req.user?.role !== 'grower') {
       // Buyer and visitor page views feed the grower's dashboard; cheap single-row update.

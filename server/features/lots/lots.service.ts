@@ -1,6 +1,7 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import zipcodes from 'zipcodes';
 import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '@shared/contracts/lots';
+import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
@@ -175,7 +176,7 @@ export class LotsService {
 export type Viewer = Express.User | undefined;
 
 /** A lot for its page: public when listed; the owning grower and admins may see it in any state. */
-export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise<LotDetail | null> {
+export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: Clock): Promise<LotDetail | null> {
   const [row] = await db
     .select({ lot: lots, farm: farms })
     .from(lots)
@@ -253,7 +254,7 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer): Promise
         }
       : null,
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
-    samplingReport: sampling ? samplingReportOf(lot, sampling, lot.publishedAt ?? new Date()) : null,
+    samplingReport: sampling ? samplingReportOf(lot, sampling, lot.publishedAt ?? clock.now()) : null,
     sampling: sampling ? { ...samplingFactsOf(sampling), compliant: sampling.compliant } : null,
     photos: photoRows.map(photoView),
   };

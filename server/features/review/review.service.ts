@@ -46,7 +46,7 @@ export class ReviewService {
       .orderBy(desc(auditEvents.createdAt))
       .limit(50);
     return {
-      lot: await editableLot(db, lotId),
+      lot: await editableLot(db, lotId, this.deps.clock),
       farm: { name: farm.name, city: farm.city, state: farm.state, growerEmail: owner?.email ?? '', payoutsReady: farm.payoutsEnabled },
       history: history.map((h) => ({ action: h.action, at: h.at.toISOString(), note: (h.data as { reason?: string }).reason ?? null })),
     };
@@ -56,9 +56,9 @@ export class ReviewService {
     const { db, mailer, env, logger } = this.deps;
     const { lot, farm } = await findLotWithFarm(db, lotId);
     if (lot.status !== 'in_review') throw conflict('not_in_review', 'Only lots waiting for review can be approved.');
-    const view = await editableLot(db, lotId);
+    const view = await editableLot(db, lotId, this.deps.clock);
     if (view.missing.length > 0) throw conflict('lot_incomplete', `This lot still lacks ${view.missing.join(', ')}.`);
-    const now = new Date();
+    const now = this.deps.clock.now();
     await db.transaction(async (tx) => {
       await tx
         .update(lots)
@@ -78,7 +78,7 @@ export class ReviewService {
     const { db, env, logger } = this.deps;
     const { lot, farm } = await findLotWithFarm(db, lotId);
     if (lot.status !== 'in_review') throw conflict('not_in_review', 'Only lots waiting for review can be returned.');
-    const now = new Date();
+    const now = this.deps.clock.now();
     await db.transaction(async (tx) => {
       await tx.update(lots).set({ status: 'returned', reviewNote: reason, reviewedBy: admin.id, reviewedAt: now, updatedAt: now }).where(eq(lots.id, lotId));
       await tx

@@ -16,7 +16,7 @@ export interface AlertOutcome {
  * narrowed to this lot, so an alert means the buyer would see the lot in that search.
  * A stored query that no longer parses (the catalogue changed) is skipped, not fatal.
  */
-export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'mailer' | 'env' | 'logger'>, lotId: number): Promise<AlertOutcome> {
+export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'mailer' | 'env' | 'logger' | 'clock'>, lotId: number): Promise<AlertOutcome> {
   const { db, mailer, env, logger } = deps;
   const lotsService = new LotsService(db);
   const candidates = await db
@@ -36,7 +36,7 @@ export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'mailer' | '
     const lot = items[0];
     if (!lot) continue;
     await mailer.send({ to: email, ...alertMail(displayName, search.name, search.query, lot, env.PUBLIC_URL) });
-    await db.update(savedSearches).set({ lastAlertedAt: new Date() }).where(eq(savedSearches.id, search.id));
+    await db.update(savedSearches).set({ lastAlertedAt: deps.clock.now() }).where(eq(savedSearches.id, search.id));
     alerted.push(search.id);
   }
   return { alerted };

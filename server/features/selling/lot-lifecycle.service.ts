@@ -1,6 +1,7 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { SellerLotRow } from '@shared/contracts/selling';
 import { stepIndex } from '@shared/contracts/selling';
+import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { auditEvents, farms, labAnalyses, lots, orders } from '../../db/schema';
 import { conflict, HttpError } from '../../middleware/http-error';
@@ -10,19 +11,22 @@ import { editableLot } from './lot-view';
 
 /** Submitting, withdrawing, relisting and copying lots, and the grower's list of them. */
 export class LotLifecycleService {
-  constructor(private readonly db: Db) {}
+  constructor(
+    private readonly db: Db,
+    private readonly clock: Clock,
+  ) {}
 
   async submit(user: Express.User, lotId: number): Promise<void> {
     const { lot } = await ownedLot(this.db, lotId, user);
     if (lot.status !== 'draft' && lot.status !== 'returned') {
       throw conflict('not_submittable', lot.status === 'in_review' ? 'This lot is already waiting for review.' : 'Only drafts and returned lots can be submitted.');
     }
-    const view = await editableLot(this.db, lotId);
+    const view = await editableLot(this.db, lotId, this.clock);
     if (view.missing.length > 0) {
       throw new HttpError(400, 'lot_incomplete', `Before submitting, add ${view.missing.join(', ')}.`, view.missing.map((m) => ({ path: 'lot', message: m })));
     }
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: 'in_review', reviewNote: null, updatedAt: new Date() }).where(eq(lots.id, lotId));
+      await tx.update(lots).set({ status: 'in_review', reviewNote: null, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
       await tx.update(labAnalyses).set({ verification: 'pending' }).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true), eq(labAnalyses.verification, 'rejected')));
       await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.submitted', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
     });
@@ -33,7 +37,7 @@ export class LotLifecycleService {
     const { lot } = await ownedLot(this.db, lotId, user);
     if (!['listed', 'sold_out', 'in_review'].includes(lot.status)) throw conflict('not_withdrawable', 'Only listed lots or lots in review can be withdrawn.');
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: 'withdrawn', updatedAt: new Date() }).where(eq(lots.id, lotId));
+      await tx.update(lots).set({ status: 'withdrawn', updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
       await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.withdrawn', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
     });
   }
@@ -45,7 +49,7 @@ export class LotLifecycleService {
     const [analysis] = await this.db.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
     const next = analysis?.verification === 'verified' && lot.publishedAt ? (lot.balesAvailable > 0 ? 'listed' : 'sold_out') : 'in_review';
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: next, updatedAt: new Date() }).where(eq(lots.id, lotId));
+      await tx.update(lots).set({ status: next, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
       await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.relisted', entityType: 'lot', entityId: String(lotId), data: { to: next } });
     });
     return next === 'sold_out' ? 'listed' : next;

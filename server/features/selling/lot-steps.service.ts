@@ -14,6 +14,7 @@ import {
   type LotFormStep,
 } from '@shared/contracts/selling';
 import { samplingReportOf } from '../lots/sampling-report';
+import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { labAnalyses, lots, samplingRecords } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
@@ -31,7 +32,10 @@ type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
  *   its analysis or report) sends it back to review; stock, price and photos do not.
  */
 export class LotStepsService {
-  constructor(private readonly db: Db) {}
+  constructor(
+    private readonly db: Db,
+    private readonly clock: Clock,
+  ) {}
 
   /** Starts a draft from the first step. */
   async create(user: Express.User, body: unknown): Promise<number> {
@@ -101,9 +105,9 @@ export class LotStepsService {
   async saveSampling(user: Express.User, lotId: number, body: unknown): Promise<void> {
     const input = SamplingStepSchema.parse(body);
     const { lot } = await this.editable(user, lotId, 'sampling');
-    const verdict = samplingReportOf(lot, input, new Date());
+    const verdict = samplingReportOf(lot, input, this.clock.now());
     await this.db.transaction(async (tx) => {
-      const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: new Date() };
+      const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: this.clock.now() };
       await tx.insert(samplingRecords).values({ lotId, ...values }).onConflictDoUpdate({ target: samplingRecords.lotId, set: values });
       await tx.update(lots).set(this.progress(lot, 'sampling')).where(eq(lots.id, lotId));
       await this.backToReview(tx, lot);
@@ -131,7 +135,7 @@ export class LotStepsService {
     const [current] = await tx.select({ id: labAnalyses.id }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lot.id), eq(labAnalyses.isCurrent, true)));
     if (!current) throw new HttpError(409, 'analysis_required', 'Save the lab analysis values first, then attach the report PDF.');
     await this.writeAnalysis(tx, lot, { reportFileId: fileId });
-    await tx.update(lots).set({ updatedAt: new Date() }).where(eq(lots.id, lot.id));
+    await tx.update(lots).set({ updatedAt: this.clock.now() }).where(eq(lots.id, lot.id));
   }
 
   async savePhotosStep(user: Express.User, lotId: number): Promise<void> {
@@ -185,7 +189,7 @@ export class LotStepsService {
   }
 
   private progress(lot: LotRow, step: LotFormStep) {
-    return { draftStep: Math.max(lot.draftStep, stepIndex(step)), updatedAt: new Date() };
+    return { draftStep: Math.max(lot.draftStep, stepIndex(step)), updatedAt: this.clock.now() };
   }
 
   /**
@@ -211,7 +215,7 @@ export class LotStepsService {
   /** A lot that buyers can see (or could relist) goes back to the review queue; its analysis needs checking again. */
   private async backToReview(tx: Tx, lot: LotRow): Promise<void> {
     if (lot.status === 'listed' || lot.status === 'sold_out') {
-      await tx.update(lots).set({ status: 'in_review', updatedAt: new Date() }).where(eq(lots.id, lot.id));
+      await tx.update(lots).set({ status: 'in_review', updatedAt: this.clock.now() }).where(eq(lots.id, lot.id));
     }
     if (lot.status === 'listed' || lot.status === 'sold_out' || lot.status === 'withdrawn') {
       await tx
@@ -236,7 +240,7 @@ export class LotStepsService {
       .where(eq(samplingRecords.lotId, lotId));
     if (!row) return;
     const { s, lot } = row;
-    const verdict = samplingReportOf(lot, s, new Date());
+    const verdict = samplingReportOf(lot, s, this.clock.now());
     await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: sql`now()` }).where(eq(samplingRecords.id, s.id));
   }
 }

@@ -1,5 +1,6 @@
 import { and, asc, desc, eq } from 'drizzle-orm';
 import { type EditableLot, LOT_FORM_STEPS } from '@shared/contracts/selling';
+import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { labAnalyses, photos, samplingRecords, storedFiles } from '../../db/schema';
 import { photoView } from '../lots/lots.service';
@@ -11,7 +12,7 @@ import { findLotWithFarm } from './lot-access';
 export const reportUrl = (lotId: number) => `/api/uploads/lots/${lotId}/report`;
 
 /** A lot as the form (and the review desk) sees it; steps after `draftStep` are returned as null. */
-export async function editableLot(db: Db, lotId: number): Promise<EditableLot> {
+export async function editableLot(db: Db, lotId: number, clock: Clock): Promise<EditableLot> {
   const { lot } = await findLotWithFarm(db, lotId);
   const [analysis] = await db.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
   const [sampling] = await db.select().from(samplingRecords).where(eq(samplingRecords.lotId, lotId));
@@ -70,7 +71,7 @@ export async function editableLot(db: Db, lotId: number): Promise<EditableLot> {
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
     samplingReport:
       sampling && saved('quantity')
-        ? samplingReportOf(lot, sampling, lot.publishedAt ?? new Date())
+        ? samplingReportOf(lot, sampling, lot.publishedAt ?? clock.now())
         : null,
     missing: [],
   };

@@ -17,9 +17,9 @@ const PhotoParams = LotParams.extend({ photoId: z.coerce.number().int().positive
 
 /** The grower's side of lots: the guided form's steps, the dashboard and the lot's life cycle. */
 export function sellingRouter(deps: ApiDeps): Router {
-  const { db, storage, logger } = deps;
-  const steps = new LotStepsService(db);
-  const lifecycle = new LotLifecycleService(db);
+  const { db, storage, logger, clock } = deps;
+  const steps = new LotStepsService(db, clock);
+  const lifecycle = new LotLifecycleService(db, clock);
   const router = Router();
   router.use(requireRole('grower'));
 
@@ -35,20 +35,20 @@ export function sellingRouter(deps: ApiDeps): Router {
 
   router.post('/lots', async (req, res) => {
     const id = await steps.create(req.user!, req.body);
-    res.status(201).json(await editableLot(db, id));
+    res.status(201).json(await editableLot(db, id, clock));
   });
 
   router.get('/lots/:id', async (req, res) => {
     const { id } = LotParams.parse(req.params);
     await ownedLot(db, id, req.user);
-    res.json(await editableLot(db, id));
+    res.json(await editableLot(db, id, clock));
   });
 
   const step = (path: string, save: (user: Express.User, id: number, body: unknown) => Promise<void>) =>
     router.put(`/lots/:id/${path}`, async (req, res) => {
       const { id } = LotParams.parse(req.params);
       await save(req.user!, id, req.body);
-      res.json(await editableLot(db, id));
+      res.json(await editableLot(db, id, clock));
     });
   step('lot', (u, id, b) => steps.saveLot(u, id, b));
   step('quantity', (u, id, b) => steps.saveQuantity(u, id, b));
@@ -73,7 +73,7 @@ export function sellingRouter(deps: ApiDeps): Router {
         await tx.update(photos).set({ position, isCover: photoId === input.coverId }).where(eq(photos.id, photoId));
       }
     });
-    res.json(await editableLot(db, id));
+    res.json(await editableLot(db, id, clock));
   });
 
   router.delete('/lots/:id/photos/:photoId', async (req, res) => {
@@ -90,31 +90,31 @@ export function sellingRouter(deps: ApiDeps): Router {
       const failed = results.filter((r) => r.status === 'rejected').length;
       if (failed) logger.warn({ photoId, failed }, 'some photo variants could not be removed');
     });
-    res.json(await editableLot(db, id));
+    res.json(await editableLot(db, id, clock));
   });
 
   router.post('/lots/:id/submit', async (req, res) => {
     const { id } = LotParams.parse(req.params);
     await lifecycle.submit(req.user!, id);
-    res.json(await editableLot(db, id));
+    res.json(await editableLot(db, id, clock));
   });
 
   router.post('/lots/:id/withdraw', async (req, res) => {
     const { id } = LotParams.parse(req.params);
     await lifecycle.withdraw(req.user!, id);
-    res.json(await editableLot(db, id));
+    res.json(await editableLot(db, id, clock));
   });
 
   router.post('/lots/:id/relist', async (req, res) => {
     const { id } = LotParams.parse(req.params);
     await lifecycle.relist(req.user!, id);
-    res.json(await editableLot(db, id));
+    res.json(await editableLot(db, id, clock));
   });
 
   router.post('/lots/:id/copy', async (req, res) => {
     const { id } = LotParams.parse(req.params);
     const copy = await lifecycle.copyForNextCutting(req.user!, id);
-    res.status(201).json(await editableLot(db, copy));
+    res.status(201).json(await editableLot(db, copy, clock));
   });
 
   return router;

@@ -8,11 +8,11 @@ import { displayName, sha256 } from './photo-upload';
 import { writeThenRecord } from './write-then-record';
 
 /** Stores a lab report PDF (checked by content) and links it to the lot's current analysis. */
-export async function attachLabReport(deps: Pick<ApiDeps, 'db' | 'storage'>, lot: LotRow, ownerId: number, file: Express.Multer.File): Promise<{ id: number; originalName: string; sizeBytes: number }> {
+export async function attachLabReport(deps: Pick<ApiDeps, 'db' | 'storage' | 'clock'>, lot: LotRow, ownerId: number, file: Express.Multer.File): Promise<{ id: number; originalName: string; sizeBytes: number }> {
   const name = displayName(file);
   sniffPdf(file.buffer, name);
   const key = `reports/${lot.id}/${randomUUID()}.pdf`;
-  const steps = new LotStepsService(deps.db);
+  const steps = new LotStepsService(deps.db, deps.clock);
   return writeThenRecord(deps.storage, [{ key, data: file.buffer }], () =>
     deps.db.transaction(async (tx) => {
       const [row] = await tx
