@@ -1,5 +1,5 @@
 import fc from 'fast-check';
-import { EARTH_RADIUS_MI, haversineMiles, type LatLon } from './distance';
+import { boundingBox, EARTH_RADIUS_MI, haversineMiles, type LatLon } from './distance';
 
 const point = fc.record({ lat: fc.double({ min: -90, max: 90, noNaN: true }), lon: fc.double({ min: -180, max: 180, noNaN: true }) });
 
@@ -48,5 +48,54 @@ describe('haversineMiles', () => {
     expect(() => haversineMiles({ lat: 91, lon: 0 }, { lat: 0, lon: 0 })).toThrow(RangeError);
     expect(() => haversineMiles({ lat: 0, lon: 0 }, { lat: 0, lon: 181 })).toThrow(RangeError);
     expect(() => haversineMiles({ lat: Number.NaN, lon: 0 }, { lat: 0, lon: 0 })).toThrow(RangeError);
+  });
+});
+
+describe('boundingBox', () => {
+  const inside = (box: ReturnType<typeof boundingBox>, p: LatLon) => p.lat >= box.minLat && p.lat <= box.maxLat && p.lon >= box.minLon && p.lon <= box.maxLon;
+
+  it('spans the radius north and south: 69.1 mi is one degree of latitude on a 3,958.8 mi sphere', () => {
+    const box = boundingBox({ lat: 39, lon: -96 }, (2 * Math.PI * EARTH_RADIUS_MI) / 360);
+    expect(box.minLat).toBeCloseTo(38, 6);
+    expect(box.maxLat).toBeCloseTo(40, 6);
+  });
+
+  it('at the equator spans the same angle east and west as north and south', () => {
+    const box = boundingBox({ lat: 0, lon: 10 }, 100);
+    expect(box.maxLon - 10).toBeCloseTo(box.maxLat, 6);
+  });
+
+  it('opens the longitudes over a pole and across the antimeridian', () => {
+    expect(boundingBox({ lat: 89.5, lon: 0 }, 100)).toMatchObject({ minLon: -180, maxLon: 180, maxLat: 90 });
+    expect(boundingBox({ lat: 60, lon: 179.9 }, 50)).toMatchObject({ minLon: -180, maxLon: 180 });
+  });
+
+  it('holds every point within the radius (property, against haversineMiles)', () => {
+    fc.assert(
+      fc.property(point, point, fc.double({ min: 0, max: 3000, noNaN: true }), (center, p, radius) => {
+        if (haversineMiles(center, p) <= radius) expect(inside(boundingBox(center, radius), p)).toBe(true);
+      }),
+      { numRuns: 2000 },
+    );
+  });
+
+  it('holds the points on the circle itself, in every direction (property)', () => {
+    fc.assert(
+      fc.property(
+        fc.record({ lat: fc.double({ min: -80, max: 80, noNaN: true }), lon: fc.double({ min: -170, max: 170, noNaN: true }) }),
+        fc.double({ min: 1, max: 500, noNaN: true }),
+        fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
+        (center, radius, bearing) => {
+          // Destination point on the sphere (standard great-circle formula), slightly inside the circle.
+          const d = (radius * 0.999999) / EARTH_RADIUS_MI;
+          const la = (center.lat * Math.PI) / 180;
+          const lo = (center.lon * Math.PI) / 180;
+          const lat2 = Math.asin(Math.sin(la) * Math.cos(d) + Math.cos(la) * Math.sin(d) * Math.cos(bearing));
+          const lon2 = lo + Math.atan2(Math.sin(bearing) * Math.sin(d) * Math.cos(la), Math.cos(d) - Math.sin(la) * Math.sin(lat2));
+          const p = { lat: (lat2 * 180) / Math.PI, lon: (lon2 * 180) / Math.PI };
+          expect(inside(boundingBox(center, radius), p)).toBe(true);
+        },
+      ),
+    );
   });
 });

@@ -4,7 +4,7 @@ import type { Db } from '../../server/db/client';
 import { farms, labAnalyses, lots, samplingRecords, users } from '../../server/db/schema';
 import { hashPassword } from '../../server/features/auth/password';
 import { analysisColumns } from '../../server/features/lots/analysis-record';
-import { locateZip } from '../../server/features/lots/lots.service';
+import { locateZip } from '../../server/features/geo/geo';
 import { uniqueEmail } from './test-api';
 import { TEST_NOW } from './test-clock';
 

@@ -4,7 +4,7 @@ import { evaluateSampling } from '@shared/forage';
 import type { FileStorage } from '../../adapters/storage/file-storage';
 import { hashPassword } from '../../features/auth/password';
 import { analysisColumns } from '../../features/lots/analysis-record';
-import { locateZip } from '../../features/lots/lots.service';
+import { locateZip } from '../../features/geo/geo';
 import { renderPhotoVariants } from '../../features/photos/photo-variants';
 import type { Db } from '../client';
 import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../schema';

@@ -4,7 +4,7 @@ import type { FarmProfile, FarmProfileInput } from '@shared/contracts/selling';
 import type { Db } from '../../db/client';
 import { farms } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
-import { locateZip } from '../lots/lots.service';
+import { locateZip } from '../geo/geo';
 
 type FarmRow = typeof farms.$inferSelect;
 

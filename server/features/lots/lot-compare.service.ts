@@ -3,13 +3,12 @@ import type { ComparedLot, ComparedPricing, LotCompareQuery, LotComparison } fro
 import { costPerLbCrudeProteinCents, costPerMcalDeCents, costPerTonDryMatterCents, deliveredPrice, DEFAULT_TONS_PER_LOAD } from '@shared/pricing';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
-import { farmDistanceSql } from './distance-sql';
-import { locateZip } from './lots.service';
+import { farmDistanceSql, locateZip } from '../geo/geo';
 
 /** Lots side by side: nutrients on a DM basis and cost per unit of what the horse gets, delivered to a ZIP. */
 export async function compareLots(db: Db, query: LotCompareQuery): Promise<LotComparison> {
   const origin = query.zip ? locateZip(query.zip) : null;
-  const distance = origin ? farmDistanceSql(origin.latitude, origin.longitude) : sql<null>`null::float8`;
+  const distance = origin ? farmDistanceSql(origin) : sql<null>`null::float8`;
   const rows = await db
     .select({ lot: lots, farm: farms, analysis: labAnalyses, distanceMi: distance })
     .from(lots)

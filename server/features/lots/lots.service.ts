@@ -1,31 +1,11 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import zipcodes from 'zipcodes';
 import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '@shared/contracts/lots';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
-import { HttpError } from '../../middleware/http-error';
+import { farmDistanceSql, farmWithinSql, locateZip } from '../geo/geo';
 import { evaluationOf } from '../selling/analysis-values';
 import { samplingFactsOf, samplingReportOf } from './sampling-report';
-
-const EARTH_RADIUS_MI = 3958.8;
-
-/** Latitude/longitude of a US ZIP code from the bundled `zipcodes` dataset, or a 400 naming the ZIP. */
-export function locateZip(zip: string): { zip: string; city: string; state: string; latitude: number; longitude: number } {
-  const found = zipcodes.lookup(zip);
-  if (!found) throw new HttpError(400, 'unknown_zip', `ZIP code ${zip} is not in our list of US ZIP codes.`, [{ path: 'zip', message: 'Unknown ZIP code.' }]);
-  return { zip, city: found.city, state: found.state, latitude: found.latitude, longitude: found.longitude };
-}
-
-/** Great-circle distance in miles from a point to the farm, in SQL (haversine). */
-function distanceSql(lat: number, lon: number): SQL<number> {
-  const la = sql`${lat}::float8`;
-  const lo = sql`${lon}::float8`;
-  return sql<number>`(2 * ${EARTH_RADIUS_MI}::float8 * asin(sqrt(
-    power(sin(radians(${farms.latitude} - ${la}) / 2), 2) +
-    cos(radians(${la})) * cos(radians(${farms.latitude})) * power(sin(radians(${farms.longitude} - ${lo}) / 2), 2)
-  )))`;
-}
 
 export function photoView(row: { id: number; altText: string; width: number; height: number; isCover: boolean; variants: PhotoVariant[] }): PhotoView {
   return {
@@ -47,7 +27,7 @@ export class LotsService {
    */
   async search(query: LotSearch, scope: { lotIds?: readonly number[] } = {}): Promise<LotSearchResult> {
     const origin = query.zip ? locateZip(query.zip) : null;
-    const distance = origin ? distanceSql(origin.latitude, origin.longitude) : null;
+    const distance = origin ? farmDistanceSql(origin) : null;
     const tonsAvailable = sql<number>`(${lots.balesAvailable} * ${lots.avgBaleWeightLb} / 2000.0)`;
     const pricePerDmTon = sql<number>`(${lots.priceCentsPerTon} / (${labAnalyses.dryMatterPct} / 100.0))`;
 
@@ -71,14 +51,7 @@ export class LotsService {
     if (query.tonsMin !== undefined) add(sql`${tonsAvailable} >= ${query.tonsMin}::float8`);
     if (query.compliantOnly) add(eq(samplingRecords.compliant, true));
     if (query.verifiedOnly) add(and(eq(labAnalyses.verification, 'verified'), eq(labAnalyses.labCertified, true)));
-    if (origin && distance && query.radiusMi !== undefined) {
-      // A bounding box first lets the farms (lat, lon) index discard far rows before the exact distance.
-      const dLat = query.radiusMi / 69.0;
-      const dLon = query.radiusMi / (69.0 * Math.max(0.01, Math.cos((origin.latitude * Math.PI) / 180)));
-      add(sql`${farms.latitude} between ${origin.latitude - dLat}::float8 and ${origin.latitude + dLat}::float8`);
-      add(sql`${farms.longitude} between ${origin.longitude - dLon}::float8 and ${origin.longitude + dLon}::float8`);
-      add(sql`${distance} <= ${query.radiusMi}::float8`);
-    }
+    if (origin && query.radiusMi !== undefined) add(farmWithinSql(origin, query.radiusMi));
 
     const order: SQL[] = {
       newest: [desc(lots.publishedAt)],

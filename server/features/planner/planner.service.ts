@@ -1,11 +1,10 @@
-import { and, asc, eq, isNotNull, lte, sql } from 'drizzle-orm';
+import { and, asc, eq, isNotNull, sql } from 'drizzle-orm';
 import type { z } from 'zod';
 import type { PlanCandidate, PlanPurchaseLine, PurchasePlanRequestSchema, PurchasePlanResponse } from '@shared/contracts/planner';
 import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '@shared/planner';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
-import { farmDistanceSql } from '../lots/distance-sql';
-import { locateZip } from '../lots/lots.service';
+import { farmDistanceSql, farmWithinSql, locateZip, type ZipPlace } from '../geo/geo';
 
 /** More candidates than this slows the whole-load search without changing realistic plans. */
 export const MAX_PLAN_CANDIDATES = 30;
@@ -13,9 +12,9 @@ export const MAX_PLAN_CANDIDATES = 30;
 type PurchasePlanRequest = z.infer<typeof PurchasePlanRequestSchema>;
 
 /** Listed lots in stock, with a freight rate, that the grower delivers to the ZIP: nearest first. */
-export async function loadPlanCandidates(db: Db, zip: string, maxDistanceMi: number): Promise<{ origin: ReturnType<typeof locateZip>; candidates: PlanCandidate[] }> {
+export async function loadPlanCandidates(db: Db, zip: string, maxDistanceMi: number): Promise<{ origin: ZipPlace; candidates: PlanCandidate[] }> {
   const origin = locateZip(zip);
-  const distance = farmDistanceSql(origin.latitude, origin.longitude);
+  const distance = farmDistanceSql(origin);
   const rows = await db
     .select({
       lotId: lots.id,
@@ -39,7 +38,7 @@ export async function loadPlanCandidates(db: Db, zip: string, maxDistanceMi: num
         eq(lots.status, 'listed'),
         sql`${lots.balesAvailable} > 0`,
         isNotNull(lots.freightCentsPerLoadedMile),
-        lte(distance, sql`least(${farms.deliveryRadiusMi}::float8, ${maxDistanceMi}::float8)`),
+        farmWithinSql(origin, maxDistanceMi, sql`least(${farms.deliveryRadiusMi}::float8, ${maxDistanceMi}::float8)`),
       ),
     )
     .orderBy(asc(distance), asc(lots.id))
