@@ -2,3 +2,4 @@ export * from './cost-per-nutrient';
 export * from './delivered-price';
 export * from './distance';
 export * from './freight';
+export * from './order-total';

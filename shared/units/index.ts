@@ -1,3 +1,4 @@
 export * from './mass';
 export * from './money';
 export * from './rounding';
+export * from './bales';

@@ -1,6 +1,8 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
 import { USER_ROLES } from '@shared/contracts/auth';
 import { BALE_TYPES, FORAGE_TYPES } from '@shared/contracts/lots';
+import { DELIVERY_STATUSES } from '@shared/lifecycle/delivery-lifecycle';
+import { ORDER_STATUSES } from '@shared/lifecycle/order-lifecycle';
 
 export const userRole = pgEnum('user_role', USER_ROLES);
 
@@ -35,18 +37,9 @@ export const analysisMethod = pgEnum('analysis_method', ['nirs', 'wet_chemistry'
 
 export const verificationState = pgEnum('verification_state', ['pending', 'verified', 'rejected']);
 
-export const orderStatus = pgEnum('order_status', [
-  'awaiting_payment',
-  'paid',
-  'scheduled',
-  'delivered',
-  'claimed',
-  'refunded',
-  'cancelled',
-  'completed',
-]);
+export const orderStatus = pgEnum('order_status', ORDER_STATUSES);
 
 export const deliveryMethod = pgEnum('delivery_method', ['delivery', 'pickup']);
-export const deliveryStatus = pgEnum('delivery_status', ['proposed', 'confirmed', 'in_transit', 'done', 'missed']);
+export const deliveryStatus = pgEnum('delivery_status', DELIVERY_STATUSES);
 export const claimStatus = pgEnum('claim_status', ['open', 'upheld', 'declined', 'withdrawn']);
 export const payoutStatus = pgEnum('payout_status', ['held', 'due', 'sent', 'failed']);

@@ -1,0 +1,96 @@
+import { goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
+
+// $12 for a 60 lb bale = $400.0/t (domain brief §11).
+const smallSquares: LotTerms = {
+  pricingUnit: 'ton',
+  priceCentsPerTon: 40_000,
+  priceCentsPerBale: null,
+  avgBaleWeightLb: 60,
+  minOrderTons: 1,
+  balesAvailable: 1000,
+  freightCentsPerLoadedMile: 350,
+};
+
+describe('order total', () => {
+  it('prices 800 bales of 60 lb (24 t) at $400/t as $9,600 of hay (domain brief §11: $/t = $/bale × 2000 / lb)', () => {
+    expect(goodsCents(smallSquares, 800)).toBe(960_000);
+    // The same hay sold at $12 a bale costs the same.
+    expect(goodsCents({ ...smallSquares, pricingUnit: 'bale', priceCentsPerBale: 1200 }, 800)).toBe(960_000);
+  });
+
+  it('charges $3.50 × 300 loaded miles = $1,050 for one 24 t load (domain brief §11 freight example)', () => {
+    const total = orderTotal(smallSquares, { bales: 800, method: 'delivery', distanceMi: 300 });
+    expect(total.tons).toBe(24);
+    expect(total.loads).toBe(1);
+    expect(total.freightCents).toBe(105_000);
+  });
+
+  it('bills whole loads: one bale over a 24 t load is a second load (practice: freight per load)', () => {
+    const total = orderTotal({ ...smallSquares, balesAvailable: 2000 }, { bales: 801, method: 'delivery', distanceMi: 300 });
+    expect(total.loads).toBe(2);
+    expect(total.freightCents).toBe(210_000);
+  });
+
+  it('fills a load by bale count when the trailer holds fewer bales than its weight allows (domain brief §11: light bales fill by volume)', () => {
+    expect(loadsFor(600, 18, { tonsPerLoad: 24, balesPerLoad: 500 })).toBe(2);
+    expect(loadsFor(600, 18, { tonsPerLoad: 24, balesPerLoad: null })).toBe(1);
+  });
+
+  it('adds the 3 % platform fee on the hay only, and the total is the sum in whole cents (our fee policy)', () => {
+    const total = orderTotal(smallSquares, { bales: 800, method: 'delivery', distanceMi: 300 });
+    expect(total.platformFeeCents).toBe(28_800); // 3 % of $9,600
+    expect(total.totalCents).toBe(960_000 + 105_000 + 28_800);
+  });
+
+  it('charges no freight for pickup at the farm', () => {
+    const total = orderTotal(smallSquares, { bales: 100, method: 'pickup', distanceMi: null });
+    expect(total.freightCents).toBe(0);
+    expect(total.totalCents).toBe(total.goodsCents + total.platformFeeCents);
+  });
+
+  it('keeps every amount a whole number of cents for awkward weights (conventions: integer cents)', () => {
+    for (const bales of [1, 7, 33, 333]) {
+      const t = orderTotal({ ...smallSquares, avgBaleWeightLb: 61.7, priceCentsPerTon: 23_317 }, { bales, method: 'delivery', distanceMi: 17.3 });
+      for (const v of [t.goodsCents, t.freightCents, t.platformFeeCents, t.totalCents]) expect(Number.isInteger(v)).toBe(true);
+    }
+  });
+});
+
+describe('order problems', () => {
+  it('asks for the minimum order in whole bales: 1 t of 60 lb bales is 34 bales (2000/60 = 33.3 → 34)', () => {
+    expect(minimumBales(smallSquares)).toBe(34);
+    expect(orderProblem(smallSquares, { bales: 33, method: 'pickup', distanceMi: null })).toMatchObject({ code: 'below_minimum', minBales: 34 });
+    expect(orderProblem(smallSquares, { bales: 34, method: 'pickup', distanceMi: null })).toBeNull();
+  });
+
+  it('lets a buyer take the last bales of a lot even below the minimum (common practice: clearing a lot)', () => {
+    expect(orderProblem({ ...smallSquares, balesAvailable: 10 }, { bales: 10, method: 'pickup', distanceMi: null })).toBeNull();
+  });
+
+  it('refuses more bales than are left, saying how many are', () => {
+    expect(orderProblem({ ...smallSquares, balesAvailable: 50 }, { bales: 51, method: 'pickup', distanceMi: null })).toMatchObject({ code: 'not_enough_bales', message: 'Only 50 bales are left in this lot.' });
+  });
+
+  it('refuses delivery when the grower gives no freight rate, or without a distance', () => {
+    expect(orderProblem({ ...smallSquares, freightCentsPerLoadedMile: null }, { bales: 100, method: 'delivery', distanceMi: 20 })?.code).toBe('no_delivery');
+    expect(orderProblem(smallSquares, { bales: 100, method: 'delivery', distanceMi: null })?.code).toBe('no_distance');
+  });
+});
+
+describe('scale ticket settlement', () => {
+  // 24 t paid at $400/t = $9,600 + $288 fee; the ticket shows 23.5 t.
+  const paid = { pricingUnit: 'ton' as const, priceCentsPerTon: 40_000, paidGoodsCents: 960_000, paidFeeCents: 28_800 };
+
+  it('refunds the hay and fee on the missing half ton: $200 + $6 (price × tons short)', () => {
+    expect(scaleTicketRefundCents({ ...paid, weighedTons: 23.5 })).toBe(20_000 + 600);
+  });
+
+  it('never charges more when the ticket shows more tons than paid for (issue 10: never charged more than agreed)', () => {
+    expect(scaleTicketRefundCents({ ...paid, weighedTons: 25 })).toBe(0);
+    expect(scaleTicketRefundCents({ ...paid, weighedTons: 24 })).toBe(0);
+  });
+
+  it('does not settle bale-priced orders on weight: they were counted', () => {
+    expect(scaleTicketRefundCents({ ...paid, pricingUnit: 'bale', weighedTons: 20 })).toBe(0);
+  });
+});

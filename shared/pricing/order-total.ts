@@ -1,0 +1,128 @@
+/**
+ * What a buyer pays for one order: hay + freight + platform fee, all whole cents.
+ */
+import { balesForTons, balesToTons } from '../units/bales';
+import { type Cents, roundCents } from '../units/money';
+import { DEFAULT_TONS_PER_LOAD, freightPerLoadCents } from './freight';
+
+/** The platform's fee on the hay (not on freight), in basis points: 3 % (our own policy). */
+export const PLATFORM_FEE_BPS = 300;
+
+/** The lot's terms that decide a price. */
+export interface LotTerms {
+  /** 'ton': the price is per short ton as-fed and the order settles on the scale ticket; 'bale': per bale counted. */
+  readonly pricingUnit: 'ton' | 'bale';
+  readonly priceCentsPerTon: Cents;
+  readonly priceCentsPerBale: Cents | null;
+  readonly avgBaleWeightLb: number;
+  readonly minOrderTons: number;
+  readonly balesAvailable: number;
+  /** Grower's freight rate, cents per loaded mile; null when the grower does not deliver. */
+  readonly freightCentsPerLoadedMile: number | null;
+}
+
+/** What one truck or trailer of the grower carries; a load is full by weight or by count, whichever comes first. */
+export interface TruckCapacity {
+  readonly tonsPerLoad: number;
+  readonly balesPerLoad: number | null;
+}
+
+export interface OrderRequest {
+  readonly bales: number;
+  readonly method: 'delivery' | 'pickup';
+  /** Loaded (one-way) miles from the farm, an estimate; required for delivery. */
+  readonly distanceMi: number | null;
+}
+
+export interface OrderTotal {
+  readonly bales: number;
+  readonly tons: number;
+  readonly goodsCents: Cents;
+  readonly loads: number;
+  readonly freightCents: Cents;
+  readonly platformFeeCents: Cents;
+  readonly totalCents: Cents;
+}
+
+export type OrderProblem =
+  | { readonly code: 'below_minimum'; readonly message: string; readonly minBales: number }
+  | { readonly code: 'not_enough_bales'; readonly message: string; readonly balesAvailable: number }
+  | { readonly code: 'no_delivery'; readonly message: string }
+  | { readonly code: 'no_distance'; readonly message: string };
+
+/** The fewest bales that meet the lot's minimum order (at least one). */
+export function minimumBales(terms: Pick<LotTerms, 'minOrderTons' | 'avgBaleWeightLb'>): number {
+  return Math.max(1, balesForTons(terms.minOrderTons, terms.avgBaleWeightLb));
+}
+
+/** Hay cost of `bales`: counted at the bale price when sold by the bale, else weighed at the ton price. */
+export function goodsCents(terms: Pick<LotTerms, 'pricingUnit' | 'priceCentsPerTon' | 'priceCentsPerBale' | 'avgBaleWeightLb'>, bales: number): Cents {
+  if (terms.pricingUnit === 'bale' && terms.priceCentsPerBale !== null) return terms.priceCentsPerBale * bales;
+  return roundCents(terms.priceCentsPerTon * balesToTons(bales, terms.avgBaleWeightLb));
+}
+
+export function platformFeeCents(goods: Cents): Cents {
+  return roundCents((goods * PLATFORM_FEE_BPS) / 10_000);
+}
+
+/** Whole loads for an order: by weight, and by bale count when the truck has one. */
+export function loadsFor(bales: number, tons: number, truck: TruckCapacity): number {
+  const byWeight = Math.ceil(Number((tons / truck.tonsPerLoad).toPrecision(12)));
+  const byCount = truck.balesPerLoad ? Math.ceil(bales / truck.balesPerLoad) : 0;
+  return Math.max(1, byWeight, byCount);
+}
+
+export const DEFAULT_TRUCK: TruckCapacity = { tonsPerLoad: DEFAULT_TONS_PER_LOAD, balesPerLoad: null };
+
+/** Checks an order against the lot's terms; returns the first problem, or null when it can be placed. */
+export function orderProblem(terms: LotTerms, request: OrderRequest): OrderProblem | null {
+  const minBales = minimumBales(terms);
+  if (request.bales > terms.balesAvailable) {
+    return {
+      code: 'not_enough_bales',
+      message: terms.balesAvailable === 0 ? 'This lot has no bales left.' : `Only ${terms.balesAvailable} bales are left in this lot.`,
+      balesAvailable: terms.balesAvailable,
+    };
+  }
+  if (request.bales < minBales && request.bales < terms.balesAvailable) {
+    return { code: 'below_minimum', message: `The grower sells at least ${minBales} bales (${terms.minOrderTons} t) from this lot.`, minBales };
+  }
+  if (request.method === 'delivery') {
+    if (terms.freightCentsPerLoadedMile === null) return { code: 'no_delivery', message: 'The grower does not deliver this lot; choose pickup at the farm.' };
+    if (request.distanceMi === null) return { code: 'no_distance', message: 'Give the delivery ZIP code so the freight can be worked out.' };
+  }
+  return null;
+}
+
+/**
+ * The order's figures. Freight = rate per loaded mile × miles × whole loads (domain brief §11); the
+ * platform fee is charged on the hay only. The last bales of a lot may be bought below the minimum.
+ */
+export function orderTotal(terms: LotTerms, request: OrderRequest, truck: TruckCapacity = DEFAULT_TRUCK): OrderTotal {
+  const tons = balesToTons(request.bales, terms.avgBaleWeightLb);
+  const goods = goodsCents(terms, request.bales);
+  const delivering = request.method === 'delivery' && terms.freightCentsPerLoadedMile !== null && request.distanceMi !== null;
+  const loads = loadsFor(request.bales, tons, truck);
+  const freight = delivering ? freightPerLoadCents(terms.freightCentsPerLoadedMile!, request.distanceMi!) * loads : 0;
+  const fee = platformFeeCents(goods);
+  return { bales: request.bales, tons, goodsCents: goods, loads, freightCents: freight, platformFeeCents: fee, totalCents: goods + freight + fee };
+}
+
+/**
+ * Settling a by-the-ton order on the scale ticket: when fewer tons were weighed than paid for, the
+ * hay and fee on the missing tons come back; more tons never cost the buyer more. Bale-priced orders
+ * were counted, not weighed, so they never settle on weight.
+ */
+export function scaleTicketRefundCents(input: {
+  readonly pricingUnit: 'ton' | 'bale';
+  readonly priceCentsPerTon: Cents;
+  readonly paidGoodsCents: Cents;
+  readonly paidFeeCents: Cents;
+  readonly weighedTons: number;
+}): Cents {
+  if (input.pricingUnit !== 'ton') return 0;
+  if (!(input.weighedTons > 0) || !Number.isFinite(input.weighedTons)) throw new RangeError(`weighedTons must be positive; got ${input.weighedTons}`);
+  const deliveredGoods = Math.min(input.paidGoodsCents, roundCents(input.priceCentsPerTon * input.weighedTons));
+  const deliveredFee = Math.min(input.paidFeeCents, platformFeeCents(deliveredGoods));
+  return input.paidGoodsCents - deliveredGoods + (input.paidFeeCents - deliveredFee);
+}
