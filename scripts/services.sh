@@ -26,7 +26,8 @@ start_fakes() {
   if curl -fsS -o /dev/null "http://127.0.0.1:$STRIPE_FAKE_PORT/health" 2>/dev/null; then
     log "Stripe fake already running on :$STRIPE_FAKE_PORT"
   else
-    STRIPE_FAKE_PORT="$STRIPE_FAKE_PORT" node --import tsx "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" >"$logdir/stripe-fake.log" 2>&1 &
+    # Payment events go to the app that the fakes serve (npm start: PORT; npm test: E2E_PORT).
+    STRIPE_FAKE_PORT="$STRIPE_FAKE_PORT" STRIPE_WEBHOOK_URL="${STRIPE_WEBHOOK_URL:-http://127.0.0.1:${APP_PORT:-${PORT:-4000}}/api/payments/webhook}" node --import tsx "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" >"$logdir/stripe-fake.log" 2>&1 &
     SERVICE_PIDS+=($!)
     wait_for_url "http://127.0.0.1:$STRIPE_FAKE_PORT/health" "Stripe fake"
     log "Stripe fake: http://127.0.0.1:$STRIPE_FAKE_PORT"
