@@ -1,84 +1,184 @@
 /**
- * Catalogue search benchmark: fills a scratch database with many listed lots, then times typical
- * GET /api/lots queries through LotsService.search and prints p50/p95 latencies and one query plan.
+ * `npm run bench`: the catalogue at scale, measured against a bare Express route in the same run.
  *
- *   bash scripts/db.sh start && bash scripts/db.sh recreate baleproof_bench
- *   DATABASE_URL=postgres://postgres@127.0.0.1:54329/baleproof_bench node --import tsx server/db/migrate-cli.ts
- *   DATABASE_URL=postgres://postgres@127.0.0.1:54329/baleproof_bench node --import tsx scripts/bench/catalogue-bench.ts [lots]
- *
- * The figures are synthetic (random within hay ranges) and exist only to load the database.
+ * scripts/bench/run.sh prepares a scratch database (baleproof_bench) and the production build, then runs
+ * this file, which fills the database with synthetic lots (BENCH_LOTS, default 100,000), prints the
+ * EXPLAIN (ANALYZE) plan of every SQL statement behind each typical catalogue query, starts the built
+ * server (dist/) and a bare Express 5 route answering a 12-item JSON, loads each with autocannon
+ * (BENCH_CONNECTIONS, default 32, for BENCH_SECONDS each, default 10) and prints req/s, p50/p95/p99 and
+ * each ratio to the baseline, then the bytes a first visit to /hay downloads in Chromium.
+ * Results are also written to .data/bench/latest.json. Not part of `npm test`.
  */
-import { sql } from 'drizzle-orm';
+import { fork, spawn, type ChildProcess } from 'node:child_process';
+import { mkdirSync, writeFileSync } from 'node:fs';
+import { cpus, loadavg } from 'node:os';
+import { join } from 'node:path';
 import { performance } from 'node:perf_hooks';
+import { drizzle } from 'drizzle-orm/node-postgres';
+import { sql } from 'drizzle-orm';
+import pg from 'pg';
 import { LotSearchSchema } from '@shared/contracts/lots';
-import { createDb } from '../../server/db/client';
+import type { Db } from '../../server/db/client';
+import * as schema from '../../server/db/schema';
 import { LotsService } from '../../server/features/lots/lots.service';
+import { fillBenchData } from './bench-data';
+import { measureFirstLoad } from './first-load';
+import { loadTest, type LoadResult } from './load-test';
 
-const lotCount = Number(process.argv[2] ?? 20000);
-const db = createDb(process.env['DATABASE_URL'] ?? 'postgres://postgres@127.0.0.1:54329/baleproof_bench', 2);
+const root = join(import.meta.dirname, '../..');
+const databaseUrl = process.env['BENCH_DATABASE_URL'] ?? 'postgres://postgres@127.0.0.1:54329/baleproof_bench';
+const lotCount = Number(process.env['BENCH_LOTS'] ?? 100_000);
+const seconds = Number(process.env['BENCH_SECONDS'] ?? 10);
+const connections = Number(process.env['BENCH_CONNECTIONS'] ?? 32);
+const appPort = Number(process.env['BENCH_PORT'] ?? 4090);
+const basePort = appPort + 1;
 
-async function fill(): Promise<void> {
-  const [{ n }] = (await db.execute(sql`select count(*)::int as n from lots`)).rows as [{ n: number }];
-  if (n >= lotCount) return;
-  const started = performance.now();
-  await db.execute(sql`insert into users (email, password_hash, display_name, role)
-    select 'bench' || g || '@bench.example', 'x', 'Bench grower ' || g, 'grower' from generate_series(1, 200) g
-    on conflict do nothing`);
-  // 200 farms scattered over the central US.
-  await db.execute(sql`insert into farms (owner_id, name, address_line, city, state, zip, latitude, longitude)
-    select u.id, 'Bench farm ' || u.id, 'Road', 'Town', 'KS', '66502', 35 + random() * 10, -102 + random() * 10
-    from users u where u.email like 'bench%' and not exists (select 1 from farms f where f.owner_id = u.id)`);
-  await db.execute(sql`insert into lots (farm_id, title, field_name, cutting, forage_type, forage_class, harvest_started_on, harvest_ended_on,
-      storage, bale_type, bale_count, bales_available, avg_bale_weight_lb, price_cents_per_ton, status, published_at)
-    select f.id, 'Bench lot ' || g, 'Field', 1 + (g % 4), (array['alfalfa','timothy','orchardgrass','bermudagrass','teff'])[1 + g % 5]::forage_type,
-      (case when g % 5 = 0 then 'legume' else 'grass' end)::forage_class, date '2026-06-01', date '2026-06-02', 'barn',
-      (array['small_square_2_string','round_4x5','large_square_3x4x8'])[1 + g % 3]::bale_type, 1000, (g % 7) * 100, 60,
-      15000 + (g * 37) % 25000, (case when g % 10 = 0 then 'draft' else 'listed' end)::lot_status, now() - (g || ' minutes')::interval
-    from generate_series(1, ${lotCount}) g join lateral (select id from farms where name like 'Bench farm%' order by id offset (g % 200) limit 1) f on true`);
-  await db.execute(sql`insert into lab_analyses (lot_id, lab_name, lab_certified, report_date, dry_matter_pct, crude_protein_pct, adf_pct, ndf_pct,
-      rfv, tdn_pct, tdn_method, de_mcal_per_kg_dm, de_method, nsc_pct, usda_grade, verification)
-    select l.id, 'Bench lab', true, date '2026-07-01', 86 + random() * 5, 7 + random() * 17, 25 + random() * 12, 40 + random() * 25,
-      80 + random() * 110, 55 + random() * 10, 'adf-western', 2 + random() * 0.7, 'tdn-approximation', 7 + random() * 8, 'Good', 'verified'
-    from lots l where l.title like 'Bench lot%' and not exists (select 1 from lab_analyses a where a.lot_id = l.id)`);
-  await db.execute(sql`analyze`);
-  console.log(`filled ${lotCount} lots in ${((performance.now() - started) / 1000).toFixed(1)} s`);
-}
-
-const QUERIES: Record<string, Record<string, string>> = {
-  'newest, first page': {},
-  'RFV 150+ and CP 18+': { rfvMin: '150', cpMin: '18' },
-  'alfalfa under $250/t, by price': { forageType: 'alfalfa', priceMax: '250', sort: 'price' },
-  'within 100 mi of 66502, nearest': { zip: '66502', radiusMi: '100', sort: 'distance' },
-  'NSC under 10, price per ton DM, page 5': { nscMax: '10', sort: 'price_dm', page: '5' },
+/** The typical catalogue queries: what a buyer asks most (issue figures were taken on the first three). */
+const API_QUERIES: Record<string, string> = {
+  'RFV 150+ and CP 18+': 'rfvMin=150&cpMin=18',
+  'alfalfa under $250/t, by price': 'forageType=alfalfa&priceMax=250&sort=price',
+  'newest, first page': '',
+  'within 100 mi of 66502, nearest': 'zip=66502&radiusMi=100&sort=distance',
+  'by price per ton DM': 'sort=price_dm',
 };
 
+const TARGETS = { apiP95Ms: 25, apiRatio: 0.25, pageP95Ms: 150, firstLoadBytes: 400_000, initialJsBytes: 250_000 };
+
 async function main(): Promise<void> {
-  await fill();
-  const service = new LotsService(db);
-  console.log(`\nquery (${lotCount} lots)`.padEnd(48) + 'total'.padStart(8) + 'p50 ms'.padStart(10) + 'p95 ms'.padStart(10));
-  for (const [name, q] of Object.entries(QUERIES)) {
-    const query = LotSearchSchema.parse(q);
-    const times: number[] = [];
-    let total = 0;
-    for (let i = 0; i < 40; i++) {
-      const t0 = performance.now();
-      total = (await service.search(query)).total;
-      times.push(performance.now() - t0);
-    }
-    times.sort((a, b) => a - b);
-    const pct = (p: number) => times[Math.min(times.length - 1, Math.floor(p * times.length))]!.toFixed(1);
-    console.log(name.padEnd(48) + String(total).padStart(8) + pct(0.5).padStart(10) + pct(0.95).padStart(10));
+  const captured: { query: string; params: unknown[] }[] = [];
+  const pool = new pg.Pool({ connectionString: databaseUrl, max: 2 });
+  const db = drizzle({ client: pool, schema, casing: 'snake_case', logger: { logQuery: (query, params) => void captured.push({ query, params }) } }) as Db;
+  try {
+    const [{ n }] = (await db.execute(sql`select count(*)::int as n from lots`)).rows as [{ n: number }];
+    if (n === 0) {
+      const started = performance.now();
+      await fillBenchData(db, lotCount);
+      console.log(`filled ${lotCount.toLocaleString('en-US')} lots in ${((performance.now() - started) / 1000).toFixed(1)} s`);
+    } else console.log(`database already holds ${n.toLocaleString('en-US')} lots`);
+    await printPlans(db, captured);
+  } finally {
+    await pool.end();
   }
-  const plan = await db.execute(sql.raw(`explain (analyze, costs off, timing off, summary on)
-    select l.id from lots l join lab_analyses a on a.lot_id = l.id and a.is_current
-    where l.status = 'listed' and a.rfv >= 150 and a.crude_protein_pct >= 18 order by l.published_at desc limit 12`));
-  console.log('\nplan for "RFV 150+ and CP 18+":');
-  for (const row of plan.rows as { 'QUERY PLAN': string }[]) console.log('  ' + row['QUERY PLAN']);
+
+  const [{ id: lotId }] = await oneRow<{ id: number }>(`select id from lots where status = 'listed' and bales_available > 0 order by id limit 1 offset 5000`);
+  const children: ChildProcess[] = [];
+  try {
+    children.push(await startBaseline());
+    children.push(await startApp());
+    const targets: [string, string, 'base' | 'api' | 'page'][] = [
+      ['bare Express, 12-item JSON', `http://127.0.0.1:${basePort}/items`, 'base'],
+      ...Object.entries(API_QUERIES).map(([name, q]): [string, string, 'api'] => [`GET /api/lots  ${name}`, `http://127.0.0.1:${appPort}/api/lots${q ? '?' + q : ''}`, 'api']),
+      ['GET /hay (server-rendered)', `http://127.0.0.1:${appPort}/hay`, 'page'],
+      [`GET /hay/${lotId} (lot page)`, `http://127.0.0.1:${appPort}/hay/${lotId}`, 'page'],
+    ];
+    const results: { name: string; url: string; kind: string; result: LoadResult }[] = [];
+    // The browser asks for compressed responses; so does the load.
+    const headers = { 'accept-encoding': 'gzip, deflate, br' };
+    console.log(`\nautocannon: ${connections} connections, ${seconds} s per target after a 2 s warm-up; ${cpus().length} cores, load average ${loadavg().map((l) => l.toFixed(1)).join(' ')}`);
+    for (const [name, url, kind] of targets) {
+      await loadTest(url, { connections, seconds: 2, headers });
+      await settle();
+      results.push({ name, url, kind, result: await loadTest(url, { connections, seconds, headers }) });
+      // Requests still queued in the server would otherwise slow the next target.
+      await settle();
+    }
+    printLoadTable(results);
+
+    const firstLoad = await measureFirstLoad(`http://127.0.0.1:${appPort}/hay`);
+    console.log(`\nfirst visit to /hay (Chromium, empty cache): ${firstLoad.requests} requests, ${kB(firstLoad.totalBytes)} transferred` +
+      ` (target < ${kB(TARGETS.firstLoadBytes)}); JavaScript ${kB(firstLoad.jsBytes)} compressed / ${kB(firstLoad.jsDecodedBytes)} decoded` +
+      ` (target < ${kB(TARGETS.initialJsBytes)} compressed); fonts ${kB(firstLoad.fontBytes)}`);
+    for (const l of firstLoad.largest) console.log(`  ${kB(l.bytes).padStart(9)}  ${l.url}`);
+
+    mkdirSync(join(root, '.data/bench'), { recursive: true });
+    const report = { date: new Date().toISOString(), cores: cpus().length, cpu: cpus()[0]?.model, loadavg: loadavg(), lots: lotCount, connections, seconds, results, firstLoad };
+    writeFileSync(join(root, '.data/bench/latest.json'), JSON.stringify(report, null, 2));
+  } finally {
+    for (const c of children) c.kill('SIGTERM');
+  }
 }
 
-main()
-  .finally(() => db.$client.end())
-  .catch((e) => {
-    console.error(e);
-    process.exitCode = 1;
+/** Waits (up to 2 minutes) until the server answers its health check within 100 ms again. */
+async function settle(): Promise<void> {
+  const deadline = Date.now() + 120_000;
+  while (Date.now() < deadline) {
+    const started = performance.now();
+    const ok = await fetch(`http://127.0.0.1:${appPort}/api/health`).then((r) => r.ok, () => false);
+    if (ok && performance.now() - started < 100) return;
+    await new Promise((r) => setTimeout(r, 500));
+  }
+}
+
+async function oneRow<T>(text: string): Promise<T[]> {
+  const client = new pg.Client({ connectionString: databaseUrl });
+  await client.connect();
+  try {
+    return (await client.query(text)).rows as T[];
+  } finally {
+    await client.end();
+  }
+}
+
+/** Runs each typical query through the real service once and prints the plan of every statement it sent. */
+async function printPlans(db: Db, captured: { query: string; params: unknown[] }[]): Promise<void> {
+  const service = new LotsService(db);
+  for (const [name, q] of Object.entries(API_QUERIES)) {
+    captured.length = 0;
+    const result = await service.search(LotSearchSchema.parse(Object.fromEntries(new URLSearchParams(q))));
+    const statements = [...captured];
+    console.log(`\n=== ${name}  (GET /api/lots?${q}) → total ${result.total}, ${result.items.length} on the page`);
+    for (const s of statements) {
+      const plan = await db.$client.query(`explain (analyze, costs off) ${s.query}`, s.params);
+      console.log('  ' + s.query.replace(/\s+/g, ' ').slice(0, 160) + (s.query.length > 160 ? '…' : ''));
+      for (const row of plan.rows as { 'QUERY PLAN': string }[]) console.log('    ' + row['QUERY PLAN']);
+    }
+  }
+}
+
+function printLoadTable(results: { name: string; kind: string; result: LoadResult }[]): void {
+  const base = results.find((r) => r.kind === 'base')!.result.requestsPerSec;
+  console.log('\n' + 'target'.padEnd(58) + 'req/s'.padStart(9) + 'p50 ms'.padStart(9) + 'p95 ms'.padStart(9) + 'p99 ms'.padStart(9) + 'ratio'.padStart(9) + 'fail'.padStart(7) + '  meets target');
+  for (const { name, kind, result: r } of results) {
+    const ratio = r.requestsPerSec / base;
+    const verdict =
+      kind === 'api' ? (r.p95 < TARGETS.apiP95Ms && ratio >= TARGETS.apiRatio ? 'yes' : `no (p95 < ${TARGETS.apiP95Ms} ms, ratio ≥ ${TARGETS.apiRatio})`)
+      : kind === 'page' ? (r.p95 < TARGETS.pageP95Ms ? 'yes' : `no (p95 < ${TARGETS.pageP95Ms} ms)`)
+      : '';
+    console.log(
+      name.padEnd(58) + r.requestsPerSec.toFixed(1).padStart(9) + r.p50.toFixed(0).padStart(9) + r.p95.toFixed(0).padStart(9) +
+        r.p99.toFixed(0).padStart(9) + ratio.toFixed(3).padStart(9) + String(r.failures).padStart(7) + '  ' + verdict,
+    );
+  }
+}
+
+const kB = (bytes: number) => `${(bytes / 1000).toFixed(1)} kB`;
+
+function startBaseline(): Promise<ChildProcess> {
+  const child = fork(join(import.meta.dirname, 'bare-express.mjs'), { env: { ...process.env, PORT: String(basePort) }, stdio: 'inherit' });
+  return new Promise((resolve, reject) => {
+    child.once('message', () => resolve(child));
+    child.once('exit', (code) => reject(new Error(`baseline server exited (${code})`)));
   });
+}
+
+/** The production build, as `npm run serve:ssr` starts it, on the bench database. */
+async function startApp(): Promise<ChildProcess> {
+  const child = spawn(process.execPath, [join(root, 'dist/baleproof/server/server.mjs')], {
+    env: { ...process.env, NODE_ENV: 'production', PORT: String(appPort), DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn', PUBLIC_URL: `http://127.0.0.1:${appPort}` },
+    stdio: 'inherit',
+  });
+  const deadline = Date.now() + 60_000;
+  while (Date.now() < deadline) {
+    if (child.exitCode !== null) throw new Error(`server exited (${child.exitCode})`);
+    const ok = await fetch(`http://127.0.0.1:${appPort}/api/health`).then((r) => r.ok, () => false);
+    if (ok) return child;
+    await new Promise((r) => setTimeout(r, 250));
+  }
+  child.kill('SIGTERM');
+  throw new Error('server did not answer /api/health within 60 s');
+}
+
+main().catch((e) => {
+  console.error(e);
+  process.exitCode = 1;
+});

@@ -1,0 +1,18 @@
+#!/usr/bin/env bash
+# npm run bench: a scratch database with synthetic lots, the production build, then the measurements
+# (scripts/bench/catalogue-bench.ts). BENCH_SKIP_BUILD=1 reuses dist/; BENCH_KEEP_DB=1 reuses a filled database.
+set -euo pipefail
+source "$(dirname "$0")/../env.sh"
+cd "$ROOT"
+
+bash scripts/db.sh start
+export BENCH_DATABASE_URL="postgres://postgres@127.0.0.1:$PGPORT_LOCAL/baleproof_bench"
+if [ "${BENCH_KEEP_DB:-}" != 1 ]; then
+  bash scripts/db.sh recreate baleproof_bench
+  DATABASE_URL="$BENCH_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
+fi
+if [ "${BENCH_SKIP_BUILD:-}" != 1 ] || [ ! -f dist/baleproof/server/server.mjs ]; then
+  log "building the production app"
+  node_modules/.bin/ng build --configuration production
+fi
+node --import tsx scripts/bench/catalogue-bench.ts
