@@ -1,6 +1,6 @@
 import { z } from 'zod';
 // Types only from least-cost-plan, so the browser bundle never pulls in the solver.
-import type { LeastCostPlan } from '../planner/least-cost-plan';
+import type { LeastCostPlan } from '../planner/least-cost-contract';
 import { HerdNeedsRequestSchema, type HerdNeedsPlan } from '../planner/herd-needs';
 
 /**

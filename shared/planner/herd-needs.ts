@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { FORAGE_FLOOR_PCT_BW } from '../nutrition/forage-floor';
 import { HorseClassSchema } from '../nutrition/horse-class';
 import { type HorseRequirements, horseRequirements, RequirementsRequestSchema } from '../nutrition/horse-requirements';
 import { LB_PER_KG, lbToKg } from '../units/mass';
@@ -37,6 +38,8 @@ export const HayLotSchema = z
  * - `hayShareOfDiet`: share of the herd's dry matter, and so of its energy and protein, that
  *   should come from this hay (1 = hay only; pasture or feed supply the rest).
  * - `lot`: optional; with it the plan converts dry matter to as-fed tons and bales and checks coverage.
+ * - `forageFloorPctBw`: least forage DM a day, % of body weight (default 1.5, NRC 2007; 1.0–2.0 accepted,
+ *   see FORAGE_FLOOR_PCT_BW). The hay's share of it is the least hay DM any purchase plan may buy.
  */
 export const HerdNeedsRequestSchema = z
   .object({
@@ -45,6 +48,11 @@ export const HerdNeedsRequestSchema = z
     feedingMethod: FeedingMethodSchema,
     hayShareOfDiet: z.number().min(0, 'hayShareOfDiet must be between 0 and 1').max(1, 'hayShareOfDiet must be between 0 and 1'),
     lot: HayLotSchema.optional(),
+    forageFloorPctBw: z
+      .number({ error: 'forageFloorPctBw must be a number, % of body weight' })
+      .min(FORAGE_FLOOR_PCT_BW.min, `forageFloorPctBw must be at least ${FORAGE_FLOOR_PCT_BW.min} % of body weight (below that only under veterinary supervision)`)
+      .max(FORAGE_FLOOR_PCT_BW.max, `forageFloorPctBw must be at most ${FORAGE_FLOOR_PCT_BW.max} % of body weight (the typical intake)`)
+      .default(FORAGE_FLOOR_PCT_BW.default),
   })
   .strict()
   .superRefine((request, ctx) => {
@@ -65,7 +73,7 @@ export const HerdNeedsRequestSchema = z
 
 export type HorseGroup = z.infer<typeof HorseGroupSchema>;
 export type HayLot = z.infer<typeof HayLotSchema>;
-export type HerdNeedsRequest = z.infer<typeof HerdNeedsRequestSchema>;
+export type HerdNeedsRequest = z.input<typeof HerdNeedsRequestSchema>;
 
 /** Needs of one group, per day, for all its horses together. Dry matter (DM) in kg DM. */
 export interface GroupNeeds {
@@ -94,6 +102,10 @@ export interface HerdTotals {
   readonly dmiMinKgPerDay: number;
   readonly dmiMaxKgPerDay: number;
   readonly hayDmKgPerDay: number;
+  /** Forage floor, % of body weight as DM a day (as requested, default 1.5). */
+  readonly forageFloorPctBw: number;
+  /** Least hay DM a day: forage floor × body weight × hay share, kg DM/day, whole herd. */
+  readonly hayDmFloorKgPerDay: number;
   readonly period: {
     readonly days: number;
     /** DE the whole diet must supply, Mcal. */
@@ -108,6 +120,8 @@ export interface HerdTotals {
     readonly hayDmKg: number;
     /** Most hay DM the horses can eat (maximum intake × hay share), kg DM. */
     readonly hayDmMaxKg: number;
+    /** Least hay DM the horses should eat (forage floor × hay share), kg DM. */
+    readonly hayDmFloorKg: number;
   };
 }
 
@@ -192,6 +206,7 @@ export function planHerdNeeds(input: HerdNeedsRequest): HerdNeedsPlan {
   const crudeProteinGPerDay = sum((g) => g.crudeProteinGPerDay);
   const dmiMaxKgPerDay = sum((g) => g.dmiMaxKgPerDay);
   const hayDmKgPerDay = sum((g) => g.hayDmKgPerDay);
+  const hayDmFloorKgPerDay = sum((g) => g.bodyWeightKg * g.count) * (request.forageFloorPctBw / 100) * share;
   const days = request.days;
 
   const totals: HerdTotals = {
@@ -201,6 +216,8 @@ export function planHerdNeeds(input: HerdNeedsRequest): HerdNeedsPlan {
     dmiMinKgPerDay: sum((g) => g.perHorse.dmiMinKgPerDay * g.count),
     dmiMaxKgPerDay,
     hayDmKgPerDay,
+    forageFloorPctBw: request.forageFloorPctBw,
+    hayDmFloorKgPerDay,
     period: {
       days,
       deMcal: deMcalPerDay * days,
@@ -209,6 +226,7 @@ export function planHerdNeeds(input: HerdNeedsRequest): HerdNeedsPlan {
       crudeProteinFromHayKg: (crudeProteinGPerDay * share * days) / 1000,
       hayDmKg: hayDmKgPerDay * days,
       hayDmMaxKg: dmiMaxKgPerDay * share * days,
+      hayDmFloorKg: hayDmFloorKgPerDay * days,
     },
   };
 

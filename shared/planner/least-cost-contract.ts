@@ -18,6 +18,26 @@ export const PlanNeedsSchema = z
     crudeProteinKg: z.number().min(0, 'needs.crudeProteinKg cannot be negative'),
     /** Most dry matter the horses can eat, kg DM. */
     maxDryMatterKg: z.number().min(0, 'needs.maxDryMatterKg cannot be negative'),
+    /** Least hay dry matter the horses must eat (the forage floor), kg DM; 0 = no floor. */
+    minDryMatterKg: z.number().min(0, 'needs.minDryMatterKg cannot be negative').default(0),
+  })
+  .strict()
+  .refine((needs) => needs.minDryMatterKg <= needs.maxDryMatterKg, {
+    path: ['minDryMatterKg'],
+    message: 'needs.minDryMatterKg (forage floor) cannot exceed needs.maxDryMatterKg',
+  });
+
+/** How the needs were set from a herd, so the plan can say how it compares with the herd planner. */
+export const ForageBasisSchema = z
+  .object({
+    /** Forage floor used, % of body weight as DM a day. */
+    floorPctBw: z.number().positive(),
+    /** Hay DM the herd planner feeds over the period at typical intake (2 % BW for mature horses), kg DM. */
+    typicalDryMatterKg: z.number().min(0),
+    /** Days in the period. */
+    days: z.number().int().positive(),
+    /** Body weight of the whole herd, kg. */
+    herdBodyWeightKg: z.number().positive(),
   })
   .strict();
 
@@ -25,6 +45,8 @@ export const PlanNeedsSchema = z
 export const CandidateLotSchema = z
   .object({
     lotId: z.string().min(1, 'lotId is required'),
+    /** The lot's title, used to name it in the explanation (else it is named by `lotId`). */
+    title: z.string().trim().min(1).max(200).optional(),
     /** Hay price at the farm, whole cents per short ton as-fed. */
     pricePerTonCents: z.number().int('pricePerTonCents must be whole cents').min(0, 'pricePerTonCents cannot be negative'),
     /** Trucking rate, cents per loaded mile. */
@@ -60,6 +82,8 @@ export const LeastCostPlanRequestSchema = z
     wasteFraction: z.number().min(0, 'wasteFraction must be at least 0').lt(1, 'wasteFraction must be below 1').default(0),
     /** 'per-load' (default): whole truck loads. 'per-ton': freight spread per ton, a linear approximation. */
     freightModel: z.enum(FREIGHT_MODELS).default('per-load'),
+    /** Optional: the herd figures behind the forage floor, for the explanation. */
+    forage: ForageBasisSchema.optional(),
   })
   .strict()
   .superRefine((request, ctx) => {
@@ -70,7 +94,8 @@ export const LeastCostPlanRequestSchema = z
     });
   });
 
-export type PlanNeeds = z.infer<typeof PlanNeedsSchema>;
+export type PlanNeeds = z.input<typeof PlanNeedsSchema>;
+export type ForageBasis = z.infer<typeof ForageBasisSchema>;
 export type CandidateLot = z.input<typeof CandidateLotSchema>;
 export type LeastCostPlanRequest = z.input<typeof LeastCostPlanRequestSchema>;
 export type FreightModel = (typeof FREIGHT_MODELS)[number];

@@ -14,7 +14,8 @@ type ParsedRequest = ParsedLeastCostRequest;
 export const CONSULT = 'consult your veterinarian or an equine nutritionist';
 
 const tonsText = (tons: number): string => `${formatNumber(tons, 2)} t`;
-const lotText = (lotId: string): string => `lot ${lotId}`;
+/** A lot by its title when the caller gave one ("Second-cut alfalfa"), else by id ("lot A"). */
+const lotText = (lot: { lotId: string; title?: string | undefined }): string => (lot.title ? `“${lot.title}”` : `lot ${lot.lotId}`);
 
 export function summarySentences(
   lines: readonly PlanLine[],
@@ -45,7 +46,7 @@ export function lineSentence(y: LotYield, line: PlanLine, freightModel: FreightM
   if (Math.abs(line.tons - lot.tonsAvailable) < 1e-9) limits.push('all of its stock');
   else if (lot.minOrderTons > 0 && Math.abs(line.tons - lot.minOrderTons) < 0.0015) limits.push('its minimum order');
   const limitText = limits.length > 0 ? ` That is ${limits.join(' and ')}.` : '';
-  return `From ${lotText(lot.lotId)}, buy ${tonsText(line.tons)} at ${formatCents(lot.pricePerTonCents)}/t (${formatCents(line.hayCents)}) ${freight}: ${formatCents(line.costCents)} in all, ${formatCents(line.costCents / line.tons)}/t delivered.${limitText}`;
+  return `From ${lotText(lot)}, buy ${tonsText(line.tons)} at ${formatCents(lot.pricePerTonCents)}/t (${formatCents(line.hayCents)}) ${freight}: ${formatCents(line.costCents)} in all, ${formatCents(line.costCents / line.tons)}/t delivered.${limitText}`;
 }
 
 export function bindingSentences(supplied: LeastCostPlan['supplied'], request: ParsedRequest): string[] {
@@ -57,8 +58,41 @@ export function bindingSentences(supplied: LeastCostPlan['supplied'], request: P
   if (energy && protein) sentences.push('Energy and protein are both met exactly, so the plan buys no more than it must.');
   else if (energy) sentences.push('Energy is the limiting need: the plan buys just enough hay for it, and protein comes out above the need.');
   else if (protein) sentences.push('Protein is the limiting need: the plan buys just enough protein, and energy comes out above the need.');
+  if (tight(supplied.dryMatterKg, needs.minDryMatterKg)) {
+    sentences.push('The forage floor binds: the plan buys more hay than energy and protein alone would need, so the horses get enough forage.');
+  }
   if (tight(supplied.dryMatterKg, needs.maxDryMatterKg)) {
     sentences.push('The horses would be eating as much as they can, so the plan leans on the most nutrient-dense hay.');
+  }
+  return sentences;
+}
+
+/**
+ * The forage the mix feeds against the floor and the herd planner's usual amount, per day and as % of
+ * body weight, with the supervision caution below 1.5 % BW (domain brief S14).
+ */
+export function forageSentences(supplied: LeastCostPlan['supplied'], request: ParsedRequest): string[] {
+  const { forage, needs } = request;
+  if (forage === undefined) {
+    return needs.minDryMatterKg > 0
+      ? [`It includes at least the forage floor of ${formatNumber(needs.minDryMatterKg, 0)} kg of hay dry matter over the period.`]
+      : [];
+  }
+  const perDay = (kg: number) => kg / forage.days;
+  const pctBw = (kg: number) => (perDay(kg) / forage.herdBodyWeightKg) * 100;
+  const floorPct = pctBw(needs.minDryMatterKg);
+  const floorText =
+    Math.abs(floorPct - forage.floorPctBw) < 0.005
+      ? `${formatNumber(forage.floorPctBw, 1)} % of body weight; NRC 2007 advises at least 1.5 %`
+      : `${formatNumber(floorPct, 2)} % of body weight, the hay's share of a ${formatNumber(forage.floorPctBw, 1)} % floor`;
+  const sentences = [
+    `Forage: the mix feeds ${formatNumber(perDay(supplied.dryMatterKg), 1)} kg of hay dry matter a day (${formatNumber(pctBw(supplied.dryMatterKg), 2)} % of body weight), ` +
+      `at least the forage floor of ${formatNumber(perDay(needs.minDryMatterKg), 1)} kg a day (${floorText}) ` +
+      `and no more than the ${formatNumber(perDay(needs.maxDryMatterKg), 1)} kg the horses can eat. ` +
+      `The single-lot planner feeds the same herd ${formatNumber(perDay(forage.typicalDryMatterKg), 1)} kg a day (${formatNumber(pctBw(forage.typicalDryMatterKg), 2)} % of body weight); both use the same herd figures.`,
+  ];
+  if (forage.floorPctBw < 1.5) {
+    sentences.push(`A forage floor below 1.5 % of body weight should be fed only under veterinary supervision; ${CONSULT}.`);
   }
   return sentences;
 }
@@ -68,13 +102,13 @@ export function mixSentences(chosen: readonly { y: LotYield; line: PlanLine }[],
   if (chosen.length < 2) return [];
   const costPerMcal = (y: LotYield): number => (y.deMcalPerTon > 0 ? y.fullLoadDeliveredPerTonCents / y.deMcalPerTon : Number.POSITIVE_INFINITY);
   const cheapest = [...chosen].sort((a, b) => costPerMcal(a.y) - costPerMcal(b.y))[0]!;
-  const others = chosen.filter((c) => c !== cheapest).map((c) => lotText(c.y.lot.lotId));
+  const others = chosen.filter((c) => c !== cheapest).map((c) => lotText(c.y.lot));
   const othersText = others.join(' and ');
   const { lot } = cheapest.y;
   const { needs } = request;
   const proteinPerMcal = (cheapest.y.cpKgPerTon * 1000) / Math.max(cheapest.y.deMcalPerTon, 1e-12);
   const neededProteinPerMcal = needs.deMcal > 0 ? (needs.crudeProteinKg * 1000) / needs.deMcal : 0;
-  const lead = `${capitalise(lotText(lot.lotId))} is the cheapest energy in the plan (${formatCents(costPerMcal(cheapest.y))} per Mcal delivered)`;
+  const lead = `${capitalise(lotText(lot))} is the cheapest energy in the plan (${formatCents(costPerMcal(cheapest.y))} per Mcal delivered)`;
   if (proteinPerMcal < neededProteinPerMcal) {
     return [
       `${lead}, but its hay carries only ${formatNumber(proteinPerMcal, 0)} g of crude protein per Mcal against the ${formatNumber(neededProteinPerMcal, 0)} g per Mcal the horses need, so ${othersText} ${others.length === 1 ? 'is' : 'are'} mixed in for protein.`,
@@ -87,7 +121,7 @@ export function mixSentences(chosen: readonly { y: LotYield; line: PlanLine }[],
   if (lot.deMcalPerKgDm * (1 - request.wasteFraction) < densityNeeded) {
     return [`${lead}, but it is too low in energy for the horses to eat enough of it, so denser hay from ${othersText} is added.`];
   }
-  return [`Splitting the order between ${lotText(lot.lotId)} and ${othersText} costs less than filling it from one lot, mainly because freight is charged by the whole load.`];
+  return [`Splitting the order between ${lotText(lot)} and ${othersText} costs less than filling it from one lot, mainly because freight is charged by the whole load.`];
 }
 
 export function unusedSentences(yields: readonly LotYield[], chosen: readonly { y: LotYield }[], request: ParsedRequest): string[] {
@@ -101,7 +135,7 @@ export function unusedSentences(yields: readonly LotYield[], chosen: readonly { 
         y.lot.minOrderTons > 0 && y.lot.minOrderTons * y.dmKgPerTon > request.needs.maxDryMatterKg
           ? ` Its minimum order of ${tonsText(y.lot.minOrderTons)} is more than the horses can eat.`
           : '';
-      return `${capitalise(lotText(y.lot.lotId))} is not bought: delivered in full loads it costs ${perMcal} and ${perKgCp}; the chosen lots meet the needs for less.${minOrder}`;
+      return `${capitalise(lotText(y.lot))} is not bought: delivered in full loads it costs ${perMcal} and ${perKgCp}; the chosen lots meet the needs for less.${minOrder}`;
     });
 }
 
@@ -139,6 +173,12 @@ export function explainInfeasible(
   if (allCp < needs.crudeProteinKg) {
     reasons.push(
       `Even buying every listed ton, the lots supply only ${formatNumber(allCp, 0)} kg of the ${formatNumber(needs.crudeProteinKg, 0)} kg of crude protein needed.`,
+    );
+  }
+  const allDm = yields.reduce((sum, y) => sum + y.lot.tonsAvailable * y.dmKgPerTon, 0);
+  if (allDm < needs.minDryMatterKg) {
+    reasons.push(
+      `Even buying every listed ton, the lots supply only ${formatNumber(allDm, 0)} kg of the ${formatNumber(needs.minDryMatterKg, 0)} kg of hay dry matter the forage floor needs.`,
     );
   }
   if (reasons.length === 0) {

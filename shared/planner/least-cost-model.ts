@@ -63,7 +63,7 @@ export function buildModel(yields: readonly LotYield[], request: ParsedRequest, 
   const constraints = new Map<string, { min?: number; max?: number }>([
     ['de', { min: request.needs.deMcal }],
     ['cp', { min: request.needs.crudeProteinKg }],
-    ['dm', { max: request.needs.maxDryMatterKg }],
+    ['dm', { min: request.needs.minDryMatterKg, max: request.needs.maxDryMatterKg }],
   ]);
   const variables = new Map<string, Map<string, number>>();
   const integers = new Set<string>();

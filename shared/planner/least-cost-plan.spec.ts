@@ -272,3 +272,73 @@ describe('LeastCostPlanRequestSchema', () => {
     expect(() => leastCostPlan({ ...base, wasteFraction: 1 })).toThrow(ZodError);
   });
 });
+
+describe('leastCostPlan forage floor', () => {
+  // The reported case: 4 horses of 500 kg at maintenance for 100 days. DE need 4 × 16.65 × 100 = 6,660 Mcal
+  // (NRC 2007: 0.0333 Mcal/kg BW); a cheap dense hay (2.5 Mcal/kg DM) meets it with 2,664 kg DM = 1.33 % BW a day.
+  // NRC 2007: at least about 1.5 % BW a day as forage DM → 4 × 500 × 0.015 × 100 = 3,000 kg DM over the period.
+  const herd = planHerdNeeds({
+    groups: [{ count: 4, bodyWeight: 500, weightUnit: 'kg', class: 'maintenance' }],
+    days: 100,
+    feedingMethod: 'stall-feeder',
+    hayShareOfDiet: 1,
+  });
+  const { needs, wasteFraction, forage } = needsFromHerdPlan(herd);
+  const lots = [
+    lot({ lotId: 'dense', title: 'Second-cut alfalfa', pricePerTonCents: 15000, crudeProteinPctDm: 18, deMcalPerKgDm: 2.5 }),
+    lot({ lotId: 'grass', title: 'Late-cut grass', pricePerTonCents: 24000, crudeProteinPctDm: 8, deMcalPerKgDm: 1.8 }),
+  ];
+
+  it('reproduces the underfeeding without a floor: energy alone buys 1.33 % of body weight a day', () => {
+    const noFloor = leastCostPlan({ needs: { ...needs, minDryMatterKg: 0 }, wasteFraction, lots, freightModel: 'per-ton' });
+    // 6,660 Mcal / 2.5 Mcal/kg = 2,664 kg DM = 2,664 / (2,000 kg × 100 d) = 1.332 % BW a day (hand arithmetic).
+    expect(noFloor.supplied.dryMatterKg / (2000 * 100)).toBeCloseTo(0.01332, 4);
+  });
+
+  it('feeds at least 1.5 % of body weight a day as hay dry matter with the default floor (NRC 2007)', () => {
+    expect(needs.minDryMatterKg).toBeCloseTo(3000, 6); // 2,000 kg herd × 1.5 % × 100 days, by hand
+    const plan = leastCostPlan({ needs, wasteFraction, lots, forage, freightModel: 'per-ton' });
+    expect(plan.feasible).toBe(true);
+    expect(plan.supplied.dryMatterKg / (2000 * 100)).toBeGreaterThanOrEqual(0.015);
+    expect(plan.explanation).toContain(
+      'The forage floor binds: the plan buys more hay than energy and protein alone would need, so the horses get enough forage.',
+    );
+    expect(plan.explanation.join(' ')).toMatch(/at least the forage floor of 30\.0 kg a day/);
+    // The single-lot planner feeds the typical 2 % BW: 2,000 kg × 2 % = 40 kg DM a day (NRC 2007 typical intake, from memory).
+    expect(plan.explanation.join(' ')).toMatch(/The single-lot planner feeds the same herd 40\.0 kg a day \(2\.00 % of body weight\)/);
+  });
+
+  it('keeps the hay between the floor and the most the horses can eat, as the single-lot planner does', () => {
+    const plan = leastCostPlan({ needs, wasteFraction, lots, forage });
+    // 2.5 % BW maximum intake (NRC 2007, from memory): 2,000 kg × 2.5 % × 100 d = 5,000 kg.
+    expect(plan.supplied.dryMatterKg).toBeLessThanOrEqual(5000 + 1);
+    expect(plan.supplied.dryMatterKg).toBeGreaterThanOrEqual(3000);
+    expect(herd.totals.period.hayDmKg).toBeCloseTo(4000, 6); // the single-lot planner's 2 % BW
+  });
+
+  it('accepts a floor from 1 % to 2 % of body weight and cautions below 1.5 % (Vet Times 2018: not below 1 %, only supervised)', () => {
+    const low = planHerdNeeds({ ...herdRequest(), forageFloorPctBw: 1.2 });
+    expect(low.totals.period.hayDmFloorKg).toBeCloseTo(2400, 6); // 2,000 kg × 1.2 % × 100 d
+    const lowNeeds = needsFromHerdPlan(low);
+    const plan = leastCostPlan({ needs: lowNeeds.needs, forage: lowNeeds.forage, lots, freightModel: 'per-ton' });
+    expect(plan.explanation.join(' ')).toMatch(/below 1\.5 % of body weight should be fed only under veterinary supervision/);
+    expect(() => planHerdNeeds({ ...herdRequest(), forageFloorPctBw: 0.9 })).toThrow(/at least 1 %/);
+    expect(() => planHerdNeeds({ ...herdRequest(), forageFloorPctBw: 2.1 })).toThrow(/at most 2 %/);
+  });
+
+  it('says when stock cannot reach the floor', () => {
+    const plan = leastCostPlan({ needs, lots: [lot({ lotId: 'small', tonsAvailable: 3, deMcalPerKgDm: 3 })] });
+    expect(plan.feasible).toBe(false);
+    // 3 t × 907.18 kg × 90 % DM = 2,449 kg DM (hand arithmetic) against the 3,000 kg floor.
+    expect(plan.explanation).toContain('Even buying every listed ton, the lots supply only 2,449 kg of the 3,000 kg of hay dry matter the forage floor needs.');
+  });
+});
+
+function herdRequest() {
+  return {
+    groups: [{ count: 4, bodyWeight: 500, weightUnit: 'kg' as const, class: 'maintenance' as const }],
+    days: 100,
+    feedingMethod: 'stall-feeder' as const,
+    hayShareOfDiet: 1,
+  };
+}

@@ -12,6 +12,7 @@
 
 import { solve } from 'yalps';
 import {
+  type ForageBasis,
   type FreightModel,
   type LeastCostPlan,
   type LeastCostPlanRequest,
@@ -22,6 +23,7 @@ import {
 import {
   bindingSentences,
   CONSULT,
+  forageSentences,
   explainInfeasible,
   lineSentence,
   mixSentences,
@@ -40,14 +42,26 @@ const SOLVER_TIMEOUT_MS = 1500;
 type ParsedRequest = ParsedLeastCostRequest;
 
 /**
- * Herd-plan totals as least-cost needs: the hay share of energy and protein over the period and
- * the hay share of maximum intake, with the plan's feeding waste.
+ * Herd-plan totals as least-cost needs: the hay share of energy and protein over the period, the
+ * hay share of maximum intake and of the forage floor, with the plan's feeding waste — the same
+ * herd figures the single-lot planner uses, so both plans feed the same herd the same way.
  */
-export function needsFromHerdPlan(plan: HerdNeedsPlan): { needs: PlanNeeds; wasteFraction: number } {
+export function needsFromHerdPlan(plan: HerdNeedsPlan): { needs: PlanNeeds; wasteFraction: number; forage: ForageBasis } {
   const period = plan.totals.period;
   return {
-    needs: { deMcal: period.deFromHayMcal, crudeProteinKg: period.crudeProteinFromHayKg, maxDryMatterKg: period.hayDmMaxKg },
+    needs: {
+      deMcal: period.deFromHayMcal,
+      crudeProteinKg: period.crudeProteinFromHayKg,
+      maxDryMatterKg: period.hayDmMaxKg,
+      minDryMatterKg: period.hayDmFloorKg,
+    },
     wasteFraction: plan.waste.wasteFraction,
+    forage: {
+      floorPctBw: plan.totals.forageFloorPctBw,
+      typicalDryMatterKg: period.hayDmKg,
+      days: period.days,
+      herdBodyWeightKg: plan.groups.reduce((sum, g) => sum + g.bodyWeightKg * g.count, 0),
+    },
   };
 }
 
@@ -70,7 +84,7 @@ export function leastCostPlan(input: LeastCostPlanRequest, options: LeastCostPla
   const { needs } = request;
   const timeout = options.timeoutMs ?? SOLVER_TIMEOUT_MS;
 
-  if (needs.deMcal === 0 && needs.crudeProteinKg === 0) {
+  if (needs.deMcal === 0 && needs.crudeProteinKg === 0 && needs.minDryMatterKg === 0) {
     return emptyPlan(true, request.freightModel, ['Nothing needs to be bought: the energy and protein needs are zero.']);
   }
 
@@ -116,6 +130,7 @@ function describePlan(
     ...summarySentences(lines, totalCostCents, supplied, request),
     ...chosen.map(({ y, line }) => lineSentence(y, line, freightModel)),
     ...bindingSentences(supplied, request),
+    ...forageSentences(supplied, request),
     ...mixSentences(chosen, request),
     ...unusedSentences(yields, chosen, request),
     ...(freightModel === 'per-ton' ? perTonSentences(chosen) : []),

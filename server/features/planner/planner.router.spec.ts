@@ -148,7 +148,12 @@ describe('planner API', () => {
       expect(line.bales).toBe(Math.ceil((line.tons * 2000) / 60));
       expect(body.plan.totalCostCents).toBe(body.lines.reduce((s: number, l: { costCents: number }) => s + l.costCents, 0));
       expect(body.plan.explanation.join(' ')).toMatch(/mixed in for protein/);
-      expect(body.plan.explanation.join(' ')).toContain(`lot #${grass}`);
+      // Lots are named by their titles, not by number.
+      expect(body.plan.explanation.join(' ')).toContain(`“${tag} grass”`);
+      expect(body.plan.explanation.join(' ')).not.toContain(`lot #${grass}`);
+      // The forage floor: 500 kg × 1.5 % × 100 d = 750 kg DM (NRC 2007); the hand-solved mix eats 812 kg DM, above it.
+      expect(body.plan.supplied.dryMatterKg).toBeGreaterThanOrEqual(750);
+      expect(body.plan.explanation.join(' ')).toMatch(/The single-lot planner feeds the same herd 10\.0 kg a day/);
       expect(body.herd.totals.period.deMcal).toBeCloseTo(1665, 6);
     });
 

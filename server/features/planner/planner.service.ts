@@ -59,14 +59,16 @@ export async function planPurchase(db: Db, request: PurchasePlanRequest): Promis
   const { lot: _ignored, ...herdRequest } = request.herd;
   const herd = planHerdNeeds(herdRequest);
   const { origin, candidates } = await loadPlanCandidates(db, request.zip, request.maxDistanceMi);
-  const { needs, wasteFraction } = needsFromHerdPlan(herd);
+  const { needs, wasteFraction, forage } = needsFromHerdPlan(herd);
   const key = (id: number) => `#${id}`; // reads as "lot #12" in the plan's sentences
   const plan = leastCostPlan({
     needs,
     wasteFraction,
+    forage,
     freightModel: request.freightModel,
     lots: candidates.map((c) => ({
       lotId: key(c.lotId),
+      title: c.title,
       pricePerTonCents: c.priceCentsPerTon,
       freightCentsPerLoadedMile: c.freightCentsPerLoadedMile,
       distanceMi: c.distanceMi,
