@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { Finding, ForageEvaluation, SamplingEvaluation } from '../forage';
 import { ForageEvaluationRequestSchema } from '../forage';
+import type { ReadingComparison, ReportReading } from './report-reading';
 import { FORAGE_TYPE_LABELS } from './labels';
 import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetail, type PhotoView } from './lots';
 
@@ -246,6 +247,17 @@ export interface ReportFileView {
   originalName: string;
   sizeBytes: number;
   url: string;
+  /** The values read from the PDF's text when it was uploaded (null for files stored before reading existed). */
+  reading: ReportReading | null;
+}
+
+/** `POST /api/uploads/report-reading`: a report read without being kept, to fill in the lot form. */
+export interface ReportReadingResponse {
+  reading: ReportReading;
+  /** Form values (with `basis`) to confirm; null when nothing was read. */
+  values: Record<string, number | string> | null;
+  /** The outcome in plain words. */
+  summary: string;
 }
 
 /** One row of the grower's dashboard. */
@@ -282,7 +294,12 @@ export interface ReviewQueueRow {
 export interface ReviewLotView {
   lot: EditableLot;
   farm: { name: string; city: string; state: string; growerEmail: string; payoutsReady: boolean };
-  history: { action: string; at: string; note: string | null }[];
+  /** Each entered value beside the value read from the PDF, mismatches flagged. */
+  comparison: ReadingComparison[];
+  /** What reading the PDF gave, in plain words (e.g. that a scan has no text). */
+  readingSummary: string;
+  /** What happened to the lot, newest first, in words, with who acted. */
+  history: { action: string; label: string; at: string; by: string | null; note: string | null }[];
 }
 
 export type { Finding };

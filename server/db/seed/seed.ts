@@ -6,6 +6,7 @@ import { hashPassword } from '../../features/auth/password';
 import { analysisColumns } from '../../features/lots/analysis-record';
 import { locateZip } from '../../features/geo/geo';
 import { renderPhotoVariants } from '../../features/photos/photo-variants';
+import { readLabReportPdf } from '../../features/uploads/report-reading';
 import type { Db } from '../client';
 import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../schema';
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
@@ -199,7 +200,7 @@ async function insertDemoLot(db: Db, storage: FileStorage, plan: DemoLotPlan, in
     await storage.put(reportKey, pdf);
     const [report] = await db
       .insert(storedFiles)
-      .values({ storageKey: reportKey, originalName: `${reportNumber}.pdf`, mimeType: 'application/pdf', sizeBytes: pdf.length, sha256: createHash('sha256').update(pdf).digest('hex') })
+      .values({ storageKey: reportKey, originalName: `${reportNumber}.pdf`, mimeType: 'application/pdf', sizeBytes: pdf.length, sha256: createHash('sha256').update(pdf).digest('hex'), reading: await readLabReportPdf(pdf) })
       .returning({ id: storedFiles.id });
     await db.insert(labAnalyses).values({
       lotId,
@@ -251,7 +252,7 @@ async function addDemoPhotos(db: Db, storage: FileStorage, lotId: number, plan: 
 }
 
 /** An invented lab report in the layout a forage lab might print: clearly marked as demo data. */
-function demoReportPdf(r: { labName: string; reportNumber: string; reportDate: string; sampledOn: string; field: string; columns: ReturnType<typeof analysisColumns>['columns'] }): Buffer {
+export function demoReportPdf(r: { labName: string; reportNumber: string; reportDate: string; sampledOn: string; field: string; columns: ReturnType<typeof analysisColumns>['columns'] }): Buffer {
   const c = r.columns;
   const v = (x: number | null) => (x === null ? 'n/a' : x.toFixed(1));
   return simplePdf([

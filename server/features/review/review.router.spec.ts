@@ -3,6 +3,7 @@ import { auditEvents } from '../../db/schema';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { addLotApprovedListener } from './lot-approved';
+import { simplePdf } from '../../db/seed/simple-pdf';
 
 describe('review API', () => {
   let t: TestApi;
@@ -73,6 +74,23 @@ describe('review API', () => {
     const again = await grower.agent.post(`/selling/lots/${id}/submit`);
     expect(again.body).toMatchObject({ status: 'in_review', reviewNote: null, analysis: { verification: 'pending' } });
   }, 20_000);
+
+  it('shows each entered value beside the value read from the PDF and flags the mismatch', async () => {
+    const id = await completeLot(grower.agent);
+    // The grower typed ADF 29 (ANALYSIS_STEP); this report prints 31.0. Everything else agrees.
+    const report = simplePdf(['Invented Prairie Lab - results on a dry matter basis', 'Dry matter  89.0 %', 'Crude protein (CP)  21.0 %', 'ADF  31.0 %', 'NDF  38.0 %', 'Starch  2.0 %']);
+    const token = await grower.agent.token();
+    const up = await grower.agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', report, 'report.pdf');
+    expect(up.status).toBe(201);
+    expect(up.body.reportFile.reading).toMatchObject({ status: 'read', values: { adfPct: { dm: 31 } } });
+    await grower.agent.post(`/selling/lots/${id}/submit`);
+    const view = await admin.agent.get(`/review/lots/${id}`);
+    const by = Object.fromEntries((view.body.comparison as { field: string }[]).map((r) => [r.field, r]));
+    expect(by['adfPct']).toMatchObject({ status: 'mismatch', entered: 29, read: 31, unit: '% of DM' });
+    expect(by['crudeProteinPct']).toMatchObject({ status: 'match' });
+    expect(by['ndfd48Pct']).toMatchObject({ status: 'not_on_report' });
+    expect(view.body.history[0]).toMatchObject({ action: 'lot.submitted', label: 'Submitted for review', by: expect.stringContaining('grower') });
+  }, 30_000);
 
   it('is for admins only', async () => {
     const buyer = await signedInUser(t, 'buyer');

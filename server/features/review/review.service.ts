@@ -7,6 +7,9 @@ import { findLotWithFarm } from '../selling/lot-access';
 import { editableLot } from '../selling/lot-view';
 import { onLotApproved } from './lot-approved';
 import { approvedMail, returnedMail } from './review-mail';
+import { auditActionLabel } from '@shared/contracts/audit-labels';
+import { compareWithReading } from '@shared/lab-report/compare-reading';
+import { readingSummary } from '../uploads/report-reading';
 
 /** The admin's verification desk: the queue, one lot with its report, approve or return. */
 export class ReviewService {
@@ -40,15 +43,27 @@ export class ReviewService {
     const { farm } = await findLotWithFarm(db, lotId);
     const [owner] = await db.select({ email: users.email }).from(users).where(eq(users.id, farm.ownerId));
     const history = await db
-      .select({ action: auditEvents.action, at: auditEvents.createdAt, data: auditEvents.data })
+      .select({ action: auditEvents.action, at: auditEvents.createdAt, data: auditEvents.data, actorName: users.displayName, actorRole: users.role })
       .from(auditEvents)
+      .leftJoin(users, eq(users.id, auditEvents.actorId))
       .where(and(eq(auditEvents.entityType, 'lot'), eq(auditEvents.entityId, String(lotId))))
-      .orderBy(desc(auditEvents.createdAt))
+      .orderBy(desc(auditEvents.createdAt), desc(auditEvents.id))
       .limit(50);
+    const lot = await editableLot(db, lotId, this.deps.clock);
+    const [analysis] = await db.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+    const reading = lot.analysis?.reportFile?.reading ?? null;
     return {
-      lot: await editableLot(db, lotId, this.deps.clock),
+      lot,
       farm: { name: farm.name, city: farm.city, state: farm.state, growerEmail: owner?.email ?? '', payoutsReady: farm.payoutsEnabled },
-      history: history.map((h) => ({ action: h.action, at: h.at.toISOString(), note: (h.data as { reason?: string }).reason ?? null })),
+      comparison: analysis ? compareWithReading(analysis, reading) : [],
+      readingSummary: !lot.analysis?.reportFile ? 'No report PDF is attached.' : reading ? readingSummary(reading) : 'This PDF was stored before reports were read; compare it by eye.',
+      history: history.map((h) => ({
+        action: h.action,
+        label: auditActionLabel(h.action),
+        at: h.at.toISOString(),
+        by: h.actorName ? `${h.actorName} (${h.actorRole})` : null,
+        note: (h.data as { reason?: string }).reason ?? null,
+      })),
     };
   }
 

@@ -53,7 +53,7 @@ export async function editableLot(db: Db, lotId: number, clock: Clock): Promise<
           method: analysis.method,
           values: enteredValuesOf(analysis),
           verification: analysis.verification,
-          reportFile: report ? { id: report.id, originalName: report.originalName, sizeBytes: report.sizeBytes, url: reportUrl(lot.id) } : null,
+          reportFile: report ? { id: report.id, originalName: report.originalName, sizeBytes: report.sizeBytes, url: reportUrl(lot.id), reading: report.reading ?? null } : null,
         }
       : null,
     price: saved('price')

@@ -6,6 +6,7 @@ import { photos, storedFiles } from '../../db/schema';
 import { csrfAgent, startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, makePdf, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { PDF_MAX_BYTES, PHOTO_MAX_BYTES } from './upload-limits';
+import { simplePdf } from '../../db/seed/simple-pdf';
 
 describe('uploads API', () => {
   let t: TestApi;
@@ -51,6 +52,20 @@ describe('uploads API', () => {
     const [original] = await t.deps.db.select().from(storedFiles).where(eq(storedFiles.id, row!.originalFileId!));
     expect(original).toMatchObject({ mimeType: 'image/jpeg', sizeBytes: jpeg.length, originalName: 'barn.jpg' });
   });
+
+  it('reads a report without keeping it and returns the values to confirm; a scan says it has no text', async () => {
+    const token = await grower.agent.token();
+    const report = simplePdf(['Results on a dry matter basis', 'Dry matter  88.5 %', 'Crude protein (CP)  19.4 %', 'ADF  30.2 %', 'NDF  39.9 %']);
+    const res = await grower.agent.raw.post('/uploads/report-reading').set('X-XSRF-TOKEN', token).attach('report', report, 'lab.pdf');
+    expect(res.status).toBe(200);
+    expect(res.body.values).toEqual({ basis: 'dm', dryMatterPct: 88.5, crudeProteinPct: 19.4, adfPct: 30.2, ndfPct: 39.9 });
+    expect(res.body.summary).toMatch(/Read 4 values/);
+    const blank = simplePdf([]);
+    const scan = await grower.agent.raw.post('/uploads/report-reading').set('X-XSRF-TOKEN', token).attach('report', blank, 'scan.pdf');
+    expect(scan.body).toMatchObject({ reading: { status: 'no_text' }, values: null, summary: expect.stringMatching(/no text layer/) });
+    const notPdf = await grower.agent.raw.post('/uploads/report-reading').set('X-XSRF-TOKEN', token).attach('report', Buffer.from('hello'), 'x.pdf');
+    expect(notPdf.status).toBe(400);
+  }, 30_000);
 
   it('rejects a photo over the size limit with 413 and a clear message', async () => {
     const big = Buffer.alloc(PHOTO_MAX_BYTES + 1024, 1);

@@ -8,6 +8,10 @@ import { requireRole } from '../../middleware/require-role';
 import { findLotWithFarm, ownedLot } from '../selling/lot-access';
 import { addLotPhotos } from './photo-upload';
 import { attachLabReport } from './report-upload';
+import { readingSummary, readLabReportPdf } from './report-reading';
+import { sniffPdf } from './file-sniff';
+import { displayName } from './photo-upload';
+import { prefillFromReading } from '@shared/lab-report/compare-reading';
 import { acceptPhotos, acceptReport, filesOf } from './upload-limits';
 
 const LotParams = z.object({ id: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
@@ -43,6 +47,14 @@ export function uploadsRouter(deps: ApiDeps): Router {
     const [file] = filesOf(req, 'lab report PDF');
     const stored = await attachLabReport(deps, lot, req.user!.id, file!);
     res.status(201).json({ reportFile: { ...stored, url: `/api/uploads/lots/${id}/report` } });
+  });
+
+  // Reads a report without keeping it, so the lot form can fill in the values for the grower to confirm.
+  router.post('/report-reading', requireRole('grower'), acceptReport, async (req, res) => {
+    const [file] = filesOf(req, 'lab report PDF');
+    sniffPdf(file!.buffer, displayName(file!));
+    const reading = await readLabReportPdf(file!.buffer);
+    res.json({ reading, values: prefillFromReading(reading), summary: readingSummary(reading) });
   });
 
   router.get('/lots/:id/report', async (req, res) => {

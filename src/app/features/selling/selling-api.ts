@@ -2,7 +2,7 @@ import { HttpClient, HttpEventType, HttpXhrBackend, HttpXsrfTokenExtractor } fro
 import { inject, Injectable } from '@angular/core';
 import { filter, map, Observable } from 'rxjs';
 import type { PhotoView } from '@shared/contracts/lots';
-import type { EditableLot, FarmProfile, FarmProfileInput, LotFormStep, PhotoOrder, SellerLotRow } from '@shared/contracts/selling';
+import type { EditableLot, FarmProfile, FarmProfileInput, LotFormStep, PhotoOrder, ReportReadingResponse, SellerLotRow } from '@shared/contracts/selling';
 import type { ForageEvaluation } from '@shared/forage';
 
 /** Upload progress: `progress` 0–1 while sending, then `done` with the server's answer. */
@@ -55,6 +55,13 @@ export class SellingApi {
   act(id: number, action: 'submit' | 'withdraw' | 'relist' | 'copy'): Observable<EditableLot> {
     return this.http.post<EditableLot>(`/api/selling/lots/${id}/${action}`, {});
   }
+  /** Reads a lab report PDF's values without keeping the file (the grower confirms them in the form). */
+  readReport(file: File): Observable<ReportReadingResponse> {
+    const body = new FormData();
+    body.append('report', file);
+    return this.http.post<ReportReadingResponse>('/api/uploads/report-reading', body);
+  }
+
   evaluate(request: object): Observable<ForageEvaluation> {
     return this.http.post<ForageEvaluation>('/api/forage/evaluate', request);
   }

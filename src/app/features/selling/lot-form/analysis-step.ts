@@ -58,6 +58,7 @@ export class AnalysisStep {
   protected readonly csvErrors = signal<string[]>([]);
   protected readonly pdf = signal<File | null>(null);
   protected readonly pdfProgress = signal<number | null>(null);
+  protected readonly pdfReading = signal<{ busy: boolean; summary: string; filled?: boolean } | null>(null);
 
   private readonly fb = inject(FormBuilder).nonNullable;
   protected readonly form = this.fb.group({
@@ -129,9 +130,25 @@ export class AnalysisStep {
     this.form.patchValue({ basis: basis as 'dm', values: { ...this.emptyValues(), ...values } });
   }
 
-  protected choosePdf(event: Event): void {
+  /** Keeps the PDF for upload on save, and fills in the values read from it for the grower to confirm. */
+  protected async choosePdf(event: Event): Promise<void> {
     const inputEl = event.target as HTMLInputElement;
-    this.pdf.set(inputEl.files?.[0] ?? null);
+    const file = inputEl.files?.[0] ?? null;
+    this.pdf.set(file);
+    this.pdfReading.set(null);
+    if (!file) return;
+    this.pdfReading.set({ busy: true, summary: 'Reading the values from the PDF…' });
+    try {
+      const result = await firstValueFrom(this.api.readReport(file));
+      if (result.values) {
+        const { basis, ...values } = result.values;
+        this.form.patchValue({ basis: basis as 'dm', values: { ...this.emptyValues(), ...values } });
+        this.form.markAsDirty();
+      }
+      this.pdfReading.set({ busy: false, summary: result.summary, filled: result.values !== null });
+    } catch (e) {
+      this.pdfReading.set({ busy: false, summary: `The PDF could not be read: ${apiErrorMessage(e)}` });
+    }
   }
 
   protected async save(): Promise<void> {
