@@ -11,6 +11,9 @@ const swc = ['@swc/jest', {
 const sharedAlias = { '^@shared/(.*)$': '<rootDir>/shared/$1' };
 
 module.exports = {
+  // Integration tests send real mail through SMTP into maildev and read it back (tests/mail-catcher-setup.cjs).
+  globalSetup: '<rootDir>/tests/mail-catcher-setup.cjs',
+  globalTeardown: '<rootDir>/tests/mail-catcher-teardown.cjs',
   projects: [
     {
       displayName: 'node',

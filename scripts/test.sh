@@ -34,6 +34,12 @@ log "type-checking"
 node_modules/.bin/tsc -p tsconfig.server.json
 
 DATABASE_URL="$TEST_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
+# The fakes start before Jest: integration tests send real mail through SMTP and read it back from the catcher.
+# A fresh mail folder per run, so no test can find a message an earlier run left.
+export MAIL_DIR="$ROOT/.data/test-mail"
+rm -rf "$MAIL_DIR"
+APP_PORT="$E2E_PORT" start_fakes
+
 log "unit and integration tests (Jest)"
 NODE_ENV=test node_modules/.bin/jest --ci
 
@@ -43,7 +49,6 @@ node_modules/.bin/ng build --configuration production
 log "preparing the end-to-end database"
 DATABASE_URL="${E2E_DATABASE_URL:?E2E_DATABASE_URL is required}" node --import tsx server/db/migrate-cli.ts
 DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node --import tsx server/db/seed/seed-cli.ts
-APP_PORT="$E2E_PORT" start_fakes
 
 log "end-to-end tests (Playwright, Chromium)"
 DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node_modules/.bin/playwright test

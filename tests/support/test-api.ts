@@ -5,7 +5,7 @@ import { join } from 'node:path';
 import Stripe from 'stripe';
 import request from 'supertest';
 import { createStripeFake } from '../../docker-local-fakes/stripe/stripe-fake';
-import type { OutgoingMail } from '../../server/adapters/mail/mailer';
+import { createSmtpMailer, type OutgoingMail } from '../../server/adapters/mail/mailer';
 import { createLocalStorage } from '../../server/adapters/storage/file-storage';
 import { createApi, type ApiDeps } from '../../server/api';
 import { createDb } from '../../server/db/client';
@@ -16,8 +16,10 @@ import { testClock } from './test-clock';
 /**
  * The real API against the migrated test database (TEST_DATABASE_URL, prepared by `npm test`),
  * with a capturing mailer, a temporary upload folder and the Stripe fake on a free port.
+ * With `smtp: true` mail goes out through SMTP to the mail catcher instead (SMTP_URL, set by `npm test`
+ * or the Jest global setup); read it back with e2e/support/mail-catcher.ts.
  */
-export async function startTestApi(overrides: Record<string, string> = {}) {
+export async function startTestApi(overrides: Record<string, string> = {}, options: { smtp?: boolean } = {}) {
   const url = process.env['TEST_DATABASE_URL'];
   if (!url) throw new Error('TEST_DATABASE_URL is not set: run the suite with `npm test`, which prepares the test database.');
   const stripeServer = await new Promise<import('node:http').Server>((resolve) => {
@@ -31,7 +33,7 @@ export async function startTestApi(overrides: Record<string, string> = {}) {
     env,
     db: createDb(url, 4),
     logger: createLogger('silent'),
-    mailer: { send: async (mail) => void mails.push(mail) },
+    mailer: options.smtp ? createSmtpMailer(smtpUrl(), env.MAIL_FROM) : { send: async (mail) => void mails.push(mail) },
     storage: createLocalStorage(mkdtempSync(join(tmpdir(), 'baleproof-test-'))),
     clock,
     stripe: new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: stripePort, protocol: 'http', maxNetworkRetries: 0, telemetry: false }),
@@ -50,6 +52,12 @@ export async function startTestApi(overrides: Record<string, string> = {}) {
       await new Promise((resolve) => stripeServer.close(resolve));
     },
   };
+}
+
+function smtpUrl(): string {
+  const url = process.env['SMTP_URL'];
+  if (!url) throw new Error('SMTP_URL is not set: the Jest global setup (tests/mail-catcher-setup.cjs) starts the mail catcher.');
+  return url;
 }
 
 export type TestApi = Awaited<ReturnType<typeof startTestApi>>;
