@@ -50,11 +50,11 @@ export const ANALYSIS_STEP = {
 export const PRICE_STEP = { pricingUnit: 'ton', priceCentsPerTon: 28500, minOrderTons: 2, deliveryTerms: 'Flatbed, within 150 miles.', freightCentsPerLoadedMile: 375, pickupAllowed: true };
 
 /** Walks a lot through every form step (with a report and one photo) and returns its id. */
-export async function completeLot(agent: Agent, overrides: { lot?: object } = {}): Promise<number> {
+export async function completeLot(agent: Agent, overrides: { lot?: object; sampling?: object } = {}): Promise<number> {
   const created = await agent.post('/selling/lots', { ...LOT_STEP, ...overrides.lot });
   if (created.status !== 201) throw new Error(`create failed: ${JSON.stringify(created.body)}`);
   const id = created.body.id as number;
-  for (const [step, body] of [['quantity', QUANTITY_STEP], ['sampling', SAMPLING_STEP], ['analysis', ANALYSIS_STEP]] as const) {
+  for (const [step, body] of [['quantity', QUANTITY_STEP], ['sampling', { ...SAMPLING_STEP, ...overrides.sampling }], ['analysis', ANALYSIS_STEP]] as const) {
     const res = await agent.put(`/selling/lots/${id}/${step}`, body);
     if (res.status !== 200) throw new Error(`${step} failed: ${JSON.stringify(res.body)}`);
   }

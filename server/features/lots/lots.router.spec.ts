@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
+import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 
 describe('lots API', () => {
@@ -76,11 +77,35 @@ describe('lots API', () => {
     expect((await t.agent().get('/lots?zip=00000')).body.error.code).toBe('unknown_zip');
   });
 
+  // Source: Teutsch, Univ. Kentucky 2020: at least 20 cores, one per bale. The verdict comes from the forage
+  // engine when the grower saves the sampling step, never from a flag the test sets.
+  it('shows the sampling verdict the protocol gives a listed lot: 20 cores compliant, 19 cores not', async () => {
+    const own = `S${randomUUID().slice(0, 8)}`; // apart from the lots the other tests count
+    const grower = await signedInGrower(t);
+    const admin = await signedInUser(t, 'admin');
+    const listed = async (cores: number) => {
+      const id = await completeLot(grower.agent, { lot: { title: `${own} cores ${cores}` }, sampling: { coresTaken: cores, balesSampled: cores } });
+      expect((await grower.agent.post(`/selling/lots/${id}/submit`)).status).toBe(200);
+      expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+      return (await t.agent().get(`/lots/${id}`)).body;
+    };
+    const twenty = await listed(20);
+    expect(twenty.sampling).toMatchObject({ coresTaken: 20, compliant: true });
+    expect(twenty.samplingReport).toMatchObject({ compliant: true });
+    const nineteen = await listed(19);
+    expect(nineteen.sampling).toMatchObject({ coresTaken: 19, compliant: false });
+    expect(nineteen.samplingReport.compliant).toBe(false);
+    expect(nineteen.samplingReport.findings.map((f: { code: string }) => f.code)).toContain('too-few-cores');
+    // The catalogue's "sampled to protocol" filter agrees.
+    const compliantOnly = await t.agent().get(`/lots?q=${own}&compliantOnly=true`);
+    expect(compliantOnly.body.items.map((i: { title: string }) => i.title)).toEqual([`${own} cores 20`]);
+  }, 60_000);
+
   it('shows a listed lot and hides one under review from the public', async () => {
     const shown = await t.agent().get(`/lots/${ids['rich']}`);
     expect(shown.status).toBe(200);
     expect(shown.body.analysis).toMatchObject({ crudeProteinPct: 22, adfPct: 28, ndfPct: 36, verification: 'verified' });
-    expect(shown.body.sampling).toMatchObject({ coresTaken: 20, compliant: true });
+    expect(shown.body.sampling).toMatchObject({ coresTaken: 20 });
     expect((await t.agent().get(`/lots/${ids['hidden']}`)).status).toBe(404);
     expect((await t.agent().get('/lots/not-a-number')).status).toBe(400);
   });
