@@ -29,12 +29,13 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
   const env = readEnv({ NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'silent', SIGN_IN_RATE_LIMIT: '1000', ...overrides });
   const mails: OutgoingMail[] = [];
   const clock = testClock();
+  const uploadDir = mkdtempSync(join(tmpdir(), 'baleproof-test-'));
   const deps: ApiDeps = {
     env,
     db: createDb(url, 4),
     logger: createLogger('silent'),
     mailer: options.smtp ? createSmtpMailer(smtpUrl(), env.MAIL_FROM) : { send: async (mail) => void mails.push(mail) },
-    storage: createLocalStorage(mkdtempSync(join(tmpdir(), 'baleproof-test-'))),
+    storage: createLocalStorage(uploadDir),
     clock,
     stripe: new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: stripePort, protocol: 'http', maxNetworkRetries: 0, telemetry: false }),
   };
@@ -45,6 +46,8 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
     mails,
     /** The fixed clock the API runs on (TEST_NOW); `clock.set(...)` lets time pass. */
     clock,
+    /** The storage folder behind `deps.storage` (one per test API). */
+    uploadDir,
     /** A supertest agent that keeps cookies and sends the CSRF header like the Angular app does. */
     agent: () => csrfAgent(api),
     close: async () => {

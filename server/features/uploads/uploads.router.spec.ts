@@ -1,4 +1,5 @@
-import { eq } from 'drizzle-orm';
+import { readdir } from 'node:fs/promises';
+import { eq, inArray } from 'drizzle-orm';
 import sharp from 'sharp';
 import type { FileStorage } from '../../adapters/storage/file-storage';
 import { createApi } from '../../api';
@@ -31,6 +32,8 @@ describe('uploads API', () => {
     return req;
   };
   const photoCount = async () => (await t.deps.db.select().from(photos).where(eq(photos.lotId, lotId))).length;
+  /** Stored-file rows owned by this file's grower (other test files upload in parallel under other growers). */
+  const growerFileCount = async () => (await t.deps.db.select().from(storedFiles).where(eq(storedFiles.ownerId, grower.user.id))).length;
 
   it('stores a photo as WebP variants 320/800/1600, upright and without EXIF, and keeps the original', async () => {
     const jpeg = await makeJpeg(2400, 1600);
@@ -106,29 +109,53 @@ describe('uploads API', () => {
     // 8,000 × 7,000 = 56 megapixels of one colour: a small PNG that would need ~170 MB to decode.
     const bomb = await sharp({ create: { width: 8000, height: 7000, channels: 3, background: '#7a6' } }).png({ compressionLevel: 9 }).toBuffer();
     expect(bomb.length).toBeLessThan(PHOTO_MAX_BYTES);
-    const res = await upload('photos', [{ data: bomb, name: 'bomb.png' }]);
-    expect(res.status).toBe(400);
-    expect(res.body.error.code).toBe('image_too_many_pixels');
-    expect(res.body.error.message).toMatch(/56 megapixels\); the limit is 50 megapixels/);
+    // Every way sharp turns compressed bytes into pixels goes through one of these (metadata() reads the header only).
+    const decodes = (['toBuffer', 'toFile', 'stats'] as const).map((m) => jest.spyOn(sharp.prototype, m));
+    const decodeCalls = () => decodes.reduce((n, spy) => n + spy.mock.calls.length, 0);
+    try {
+      const res = await upload('photos', [{ data: bomb, name: 'bomb.png' }]);
+      expect(res.status).toBe(400);
+      expect(res.body.error.code).toBe('image_too_many_pixels');
+      expect(res.body.error.message).toMatch(/56 megapixels\); the limit is 50 megapixels/);
+      expect(decodeCalls()).toBe(0);
+      // Control: the spies do see the decoding of an ordinary photo.
+      expect((await upload('photos', [{ data: await makeJpeg(400, 300), name: 'ordinary.jpg' }])).status).toBe(201);
+      expect(decodeCalls()).toBeGreaterThan(0);
+    } finally {
+      for (const spy of decodes) spy.mockRestore();
+    }
   }, 30_000);
 
   it('rejects the whole request when one of several photos is bad, storing none of them', async () => {
-    const before = await photoCount();
-    const res = await upload('photos', [
-      { data: await makeJpeg(400, 300), name: 'good.jpg' },
-      { data: Buffer.from('GIF89a not really'), name: 'bad.jpg' },
-    ]);
+    const written: string[] = [];
+    const spying: FileStorage = { ...t.deps.storage, put: async (key, data) => void (written.push(key), await t.deps.storage.put(key, data)) };
+    const agent = csrfAgent(createApi({ ...t.deps, storage: spying }));
+    await agent.post('/auth/sign-in', { email: grower.email, password: grower.password });
+    const before = { photos: await photoCount(), files: await growerFileCount(), folder: await filesIn(t.uploadDir) };
+    const res = await upload(
+      'photos',
+      [
+        { data: await makeJpeg(400, 300), name: 'good.jpg' },
+        { data: Buffer.from('GIF89a not really'), name: 'bad.jpg' },
+      ],
+      agent,
+    );
     expect(res.status).toBe(400);
-    expect(await photoCount()).toBe(before);
+    expect(await photoCount()).toBe(before.photos);
+    expect(await growerFileCount()).toBe(before.files);
+    expect(await filesIn(t.uploadDir)).toEqual(before.folder);
+    for (const key of written) expect(await t.deps.db.select().from(storedFiles).where(eq(storedFiles.storageKey, key))).toHaveLength(0);
   });
 
   it('leaves no orphan row or file when storage fails half-way through an upload', async () => {
     const written: string[] = [];
+    const attempted: string[] = [];
     const removed: string[] = [];
     let puts = 0;
     const flaky: FileStorage = {
       async put(key, data) {
         puts += 1;
+        attempted.push(key);
         // The original and the first variant are written; the second variant fails (disk full, say).
         if (puts === 3) throw new Error('simulated storage failure');
         written.push(key);
@@ -142,14 +169,15 @@ describe('uploads API', () => {
     };
     const agent = csrfAgent(createApi({ ...t.deps, storage: flaky }));
     await agent.post('/auth/sign-in', { email: grower.email, password: grower.password });
-    const filesBefore = (await t.deps.db.select().from(storedFiles)).length;
     const photosBefore = await photoCount();
 
     const res = await upload('photos', [{ data: await makeJpeg(1700, 1000), name: 'doomed.jpg' }], agent);
     expect(res.status).toBe(500);
     expect(res.body.error.code).toBe('internal');
     expect(await photoCount()).toBe(photosBefore);
-    expect((await t.deps.db.select().from(storedFiles)).length).toBe(filesBefore);
+    // Only the keys this upload wrote: other test files add stored files in parallel.
+    expect(attempted).toHaveLength(3);
+    expect(await t.deps.db.select().from(storedFiles).where(inArray(storedFiles.storageKey, attempted))).toHaveLength(0);
     expect(written.length).toBe(2);
     for (const key of written) {
       expect(removed).toContain(key);
@@ -222,4 +250,10 @@ async function streamToBuffer(stream: NodeJS.ReadableStream): Promise<Buffer> {
   const chunks: Buffer[] = [];
   for await (const chunk of stream) chunks.push(Buffer.from(chunk as Buffer));
   return Buffer.concat(chunks);
+}
+
+/** Every file under a folder, as sorted relative paths. */
+async function filesIn(dir: string): Promise<string[]> {
+  const entries = await readdir(dir, { recursive: true, withFileTypes: true });
+  return entries.filter((e) => e.isFile()).map((e) => `${e.parentPath}/${e.name}`.slice(dir.length + 1)).sort();
 }
