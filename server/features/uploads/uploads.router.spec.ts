@@ -22,7 +22,7 @@ describe('uploads API', () => {
     await grower.agent.put(`/selling/lots/${lotId}/quantity`, QUANTITY_STEP);
     await grower.agent.put(`/selling/lots/${lotId}/sampling`, SAMPLING_STEP);
     await grower.agent.put(`/selling/lots/${lotId}/analysis`, ANALYSIS_STEP);
-  });
+  }, 30_000);
   afterAll(() => t.close());
 
   const upload = async (field: 'photos' | 'report', files: { data: Buffer; name: string }[], agent = grower.agent, id = lotId) => {
