@@ -18,6 +18,8 @@ module.exports = {
     {
       displayName: 'node',
       testEnvironment: 'node',
+      // Integration tests hash passwords and render photos; 5 s is too little on a busy 2-core machine.
+      testTimeout: 30_000,
       roots: ['<rootDir>/shared', '<rootDir>/server', '<rootDir>/tests'],
       testMatch: ['**/*.spec.ts'],
       transform: { '^.+\\.(t|j)s$': swc },
