@@ -14,12 +14,12 @@ module.exports = {
   // Integration tests send real mail through SMTP into maildev and read it back (tests/mail-catcher-setup.cjs).
   globalSetup: '<rootDir>/tests/mail-catcher-setup.cjs',
   globalTeardown: '<rootDir>/tests/mail-catcher-teardown.cjs',
+  // Integration tests hash passwords and render photos; 5 s is too little on a busy 2-core machine.
+  testTimeout: 30_000,
   projects: [
     {
       displayName: 'node',
       testEnvironment: 'node',
-      // Integration tests hash passwords and render photos; 5 s is too little on a busy 2-core machine.
-      testTimeout: 30_000,
       roots: ['<rootDir>/shared', '<rootDir>/server', '<rootDir>/tests'],
       testMatch: ['**/*.spec.ts'],
       transform: { '^.+\\.(t|j)s$': swc },
