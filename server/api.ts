@@ -84,7 +84,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, issueCsrfCookie: csrf.issueCookie }));
   api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(deps));
-  api.use('/admin', adminRouter(db));
+  api.use('/admin', adminRouter(deps));
   api.use('/forage', forageRouter());
   api.use('/farms', farmsRouter(deps));
   api.use('/selling', sellingRouter(deps));

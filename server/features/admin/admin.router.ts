@@ -1,26 +1,54 @@
-import { desc, sql } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
-import type { Db } from '../../db/client';
-import { users } from '../../db/schema';
+import { AuditQuerySchema, ChangeRoleSchema, ReinstateSchema, SuspendSchema, UsersQuerySchema } from '@shared/contracts/admin';
+import type { ApiDeps } from '../../api';
 import { requireRole } from '../../middleware/require-role';
+import { auditTrail } from '../audit/audit-query';
+import { SettingsService } from '../settings/settings.service';
+import { UsersService } from '../users/users.service';
 
-const UsersQuery = z.object({ q: z.string().trim().max(100).optional(), limit: z.coerce.number().int().min(1).max(200).default(50) }).strict();
+const UserParams = z.object({ id: z.coerce.number().int().positive('User id must be a positive whole number.') });
 
-/** Admin-only tools. Every route here sits behind requireRole('admin'). */
-export function adminRouter(db: Db): Router {
+/** Admin-only tools: users, settings, the audit trail. Every route here sits behind requireRole('admin'). */
+export function adminRouter(deps: ApiDeps): Router {
+  const { db, clock } = deps;
+  const usersService = new UsersService(db, clock);
+  const settings = new SettingsService(db, clock);
   const router = Router();
   router.use(requireRole('admin'));
 
   router.get('/users', async (req, res) => {
-    const { q, limit } = UsersQuery.parse(req.query);
-    const rows = await db
-      .select({ id: users.id, email: users.email, displayName: users.displayName, role: users.role, createdAt: users.createdAt, disabledAt: users.disabledAt })
-      .from(users)
-      .where(q ? sql`${users.email} ilike ${'%' + q + '%'} or ${users.displayName} ilike ${'%' + q + '%'}` : undefined)
-      .orderBy(desc(users.createdAt))
-      .limit(limit);
-    res.json({ items: rows });
+    res.json({ items: await usersService.list(UsersQuerySchema.parse(req.query)) });
+  });
+
+  router.post('/users/:id/role', async (req, res) => {
+    const { id } = UserParams.parse(req.params);
+    const { role, reason } = ChangeRoleSchema.parse(req.body);
+    res.json(await usersService.changeRole(req.user!, id, role, reason));
+  });
+
+  router.post('/users/:id/suspend', async (req, res) => {
+    const { id } = UserParams.parse(req.params);
+    const { reason } = SuspendSchema.parse(req.body);
+    res.json(await usersService.suspend(req.user!, id, reason));
+  });
+
+  router.post('/users/:id/reinstate', async (req, res) => {
+    const { id } = UserParams.parse(req.params);
+    const { reason } = ReinstateSchema.parse(req.body);
+    res.json(await usersService.reinstate(req.user!, id, reason));
+  });
+
+  router.get('/settings', async (_req, res) => {
+    res.json(await settings.current());
+  });
+
+  router.put('/settings', async (req, res) => {
+    res.json(await settings.update(req.user!.id, req.body));
+  });
+
+  router.get('/audit', async (req, res) => {
+    res.json({ items: await auditTrail(db, AuditQuerySchema.parse(req.query)) });
   });
 
   return router;

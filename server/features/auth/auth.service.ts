@@ -2,7 +2,7 @@ import { eq, sql } from 'drizzle-orm';
 import type { SessionUser, SignIn, SignUp } from '@shared/contracts/auth';
 import type { Db } from '../../db/client';
 import { auditEvents, users } from '../../db/schema';
-import { conflict } from '../../middleware/http-error';
+import { conflict, HttpError } from '../../middleware/http-error';
 import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password';
 
 const sessionColumns = { id: users.id, email: users.email, displayName: users.displayName, role: users.role };
@@ -30,7 +30,9 @@ export class AuthService {
       .from(users)
       .where(sql`lower(${users.email}) = ${input.email.toLowerCase()}`);
     const ok = await verifyPassword(input.password, row?.passwordHash ?? (await DUMMY_HASH_PROMISE));
-    if (!row || !ok || row.disabledAt) return null;
+    if (!row || !ok) return null;
+    // Only someone who knows the password learns that the account is suspended.
+    if (row.disabledAt) throw new HttpError(401, 'account_suspended', 'This account is suspended. Write to Baleproof support if you think this is a mistake.');
     return { id: row.id, email: row.email, displayName: row.displayName, role: row.role };
   }
 
