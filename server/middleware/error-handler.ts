@@ -1,5 +1,6 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { ZodError } from 'zod';
+import { TransitionRefused } from '@shared/lifecycle/state-machine';
 import type { Logger } from '../logger';
 import { HttpError } from './http-error';
 
@@ -22,6 +23,8 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return body(400, 'invalid_input', first ? `${first.path || 'input'}: ${first.message}` : 'Invalid input.', details);
     }
     if (err instanceof HttpError) return body(err.status, err.code, err.message, err.details);
+    // A life-cycle step refused: not possible in this state (409) or not this user's to take (403).
+    if (err instanceof TransitionRefused) return body(err.reason === 'not_allowed' ? 403 : 409, err.code, err.message);
     // body-parser errors (malformed JSON, too large) carry a status and a type.
     if (typeof err?.status === 'number' && err.status >= 400 && err.status < 500) {
       const code = err.type === 'entity.parse.failed' ? 'malformed_json' : String(err.type ?? 'bad_request').replace(/\W+/g, '_');

@@ -29,6 +29,17 @@ export const BALE_TYPES = [
 ] as const;
 export type BaleType = (typeof BALE_TYPES)[number];
 
+/** Where a lot is in its life; the steps between them are in `shared/lifecycle/lot-lifecycle`. */
+export const LOT_STATUSES = [
+  'draft', // being written by the grower
+  'in_review', // submitted, waiting for an admin to check the lab report
+  'returned', // sent back to the grower with a reason
+  'listed', // approved and public
+  'withdrawn', // taken off sale by the grower
+  'sold_out', // approved, no bales left
+] as const;
+export type LotStatus = (typeof LOT_STATUSES)[number];
+
 export const LOT_SORTS = ['newest', 'price', 'price_dm', 'rfv', 'protein', 'distance'] as const;
 export type LotSort = (typeof LOT_SORTS)[number];
 
@@ -150,7 +161,7 @@ export interface LotSearchResult {
 /** Everything the lot page shows. Nutrients are stored and returned on a dry-matter basis. */
 export interface LotDetail {
   id: number;
-  status: 'draft' | 'in_review' | 'returned' | 'listed' | 'withdrawn' | 'sold_out';
+  status: LotStatus;
   title: string;
   description: string;
   fieldName: string;

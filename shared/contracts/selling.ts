@@ -3,7 +3,7 @@ import type { Finding, ForageEvaluation, SamplingEvaluation } from '../forage';
 import { ForageEvaluationRequestSchema } from '../forage';
 import type { ReadingComparison, ReportReading } from './report-reading';
 import { FORAGE_TYPE_LABELS } from './labels';
-import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetail, type PhotoView } from './lots';
+import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetail, type LotStatus, type PhotoView } from './lots';
 
 /*
  * Contracts of the grower's side: farm profile, the guided lot form (one schema per step), the
@@ -219,7 +219,7 @@ export type ReturnLot = z.infer<typeof ReturnLotSchema>;
 
 // ---------------------------------------------------------------- views
 
-export type LotStatus = LotDetail['status'];
+export type { LotStatus };
 
 /** A lot as its grower edits it: everything the form needs to resume, plus what the engine says. */
 export interface EditableLot {

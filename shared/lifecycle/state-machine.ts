@@ -45,3 +45,18 @@ export function eventsFor<S extends string, E extends string>(machine: Lifecycle
     return t.from.includes(from) && t.by.includes(actor);
   });
 }
+
+/**
+ * A refused step, thrown by a life-cycle's `require…` helper: the API answers 409 when the thing is in the
+ * wrong state and 403 when the actor may not take the step (see server/middleware/error-handler.ts).
+ */
+export class TransitionRefused extends Error {
+  constructor(
+    readonly code: string,
+    message: string,
+    readonly reason: 'wrong_state' | 'not_allowed',
+  ) {
+    super(message);
+    this.name = 'TransitionRefused';
+  }
+}

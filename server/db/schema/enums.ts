@@ -1,20 +1,13 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
 import { USER_ROLES } from '@shared/contracts/auth';
-import { BALE_TYPES, FORAGE_TYPES } from '@shared/contracts/lots';
+import { BALE_TYPES, FORAGE_TYPES, LOT_STATUSES } from '@shared/contracts/lots';
 import { DELIVERY_STATUSES } from '@shared/lifecycle/delivery-lifecycle';
 import { ORDER_STATUSES } from '@shared/lifecycle/order-lifecycle';
 
 export const userRole = pgEnum('user_role', USER_ROLES);
 
-/** Where a lot is in its life: only `listed` lots are public. */
-export const lotStatus = pgEnum('lot_status', [
-  'draft', // being written by the grower
-  'in_review', // submitted, waiting for an admin to check the lab report
-  'returned', // sent back to the grower with a reason
-  'listed', // approved and public
-  'withdrawn', // taken off sale by the grower
-  'sold_out',
-]);
+/** Where a lot is in its life (see shared/lifecycle/lot-lifecycle). */
+export const lotStatus = pgEnum('lot_status', LOT_STATUSES);
 
 export const forageClass = pgEnum('forage_class', ['legume', 'grass', 'mixed']);
 

@@ -1,5 +1,6 @@
 import { and, eq, inArray, sql } from 'drizzle-orm';
 import type { ComparedLot, ComparedPricing, LotCompareQuery, LotComparison } from '@shared/contracts/compare';
+import { PUBLIC_LOT_STATUSES } from '@shared/lifecycle/lot-lifecycle';
 import { costPerLbCrudeProteinCents, costPerMcalDeCents, costPerTonDryMatterCents, deliveredPrice, DEFAULT_TONS_PER_LOAD } from '@shared/pricing';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
@@ -14,7 +15,7 @@ export async function compareLots(db: Db, query: LotCompareQuery): Promise<LotCo
     .from(lots)
     .innerJoin(farms, eq(farms.id, lots.farmId))
     .innerJoin(labAnalyses, and(eq(labAnalyses.lotId, lots.id), eq(labAnalyses.isCurrent, true)))
-    .where(and(inArray(lots.id, query.ids), inArray(lots.status, ['listed', 'sold_out'])));
+    .where(and(inArray(lots.id, query.ids), inArray(lots.status, PUBLIC_LOT_STATUSES)));
 
   const byId = new Map(rows.map((r) => [r.lot.id, r]));
   const items: ComparedLot[] = [];

@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
 import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '@shared/contracts/lots';
+import { mayViewLot } from '@shared/lifecycle/lot-lifecycle';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
@@ -157,8 +158,7 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: C
     .where(eq(lots.id, id));
   if (!row) return null;
   const { lot, farm } = row;
-  const mayPeek = viewer && (viewer.role === 'admin' || viewer.id === farm.ownerId);
-  if (lot.status !== 'listed' && lot.status !== 'sold_out' && !mayPeek) return null;
+  if (!mayViewLot(lot.status, { isOwner: viewer?.id === farm.ownerId, isAdmin: viewer?.role === 'admin' })) return null;
 
   const [analysis] = await db.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, id), eq(labAnalyses.isCurrent, true)));
   const [sampling] = await db.select().from(samplingRecords).where(eq(samplingRecords.lotId, id));

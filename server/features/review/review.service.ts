@@ -1,5 +1,6 @@
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { ReviewLotView, ReviewQueueRow } from '@shared/contracts/selling';
+import { approvedStatus, requireLotTransition } from '@shared/lifecycle/lot-lifecycle';
 import type { ApiDeps } from '../../api';
 import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';
@@ -70,14 +71,14 @@ export class ReviewService {
   async approve(admin: Express.User, lotId: number): Promise<void> {
     const { db, mailer, env, logger } = this.deps;
     const { lot, farm } = await findLotWithFarm(db, lotId);
-    if (lot.status !== 'in_review') throw conflict('not_in_review', 'Only lots waiting for review can be approved.');
+    const next = approvedStatus(lot.status, lot.balesAvailable);
     const view = await editableLot(db, lotId, this.deps.clock);
     if (view.missing.length > 0) throw conflict('lot_incomplete', `This lot still lacks ${view.missing.join(', ')}.`);
     const now = this.deps.clock.now();
     await db.transaction(async (tx) => {
       await tx
         .update(lots)
-        .set({ status: lot.balesAvailable > 0 ? 'listed' : 'sold_out', publishedAt: lot.publishedAt ?? now, reviewedBy: admin.id, reviewedAt: now, reviewNote: null, updatedAt: now })
+        .set({ status: next, publishedAt: lot.publishedAt ?? now, reviewedBy: admin.id, reviewedAt: now, reviewNote: null, updatedAt: now })
         .where(eq(lots.id, lotId));
       await tx
         .update(labAnalyses)
@@ -92,10 +93,10 @@ export class ReviewService {
   async returnToGrower(admin: Express.User, lotId: number, reason: string): Promise<void> {
     const { db, env, logger } = this.deps;
     const { lot, farm } = await findLotWithFarm(db, lotId);
-    if (lot.status !== 'in_review') throw conflict('not_in_review', 'Only lots waiting for review can be returned.');
+    const next = requireLotTransition(lot.status, 'return', 'admin');
     const now = this.deps.clock.now();
     await db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: 'returned', reviewNote: reason, reviewedBy: admin.id, reviewedAt: now, updatedAt: now }).where(eq(lots.id, lotId));
+      await tx.update(lots).set({ status: next, reviewNote: reason, reviewedBy: admin.id, reviewedAt: now, updatedAt: now }).where(eq(lots.id, lotId));
       await tx
         .update(labAnalyses)
         .set({ verification: 'rejected', verifiedBy: admin.id, verifiedAt: now })

@@ -1,10 +1,11 @@
 import { and, desc, eq, sql } from 'drizzle-orm';
 import type { SellerLotRow } from '@shared/contracts/selling';
 import { stepIndex } from '@shared/contracts/selling';
+import { relistedStatus, requireLotTransition } from '@shared/lifecycle/lot-lifecycle';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { auditEvents, farms, labAnalyses, lots, orders } from '../../db/schema';
-import { conflict, HttpError } from '../../middleware/http-error';
+import { HttpError } from '../../middleware/http-error';
 import { LotsService } from '../lots/lots.service';
 import { ownedLot } from './lot-access';
 import { editableLot } from './lot-view';
@@ -18,15 +19,13 @@ export class LotLifecycleService {
 
   async submit(user: Express.User, lotId: number): Promise<void> {
     const { lot } = await ownedLot(this.db, lotId, user);
-    if (lot.status !== 'draft' && lot.status !== 'returned') {
-      throw conflict('not_submittable', lot.status === 'in_review' ? 'This lot is already waiting for review.' : 'Only drafts and returned lots can be submitted.');
-    }
+    const next = requireLotTransition(lot.status, 'submit', 'grower');
     const view = await editableLot(this.db, lotId, this.clock);
     if (view.missing.length > 0) {
       throw new HttpError(400, 'lot_incomplete', `Before submitting, add ${view.missing.join(', ')}.`, view.missing.map((m) => ({ path: 'lot', message: m })));
     }
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: 'in_review', reviewNote: null, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
+      await tx.update(lots).set({ status: next, reviewNote: null, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
       await tx.update(labAnalyses).set({ verification: 'pending' }).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true), eq(labAnalyses.verification, 'rejected')));
       await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.submitted', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
     });
@@ -35,9 +34,9 @@ export class LotLifecycleService {
   /** Takes a lot off sale (or out of the queue); nothing is deleted. */
   async withdraw(user: Express.User, lotId: number): Promise<void> {
     const { lot } = await ownedLot(this.db, lotId, user);
-    if (!['listed', 'sold_out', 'in_review'].includes(lot.status)) throw conflict('not_withdrawable', 'Only listed lots or lots in review can be withdrawn.');
+    const next = requireLotTransition(lot.status, 'withdraw', 'grower');
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: 'withdrawn', updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
+      await tx.update(lots).set({ status: next, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
       await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.withdrawn', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
     });
   }
@@ -45,14 +44,13 @@ export class LotLifecycleService {
   /** Back on sale at once when the current analysis is still verified; otherwise back to review. */
   async relist(user: Express.User, lotId: number): Promise<'listed' | 'in_review'> {
     const { lot } = await ownedLot(this.db, lotId, user);
-    if (lot.status !== 'withdrawn') throw conflict('not_relistable', 'Only withdrawn lots can be relisted.');
     const [analysis] = await this.db.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
-    const next = analysis?.verification === 'verified' && lot.publishedAt ? (lot.balesAvailable > 0 ? 'listed' : 'sold_out') : 'in_review';
+    const next = relistedStatus(lot.status, { analysisVerified: analysis?.verification === 'verified', everPublished: lot.publishedAt !== null, balesAvailable: lot.balesAvailable });
     await this.db.transaction(async (tx) => {
       await tx.update(lots).set({ status: next, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
       await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.relisted', entityType: 'lot', entityId: String(lotId), data: { to: next } });
     });
-    return next === 'sold_out' ? 'listed' : next;
+    return next === 'in_review' ? 'in_review' : 'listed';
   }
 
   /**

@@ -13,6 +13,7 @@ import {
   stepIndex,
   type LotFormStep,
 } from '@shared/contracts/selling';
+import { afterReviewedChange, factsNeedingReview, statusAfterStockChange } from '@shared/lifecycle/lot-lifecycle';
 import { samplingReportOf } from '../lots/sampling-report';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
@@ -28,8 +29,8 @@ type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
  * The lot form's writes, one per step. Rules:
  * - steps are saved in order (a step needs the one before it), so columns of unsaved steps never show;
  * - a draft row holds neutral placeholders for quantity and price until those steps are saved;
- * - on a lot whose analysis was verified, changing what the analysis describes (the lot, its sampling,
- *   its analysis or report) sends it back to review; stock, price and photos do not.
+ * - on an approved lot, changing a fact the admin checked or buyers rely on sends it back to review;
+ *   stock, price and photos do not (the table is `LOT_FACTS` in shared/lifecycle/lot-lifecycle).
  */
 export class LotStepsService {
   constructor(
@@ -63,16 +64,12 @@ export class LotStepsService {
     const input = LotStepSchema.parse(body);
     const { lot } = await this.editable(user, lotId, 'lot');
     const columns = this.lotColumns(input);
-    const identityChanged =
-      columns.fieldName !== lot.fieldName ||
-      columns.cutting !== lot.cutting ||
-      columns.forageType !== lot.forageType ||
-      columns.harvestStartedOn !== lot.harvestStartedOn ||
-      columns.harvestEndedOn !== lot.harvestEndedOn;
+    const { forageClass: _derived, ...facts } = columns;
+    const needsReview = factsNeedingReview(lot, facts).length > 0;
     await this.db.transaction(async (tx) => {
       await tx.update(lots).set({ ...columns, ...this.progress(lot, 'lot') }).where(eq(lots.id, lotId));
       if (columns.forageClass !== lot.forageClass) await this.reevaluate(tx, lotId, columns.forageClass);
-      if (identityChanged) await this.backToReview(tx, lot);
+      if (needsReview) await this.backToReview(tx, lot);
     });
   }
 
@@ -84,21 +81,23 @@ export class LotStepsService {
     const sold = firstTime ? 0 : lot.baleCount - lot.balesAvailable;
     const balesAvailable = input.balesAvailable ?? Math.max(0, q.baleCount - sold);
     const perTon = lot.pricingUnit === 'bale' && lot.priceCentsPerBale !== null ? centsPerTonFromBale(lot.priceCentsPerBale, q.avgBaleWeightLb) : lot.priceCentsPerTon;
+    const shape = { baleType: input.baleType, baleCount: q.baleCount, avgBaleWeightLb: Math.round(q.avgBaleWeightLb * 10) / 10 };
+    const needsReview = !firstTime && factsNeedingReview(lot, shape).length > 0;
+    const status = statusAfterStockChange(lot.status, balesAvailable);
     await this.db.transaction(async (tx) => {
       await tx
         .update(lots)
         .set({
-          baleType: input.baleType,
-          baleCount: q.baleCount,
-          avgBaleWeightLb: Math.round(q.avgBaleWeightLb * 10) / 10,
+          ...shape,
           balesAvailable,
           priceCentsPerTon: perTon,
-          status: lot.status === 'sold_out' && balesAvailable > 0 ? 'listed' : lot.status === 'listed' && balesAvailable === 0 ? 'sold_out' : lot.status,
+          status,
           ...this.progress(lot, 'quantity'),
         })
         .where(eq(lots.id, lotId));
       // The sampling verdict depends on the bale shape and lot size.
       await this.recheckSampling(tx, lotId);
+      if (needsReview) await this.backToReview(tx, { ...lot, status });
     });
   }
 
@@ -214,10 +213,11 @@ export class LotStepsService {
 
   /** A lot that buyers can see (or could relist) goes back to the review queue; its analysis needs checking again. */
   private async backToReview(tx: Tx, lot: LotRow): Promise<void> {
-    if (lot.status === 'listed' || lot.status === 'sold_out') {
-      await tx.update(lots).set({ status: 'in_review', updatedAt: this.clock.now() }).where(eq(lots.id, lot.id));
+    const { status, approvalLapses } = afterReviewedChange(lot.status);
+    if (status !== lot.status) {
+      await tx.update(lots).set({ status, updatedAt: this.clock.now() }).where(eq(lots.id, lot.id));
     }
-    if (lot.status === 'listed' || lot.status === 'sold_out' || lot.status === 'withdrawn') {
+    if (approvalLapses) {
       await tx
         .update(labAnalyses)
         .set({ verification: 'pending', verifiedBy: null, verifiedAt: null })

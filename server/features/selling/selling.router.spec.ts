@@ -122,6 +122,27 @@ describe('selling API', () => {
     expect((await t.agent().get(`/lots/${id}`)).status).toBe(404);
   }, 30_000);
 
+  it('after approval: a change of the description, storage or bale type sends the lot back to review (lot life-cycle, README)', async () => {
+    const approve = async () => {
+      const id = await completeLot(grower.agent);
+      await grower.agent.post(`/selling/lots/${id}/submit`);
+      const admin = await signedInUser(t, 'admin');
+      expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+      return id;
+    };
+    const a = await approve();
+    const described = await grower.agent.put(`/selling/lots/${a}/lot`, { ...LOT_STEP, description: 'Now said to be leafier than the report shows.' });
+    expect(described.body).toMatchObject({ status: 'in_review', analysis: { verification: 'pending' } });
+    expect((await t.agent().get(`/lots/${a}`)).status).toBe(404);
+
+    const b = await approve();
+    expect((await grower.agent.put(`/selling/lots/${b}/lot`, { ...LOT_STEP, storage: 'outside' })).body.status).toBe('in_review');
+
+    const c = await approve();
+    const reshaped = await grower.agent.put(`/selling/lots/${c}/quantity`, { ...QUANTITY_STEP, baleType: 'round_5x5' });
+    expect(reshaped.body.status).toBe('in_review');
+  }, 60_000);
+
   it('withdraws and relists, and copies a lot as the start of the next cutting', async () => {
     const id = await completeLot(grower.agent);
     await grower.agent.post(`/selling/lots/${id}/submit`);

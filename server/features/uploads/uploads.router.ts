@@ -1,6 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
+import { mayViewLot } from '@shared/lifecycle/lot-lifecycle';
 import type { ApiDeps } from '../../api';
 import { labAnalyses, storedFiles } from '../../db/schema';
 import { forbidden, notFound, unauthenticated } from '../../middleware/http-error';
@@ -66,12 +67,10 @@ export function uploadsRouter(deps: ApiDeps): Router {
       .from(labAnalyses)
       .innerJoin(storedFiles, eq(storedFiles.id, labAnalyses.reportFileId))
       .where(and(eq(labAnalyses.lotId, id), eq(labAnalyses.isCurrent, true)));
-    const isOwner = farm.ownerId === req.user.id;
-    const isAdmin = req.user.role === 'admin';
-    const isPublic = (lot.status === 'listed' || lot.status === 'sold_out') && row?.verification === 'verified';
-    if (!isOwner && !isAdmin && !isPublic) {
-      // Do not reveal whether an unlisted lot exists.
-      if (lot.status !== 'listed' && lot.status !== 'sold_out') throw notFound('That lab report');
+    const viewer = { isOwner: farm.ownerId === req.user.id, isAdmin: req.user.role === 'admin' };
+    // Do not reveal whether an unlisted lot exists.
+    if (!mayViewLot(lot.status, viewer)) throw notFound('That lab report');
+    if (!viewer.isOwner && !viewer.isAdmin && row?.verification !== 'verified') {
       throw forbidden('The lab report is shown once an admin has verified it.');
     }
     if (!row) throw notFound('That lab report');
