@@ -8,6 +8,7 @@ import {
   type UsdaCriterion,
   type UsdaGrade,
 } from './forage-contract';
+import { roundTo } from '../units/rounding';
 
 /*
  * Hay grades, all on a DM basis.
@@ -32,6 +33,12 @@ import {
  * (Premium 27 ≤ ADF ≤ 29, Good 29 < ADF ≤ 32, …) with no gaps. Where the printed table leaves
  * a gap (TDN 60–60.5), a value that does not reach a band's limit falls to the band below.
  *
+ * PRECISION: every value is compared at the report's own precision, two decimals (lab reports print
+ * nutrients to one or two decimals and RFV/TDN to at most two — common practice). A basis change carries
+ * float error (16.56 as fed at 92% DM is 17.999999999999996 on DM, not 18); rounding first means a
+ * value that is on an edge in the report is on the edge here, in either basis, while two values a
+ * report can tell apart (18.00 and 17.99) still grade apart.
+ *
  * Overall grade = the lowest grade any criterion gives; `basis` names the criterion that set
  * it (first in table order when several tie).
  *
@@ -54,8 +61,12 @@ interface Band<G> {
   inclusive: boolean;
 }
 
-/** Best band whose limit the value reaches; `otherwise` when none. */
-function band<G>(value: number, direction: 'higher-is-better' | 'lower-is-better', bands: Band<G>[], otherwise: G): G {
+/** Decimals every graded value is rounded to before it meets a band limit (see PRECISION above). */
+export const GRADE_DECIMALS = 2;
+
+/** Best band whose limit the value, at report precision, reaches; `otherwise` when none. */
+function band<G>(exact: number, direction: 'higher-is-better' | 'lower-is-better', bands: Band<G>[], otherwise: G): G {
+  const value = roundTo(exact, GRADE_DECIMALS);
   for (const b of bands) {
     const reaches =
       direction === 'higher-is-better'
