@@ -33,6 +33,9 @@ fi
 log "type-checking"
 node_modules/.bin/tsc -p tsconfig.server.json
 
+log "checking for import loops (madge)"
+node_modules/.bin/madge --circular --no-spinner --extensions ts --ts-config tsconfig.json server shared src
+
 DATABASE_URL="$TEST_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
 # The fakes start before Jest: integration tests send real mail through SMTP and read it back from the catcher.
 # A fresh mail folder per run, so no test can find a message an earlier run left.

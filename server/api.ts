@@ -4,12 +4,8 @@ import session from 'express-session';
 import helmet from 'helmet';
 import passport from 'passport';
 import { pinoHttp } from 'pino-http';
-import type Stripe from 'stripe';
-import type { Mailer } from './adapters/mail/mailer';
-import type { Clock } from './clock';
-import type { FileStorage } from './adapters/storage/file-storage';
-import type { Db } from './db/client';
-import { cookiesAreSecure, type Env } from './env';
+import type { ApiDeps } from './api-deps';
+import { cookiesAreSecure } from './env';
 import { authRouter, configurePassport } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
@@ -22,20 +18,8 @@ import { reviewRouter } from './features/review/review.router';
 import { lotCompareRouter } from './features/lots/lot-compare.router';
 import { plannerRouter } from './features/planner/planner.router';
 import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
-import type { Logger } from './logger';
 import { createCsrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
-
-export interface ApiDeps {
-  env: Env;
-  db: Db;
-  logger: Logger;
-  mailer: Mailer;
-  storage: FileStorage;
-  stripe: Stripe;
-  /** The current time for every service (a fixed clock in tests). */
-  clock: Clock;
-}
 
 export const SESSION_COOKIE = 'baleproof.sid';
 

@@ -1,7 +1,7 @@
 import { createSmtpMailer } from './adapters/mail/mailer';
 import { createStripeClient } from './adapters/payments/stripe-client';
 import { createLocalStorage } from './adapters/storage/file-storage';
-import type { ApiDeps } from './api';
+import type { ApiDeps } from './api-deps';
 import { clockFromEnv } from './clock';
 import { createDb } from './db/client';
 import { readEnv } from './env';

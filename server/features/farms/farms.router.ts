@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { FarmProfileInputSchema } from '@shared/contracts/selling';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { HttpError } from '../../middleware/http-error';
 import { requireRole } from '../../middleware/require-role';
 import { farmProfileView, FarmsService } from './farms.service';

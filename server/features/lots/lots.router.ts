@@ -2,7 +2,7 @@ import { eq, sql } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
 import { LotSearchSchema } from '@shared/contracts/lots';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { lots } from '../../db/schema';
 import { notFound } from '../../middleware/http-error';
 import { findLotDetail, LotsService } from './lots.service';

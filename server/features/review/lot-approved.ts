@@ -1,4 +1,4 @@
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { alertSavedSearches } from '../saved-searches/saved-search-alerts';
 
 /** Something to do once a lot has been approved and is public (e.g. saved-search alerts). */

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { ReturnLotSchema } from '@shared/contracts/selling';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { requireRole } from '../../middleware/require-role';
 import { ReviewService } from './review.service';
 

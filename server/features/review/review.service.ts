@@ -1,7 +1,7 @@
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { ReviewLotView, ReviewQueueRow } from '@shared/contracts/selling';
 import { approvedStatus, requireLotTransition } from '@shared/lifecycle/lot-lifecycle';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';
 import { findLotWithFarm } from '../selling/lot-access';

@@ -1,7 +1,7 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { LotSearchSchema, type LotSummary } from '@shared/contracts/lots';
 import { formatCents } from '@shared/units/money';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { savedSearches, users } from '../../db/schema';
 import { LotsService } from '../lots/lots.service';
 

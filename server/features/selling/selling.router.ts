@@ -3,7 +3,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { analysisCsvTemplate } from '@shared/contracts/analysis-csv';
 import { PhotoOrderSchema } from '@shared/contracts/selling';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { photos } from '../../db/schema';
 import { HttpError, notFound } from '../../middleware/http-error';
 import { requireRole } from '../../middleware/require-role';

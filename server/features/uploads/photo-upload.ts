@@ -1,7 +1,7 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { eq, sql } from 'drizzle-orm';
 import type { PhotoView } from '@shared/contracts/lots';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { photos, storedFiles, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
 import { photoView } from '../lots/lots.service';

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import type { ReportReading } from '@shared/contracts/report-reading';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { storedFiles } from '../../db/schema';
 import type { LotRow } from '../selling/lot-access';
 import { LotStepsService } from '../selling/lot-steps.service';

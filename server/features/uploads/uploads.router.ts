@@ -2,7 +2,7 @@ import { and, eq } from 'drizzle-orm';
 import { Router } from 'express';
 import { z } from 'zod';
 import { mayViewLot } from '@shared/lifecycle/lot-lifecycle';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { labAnalyses, storedFiles } from '../../db/schema';
 import { forbidden, notFound, unauthenticated } from '../../middleware/http-error';
 import { requireRole } from '../../middleware/require-role';

@@ -1,0 +1,22 @@
+import type Stripe from 'stripe';
+import type { Mailer } from './adapters/mail/mailer';
+import type { FileStorage } from './adapters/storage/file-storage';
+import type { Clock } from './clock';
+import type { Db } from './db/client';
+import type { Env } from './env';
+import type { Logger } from './logger';
+
+/**
+ * What the API and its features are built from; `createAppDeps()` makes the real ones, tests make their own.
+ * Features import this module, never `api.ts` (which imports the features): no import loop.
+ */
+export interface ApiDeps {
+  env: Env;
+  db: Db;
+  logger: Logger;
+  mailer: Mailer;
+  storage: FileStorage;
+  stripe: Stripe;
+  /** The current time for every service (a fixed clock in tests). */
+  clock: Clock;
+}
