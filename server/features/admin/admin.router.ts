@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { AuditQuerySchema, ChangeRoleSchema, ReinstateSchema, SuspendSchema, UsersQuerySchema } from '@shared/contracts/admin';
-import type { ApiDeps } from '../../api';
+import type { ApiDeps } from '../../api-deps';
 import { requireRole } from '../../middleware/require-role';
 import { auditTrail } from '../audit/audit-query';
 import { SettingsService } from '../settings/settings.service';
