@@ -1,5 +1,5 @@
 import { sql } from 'drizzle-orm';
-import { check, index, integer, pgTable, text, timestamp } from 'drizzle-orm/pg-core';
+import { boolean, check, date, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { claimStatus } from './enums';
 import { orders } from './orders';
 import { storedFiles } from './files';
@@ -13,7 +13,13 @@ export const qualityClaims = pgTable(
     orderId: integer().notNull().references(() => orders.id, { onDelete: 'restrict' }),
     openedBy: integer().notNull().references(() => users.id, { onDelete: 'restrict' }),
     reason: text().notNull(),
+    /** The certified lab's retest report PDF. */
     evidenceFileId: integer().references(() => storedFiles.id, { onDelete: 'set null' }),
+    retestLabName: text(),
+    retestLabCertified: boolean(),
+    retestReportDate: date({ mode: 'string' }),
+    /** Retest values as entered, with their basis (the engine's request shape without the forage class). */
+    retestValues: jsonb().$type<Record<string, number | string>>(),
     status: claimStatus().notNull().default('open'),
     resolution: text(),
     refundCents: integer().notNull().default(0),
@@ -23,6 +29,8 @@ export const qualityClaims = pgTable(
   },
   (t) => [
     index('quality_claims_order_idx').on(t.orderId),
+    // One claim open per order at a time.
+    uniqueIndex('quality_claims_one_open_per_order').on(t.orderId).where(sql`${t.status} = 'open'`),
     index('quality_claims_status_idx').on(t.status),
     check('quality_claims_refund_nonnegative', sql`${t.refundCents} >= 0`),
   ],

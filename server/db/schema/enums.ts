@@ -1,4 +1,6 @@
 import { pgEnum } from 'drizzle-orm/pg-core';
+import { CLAIM_STATUSES } from '@shared/lifecycle/claim-lifecycle';
+import { PAYOUT_STATUSES } from '@shared/lifecycle/payout-lifecycle';
 import { USER_ROLES } from '@shared/contracts/auth';
 import { BALE_TYPES, FORAGE_TYPES, LOT_STATUSES } from '@shared/contracts/lots';
 import { DELIVERY_STATUSES } from '@shared/lifecycle/delivery-lifecycle';
@@ -34,5 +36,5 @@ export const orderStatus = pgEnum('order_status', ORDER_STATUSES);
 
 export const deliveryMethod = pgEnum('delivery_method', ['delivery', 'pickup']);
 export const deliveryStatus = pgEnum('delivery_status', DELIVERY_STATUSES);
-export const claimStatus = pgEnum('claim_status', ['open', 'upheld', 'declined', 'withdrawn']);
-export const payoutStatus = pgEnum('payout_status', ['held', 'due', 'sent', 'failed']);
+export const claimStatus = pgEnum('claim_status', CLAIM_STATUSES);
+export const payoutStatus = pgEnum('payout_status', PAYOUT_STATUSES);
