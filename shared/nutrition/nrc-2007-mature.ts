@@ -5,15 +5,13 @@
  * Why per-kg coefficients: every NRC 2007 term for mature horses is proportional to BW
  * (maintenance, the work multipliers, milk yield taken as a share of BW, conceptus growth from a
  * foal birth weight that is a share of the mare's BW). Dividing a 500 kg table row by 500 therefore
- * reproduces the table for other weights. For gestation and lactation this is a documented
- * simplification: we could not re-read the NRC gestation/lactation equations, so those rows use the
- * 500 kg table values (from memory) scaled by weight.
+ * reproduces the table for other weights. Broodmares by month are in nrc-2007-reproduction.ts.
  *
  * Provenance of each number is recorded beside it; `verified` means checked against a published
  * secondary summary during implementation, `memory` means not re-checked.
  */
 
-import type { MatureHorseClass } from './horse-class';
+import type { SteadyHorseClass } from './horse-class';
 
 /** Daily requirement coefficients per kg BW, and the dry-matter intake band as a fraction of BW. */
 export interface MatureCoefficients {
@@ -42,11 +40,33 @@ export const MAINTENANCE_DE_MCAL_PER_KG = 0.0333;
 /** Elevated maintenance DE, 0.0363 Mcal/kg BW/day; very heavy work multiplies this one. Verified as above. */
 export const ELEVATED_MAINTENANCE_DE_MCAL_PER_KG = 0.0363;
 
-const MATURE_DMI = { min: 0.015, typical: 0.02, max: 0.025 } as const;
+export const MATURE_DMI = { min: 0.015, typical: 0.02, max: 0.025 } as const;
 
 const NRC = 'NRC (2007) Nutrient Requirements of Horses';
 
-export const MATURE_COEFFICIENTS: Readonly<Record<MatureHorseClass, MatureCoefficients>> = {
+/** Minimum maintenance DE, 0.0303 Mcal/kg BW/day (15.2 Mcal at 500 kg). Verified as above. */
+export const MINIMUM_MAINTENANCE_DE_MCAL_PER_KG = 0.0303;
+
+export const MATURE_COEFFICIENTS: Readonly<Record<SteadyHorseClass, MatureCoefficients>> = {
+  'minimum-maintenance': {
+    deMcalPerKgBw: MINIMUM_MAINTENANCE_DE_MCAL_PER_KG,
+    // 1.08 g/kg BW (540 g at 500 kg): table — Kellon's open 400 kg mare needs 432 g = 1.08 × 400.
+    crudeProteinGPerKgBw: 1.08,
+    // Same Ca/P as average maintenance: table — Kellon 400 kg open mare Ca 16 g = 0.04 × 400, P 11.2 g = 0.028 × 400.
+    calciumGPerKgBw: 0.04,
+    phosphorusGPerKgBw: 0.028,
+    dmiFractionOfBw: MATURE_DMI,
+    source: `${NRC}: minimum maintenance, DE 0.0303·BW Mcal (table), CP 1.08 g/kg BW (table), Ca 0.04 g/kg, P 0.028 g/kg (table)`,
+  },
+  'elevated-maintenance': {
+    deMcalPerKgBw: ELEVATED_MAINTENANCE_DE_MCAL_PER_KG,
+    // 1.44 g/kg BW (720 g at 500 kg): memory.
+    crudeProteinGPerKgBw: 1.44,
+    calciumGPerKgBw: 0.04, // memory (same as average maintenance)
+    phosphorusGPerKgBw: 0.028, // memory
+    dmiFractionOfBw: MATURE_DMI,
+    source: `${NRC}: elevated maintenance, DE 0.0363·BW Mcal (table), CP 1.44 g/kg BW, Ca 0.04 g/kg, P 0.028 g/kg (from memory)`,
+  },
   maintenance: {
     deMcalPerKgBw: MAINTENANCE_DE_MCAL_PER_KG,
     // 630 g at 500 kg — verified (hoofrehab.com NRC quick glance: 630–699 g average-to-light work).
@@ -92,24 +112,5 @@ export const MATURE_COEFFICIENTS: Readonly<Record<MatureHorseClass, MatureCoeffi
     phosphorusGPerKgBw: 29 / 500, // memory
     dmiFractionOfBw: MATURE_DMI,
     source: `${NRC}: very heavy work, DE 0.0363·BW × 1.9; CP 1,004 g per 500 kg (CP from memory)`,
-  },
-  'late-gestation': {
-    // Month 11, 500 kg mare: DE 19.7 Mcal, CP 893 g, Ca 36.0 g, P 26.3 g — memory (NRC 2007 Table 16-3).
-    deMcalPerKgBw: 19.7 / 500,
-    crudeProteinGPerKgBw: 893 / 500,
-    calciumGPerKgBw: 36.0 / 500,
-    phosphorusGPerKgBw: 26.3 / 500,
-    dmiFractionOfBw: MATURE_DMI,
-    source: `${NRC}: gestation month 11, 500 kg row scaled by body weight (DE 19.7 Mcal, CP 893 g; from memory)`,
-  },
-  lactation: {
-    // Month 1, 500 kg mare: DE 31.7 Mcal, CP 1,535 g, Ca 59.1 g, P 38.3 g — memory (NRC 2007 Table 16-3).
-    deMcalPerKgBw: 31.7 / 500,
-    crudeProteinGPerKgBw: 1535 / 500,
-    calciumGPerKgBw: 59.1 / 500,
-    phosphorusGPerKgBw: 38.3 / 500,
-    // Mares in early lactation eat 2–3 % BW (practice; Poulin Grain, Ark Country Store guides).
-    dmiFractionOfBw: { min: 0.02, typical: 0.025, max: 0.03 },
-    source: `${NRC}: lactation month 1, 500 kg row scaled by body weight (DE 31.7 Mcal, CP 1,535 g; from memory)`,
   },
 };

@@ -15,6 +15,8 @@ export const HorseGroupSchema = z
     class: HorseClassSchema,
     /** Required for `growing`, months (4–24). */
     ageMonths: z.number().optional(),
+    /** Month of gestation (1–11, required for `gestation`) or lactation (1–6, optional for `lactation`). */
+    month: z.number().optional(),
   })
   .strict();
 
@@ -168,9 +170,12 @@ export interface HerdNeedsPlan {
 
 function toRequirementsRequest(group: HorseGroup) {
   const bodyWeightKg = group.weightUnit === 'kg' ? group.bodyWeight : lbToKg(group.bodyWeight);
-  return group.ageMonths === undefined
-    ? { bodyWeightKg, class: group.class }
-    : { bodyWeightKg, class: group.class, ageMonths: group.ageMonths };
+  return {
+    bodyWeightKg,
+    class: group.class,
+    ...(group.ageMonths === undefined ? {} : { ageMonths: group.ageMonths }),
+    ...(group.month === undefined ? {} : { month: group.month }),
+  };
 }
 
 /**

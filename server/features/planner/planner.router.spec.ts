@@ -36,10 +36,28 @@ describe('planner API', () => {
       expect(rows.map((r) => Math.round(r.body.crudeProteinGPerDay))).toEqual([768, 862, 1004]);
     });
 
-    it('500 kg mare: gestation month 11 DE 19.7 Mcal, CP 893 g; lactation month 1 DE 31.7 Mcal, CP 1,535 g (NRC 2007 Table 16-3, from memory)', async () => {
+    it('500 kg at minimum maintenance: DE 15.2 Mcal a day (NRC 2007 via hoofrehab.com quick glance, 15.2–18.2 Mcal)', async () => {
+      const res = await ask({ bodyWeightKg: 500, class: 'minimum-maintenance' });
+      expect(res.status).toBe(200);
+      expect(Math.round(res.body.deMcalPerDay * 10) / 10).toBe(15.2);
+    });
+
+    it('500 kg mare at gestation month 6 and lactation month 3: 17.4 Mcal / 704 g (Thunes; NRC 2007 rows quoted) and 30.6 Mcal (memory)', async () => {
+      const gestation = await ask({ bodyWeightKg: 500, class: 'gestation', month: 6 });
+      const lactation = await ask({ bodyWeightKg: 500, class: 'lactation', month: 3 });
+      expect(gestation.status).toBe(200);
+      expect(Math.round(gestation.body.deMcalPerDay * 10) / 10).toBe(17.4);
+      expect(Math.round(gestation.body.crudeProteinGPerDay)).toBe(704);
+      expect(Math.round(lactation.body.deMcalPerDay * 10) / 10).toBe(30.6);
+      expect(lactation.body.source).toMatch(/lactation month 3/);
+      const missing = await ask({ bodyWeightKg: 500, class: 'gestation' });
+      expect(missing.status).toBe(400);
+    });
+
+    it('500 kg mare: gestation month 11 DE 21.4 Mcal (Thunes, from NRC 2007), CP 893 g; lactation month 1 DE 31.7 Mcal (memory), CP 1,535 g (NRC 2007 rows quoted)', async () => {
       const gestation = await ask({ bodyWeightKg: 500, class: 'late-gestation' });
       const lactation = await ask({ bodyWeightKg: 500, class: 'lactation' });
-      expect(gestation.body.deMcalPerDay).toBeCloseTo(19.7, 6);
+      expect(gestation.body.deMcalPerDay).toBeCloseTo(21.4, 6);
       expect(gestation.body.crudeProteinGPerDay).toBeCloseTo(893, 6);
       expect(lactation.body.deMcalPerDay).toBeCloseTo(31.7, 6);
       expect(lactation.body.crudeProteinGPerDay).toBeCloseTo(1535, 6);

@@ -9,21 +9,25 @@ export interface GroupDraft {
   weightUnit: 'lb' | 'kg';
   class: HorseClass;
   ageMonths: number | null;
+  /** Month of gestation (1–11) or lactation (1–6). */
+  month: number | null;
 }
 
 export const HORSE_CLASS_OPTIONS: { value: HorseClass; label: string }[] = [
+  { value: 'minimum-maintenance', label: 'Maintenance, easy keeper (minimum)' },
   { value: 'maintenance', label: 'Maintenance (idle or retired)' },
+  { value: 'elevated-maintenance', label: 'Maintenance, hard keeper (elevated)' },
   { value: 'light-work', label: 'Light work (1–3 h a week)' },
   { value: 'moderate-work', label: 'Moderate work (3–5 h a week)' },
   { value: 'heavy-work', label: 'Heavy work (4–5 h a week, some speed)' },
   { value: 'very-heavy-work', label: 'Very heavy work (racing, elite endurance)' },
-  { value: 'late-gestation', label: 'Mare, late gestation (month 11)' },
-  { value: 'lactation', label: 'Mare, early lactation (month 1)' },
+  { value: 'gestation', label: 'Mare in foal (choose the month)' },
+  { value: 'lactation', label: 'Mare nursing a foal (choose the month)' },
   { value: 'growing', label: 'Growing (4–24 months)' },
 ];
 
 export function newGroup(): GroupDraft {
-  return { count: 1, bodyWeight: 1100, weightUnit: 'lb', class: 'maintenance', ageMonths: null };
+  return { count: 1, bodyWeight: 1100, weightUnit: 'lb', class: 'maintenance', ageMonths: null, month: null };
 }
 
 /** The shared planner's request from the form; blanks become NaN so the schema names the field. */
@@ -41,6 +45,7 @@ export function herdRequest(
       weightUnit: g.weightUnit,
       class: g.class,
       ...(g.class === 'growing' ? { ageMonths: n(g.ageMonths) } : {}),
+      ...(g.class === 'gestation' || g.class === 'lactation' ? { month: g.month === null || g.month === undefined ? (g.class === 'lactation' ? 1 : Number.NaN) : n(g.month) } : {}),
     })),
     days: n(days),
     feedingMethod,
@@ -54,6 +59,7 @@ export function fieldName(path: readonly PropertyKey[]): string {
     count: 'number of horses',
     bodyWeight: 'body weight',
     ageMonths: 'age',
+    month: 'month',
     class: 'class',
     days: 'days to cover',
     hayShareOfDiet: 'hay share of the diet',
