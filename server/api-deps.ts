@@ -1,5 +1,5 @@
 import type Stripe from 'stripe';
-import type { Mailer } from './adapters/mail/mailer';
+import type { Jobs } from './adapters/queue/jobs';
 import type { FileStorage } from './adapters/storage/file-storage';
 import type { Clock } from './clock';
 import type { Db } from './db/client';
@@ -14,7 +14,8 @@ export interface ApiDeps {
   env: Env;
   db: Db;
   logger: Logger;
-  mailer: Mailer;
+  /** Background jobs and the e-mail outbox: requests enqueue, they never talk to SMTP. */
+  jobs: Jobs;
   storage: FileStorage;
   stripe: Stripe;
   /** The current time for every service (a fixed clock in tests). */

@@ -47,6 +47,8 @@ app.use((req, res, next) => {
 
 if (isMainModule(import.meta.url) || process.env['pm_id']) {
   const port = deps.env.PORT;
+  // The job queue (e-mail outbox) creates its tables on first start and works in the background.
+  deps.jobs.start().catch((err) => deps.logger.error({ err }, 'job queue did not start; jobs wait in the database'));
   const server = app.listen(port, '127.0.0.1', (error) => {
     if (error) throw error;
     deps.logger.info(`Baleproof listening on http://127.0.0.1:${port}`);
@@ -54,7 +56,11 @@ if (isMainModule(import.meta.url) || process.env['pm_id']) {
   const shutdown = (signal: string) => {
     deps.logger.info({ signal }, 'shutting down');
     server.close(() => {
-      deps.db.$client.end().finally(() => process.exit(0));
+      deps.jobs
+        .stop()
+        .catch((err) => deps.logger.error({ err }, 'job queue did not stop cleanly'))
+        .then(() => deps.db.$client.end())
+        .finally(() => process.exit(0));
     });
     // Keep-alive sockets would hold close() open; give in-flight requests a moment, then go.
     setTimeout(() => process.exit(0), 5000).unref();

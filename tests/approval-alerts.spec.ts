@@ -45,6 +45,8 @@ describe('approving a lot alerts matching saved searches', () => {
     const admin = await signedInUser(t, 'admin');
     const before = new Set((await caughtMails()).map((m) => m.id));
     expect((await admin.agent.post(`/review/lots/${lotId}/approve`)).status).toBe(200);
+    // The outbox holds the e-mails until its jobs run (workers are off in tests).
+    await t.drainJobs();
 
     // The grower's approval notice, as it arrived over SMTP.
     const listed = await waitForMail(grower.email, `Listed: ${title}`);

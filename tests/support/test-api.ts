@@ -5,7 +5,9 @@ import { join } from 'node:path';
 import Stripe from 'stripe';
 import request from 'supertest';
 import { createStripeFake } from '../../docker-local-fakes/stripe/stripe-fake';
-import { createSmtpMailer, type OutgoingMail } from '../../server/adapters/mail/mailer';
+import { sql } from 'drizzle-orm';
+import { createSmtpMailer, type Mailer, type OutgoingMail } from '../../server/adapters/mail/mailer';
+import { createJobs } from '../../server/adapters/queue/jobs';
 import { createLocalStorage } from '../../server/adapters/storage/file-storage';
 import { createApi } from '../../server/api';
 import type { ApiDeps } from '../../server/api-deps';
@@ -16,7 +18,8 @@ import { testClock } from './test-clock';
 
 /**
  * The real API against the migrated test database (TEST_DATABASE_URL, prepared by `npm test`),
- * with a capturing mailer, a temporary upload folder and the Stripe fake on a free port.
+ * with the real job queue (no background workers: tests drain it) delivering to a capturing mailer,
+ * a temporary upload folder and the Stripe fake on a free port.
  * With `smtp: true` mail goes out through SMTP to the mail catcher instead (SMTP_URL, set by `npm test`
  * or the Jest global setup); read it back with e2e/support/mail-catcher.ts.
  */
@@ -31,20 +34,40 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
   const mails: OutgoingMail[] = [];
   const clock = testClock();
   const uploadDir = mkdtempSync(join(tmpdir(), 'baleproof-test-'));
+  /** The capturing mailer's SMTP: `smtp.down = true` makes every send fail, as an unreachable relay would. */
+  const smtp = { down: false };
+  const db = createDb(url, 4);
+  const logger = createLogger('silent');
+  // Each test API gets its own queue schema, so parallel test files never run each other's jobs.
+  const queueSchema = `pgboss_test_${process.pid}_${++apiCounter}`;
+  const smtpMailer = options.smtp ? createSmtpMailer(smtpUrl(), env.MAIL_FROM) : null;
+  const mailer: Mailer = {
+    send: async (mail) => {
+      if (smtp.down) throw new Error('connect ECONNREFUSED (test SMTP is down)');
+      if (smtpMailer) await smtpMailer.send(mail);
+      else mails.push(mail);
+    },
+  };
+  const jobs = createJobs({ pool: db.$client, logger, mailer, schema: queueSchema, workers: false });
   const deps: ApiDeps = {
     env,
-    db: createDb(url, 4),
-    logger: createLogger('silent'),
-    mailer: options.smtp ? createSmtpMailer(smtpUrl(), env.MAIL_FROM) : { send: async (mail) => void mails.push(mail) },
+    db,
+    logger,
+    jobs,
     storage: createLocalStorage(uploadDir),
     clock,
     stripe: new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: stripePort, protocol: 'http', maxNetworkRetries: 0, telemetry: false }),
   };
+  // The queue starts (and installs its schema) on first use, so tests that send nothing pay nothing.
   const api = createApi(deps);
   return {
     api,
     deps,
+    /** E-mails the outbox has delivered; call `drainJobs()` first (jobs run only when drained in tests). */
     mails,
+    smtp,
+    /** Runs the queued jobs (e-mails, …) now; `{ includeDelayed: true }` also runs those waiting out a retry delay. */
+    drainJobs: (options?: { includeDelayed?: boolean }) => jobs.drain(options),
     /** The fixed clock the API runs on (TEST_NOW); `clock.set(...)` lets time pass. */
     clock,
     /** The storage folder behind `deps.storage` (one per test API). */
@@ -52,6 +75,8 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
     /** A supertest agent that keeps cookies and sends the CSRF header like the Angular app does. */
     agent: () => csrfAgent(api),
     close: async () => {
+      await jobs.stop();
+      await db.execute(sql.raw(`drop schema if exists ${queueSchema} cascade`));
       await deps.db.$client.end();
       await new Promise((resolve) => stripeServer.close(resolve));
     },
@@ -63,6 +88,8 @@ function smtpUrl(): string {
   if (!url) throw new Error('SMTP_URL is not set: the Jest global setup (tests/mail-catcher-setup.cjs) starts the mail catcher.');
   return url;
 }
+
+let apiCounter = 0;
 
 export type TestApi = Awaited<ReturnType<typeof startTestApi>>;
 

@@ -1,13 +1,20 @@
 import nodemailer from 'nodemailer';
+import { z } from 'zod';
 
-export interface OutgoingMail {
-  to: string;
-  subject: string;
-  text: string;
-  html?: string;
-}
+/** An e-mail as stored in the outbox (plain JSON) and handed to SMTP. */
+export const OutgoingMailSchema = z.object({
+  to: z.string().email(),
+  subject: z.string().min(1),
+  text: z.string(),
+  html: z.string().optional(),
+});
 
-/** Sends e-mail. Locally SMTP_URL points at the maildev catcher; in production at a real relay. */
+export type OutgoingMail = z.infer<typeof OutgoingMailSchema>;
+
+/**
+ * Sends e-mail. Locally SMTP_URL points at the maildev catcher; in production at a real relay.
+ * Only the outbox worker calls it (server/adapters/queue/jobs.ts): requests enqueue instead.
+ */
 export interface Mailer {
   send(mail: OutgoingMail): Promise<void>;
 }

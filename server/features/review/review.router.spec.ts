@@ -55,6 +55,7 @@ describe('review API', () => {
     expect(pub.status).toBe(200);
     expect(pub.body.analysis.verification).toBe('verified');
     expect(pub.body.publishedAt).not.toBeNull();
+    await t.drainJobs();
     expect(t.mails.find((m) => m.to === grower.email && m.subject.startsWith('Listed:'))).toBeDefined();
     const audit = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, String(id)), eq(auditEvents.action, 'lot.approved')));
     expect(audit).toHaveLength(1);
@@ -68,6 +69,7 @@ describe('review API', () => {
     const reason = 'The report shows ADF 31.0, not 29.0. Please correct it.';
     const res = await admin.agent.post(`/review/lots/${id}/return`, { reason });
     expect(res.body.lot).toMatchObject({ status: 'returned', reviewNote: reason });
+    await t.drainJobs();
     expect(t.mails.find((m) => m.to === grower.email && m.text.includes(reason))).toBeDefined();
     const audit = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, String(id)), eq(auditEvents.action, 'lot.returned')));
     expect(audit[0]!.data).toEqual({ reason });

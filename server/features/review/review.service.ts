@@ -2,6 +2,7 @@ import { and, asc, desc, eq, sql } from 'drizzle-orm';
 import type { ReviewLotView, ReviewQueueRow } from '@shared/contracts/selling';
 import { approvedStatus, requireLotTransition } from '@shared/lifecycle/lot-lifecycle';
 import type { ApiDeps } from '../../api-deps';
+import type { OutgoingMail } from '../../adapters/mail/mailer';
 import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';
 import { findLotWithFarm } from '../selling/lot-access';
@@ -69,7 +70,7 @@ export class ReviewService {
   }
 
   async approve(admin: Express.User, lotId: number): Promise<void> {
-    const { db, mailer, env, logger } = this.deps;
+    const { db, env } = this.deps;
     const { lot, farm } = await findLotWithFarm(db, lotId);
     const next = approvedStatus(lot.status, lot.balesAvailable);
     const view = await editableLot(db, lotId, this.deps.clock);
@@ -86,12 +87,12 @@ export class ReviewService {
         .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
       await tx.insert(auditEvents).values({ actorId: admin.id, action: 'lot.approved', entityType: 'lot', entityId: String(lotId), data: { title: lot.title } });
     });
-    await this.mailGrower(farm.ownerId, (to) => approvedMail(to, lot, env.PUBLIC_URL)).catch((err) => logger.error({ err, lotId }, 'approval e-mail failed'));
+    await this.mailGrower(farm.ownerId, (to) => approvedMail(to, lot, env.PUBLIC_URL));
     await onLotApproved(this.deps, lotId);
   }
 
   async returnToGrower(admin: Express.User, lotId: number, reason: string): Promise<void> {
-    const { db, env, logger } = this.deps;
+    const { db, env } = this.deps;
     const { lot, farm } = await findLotWithFarm(db, lotId);
     const next = requireLotTransition(lot.status, 'return', 'admin');
     const now = this.deps.clock.now();
@@ -103,11 +104,12 @@ export class ReviewService {
         .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
       await tx.insert(auditEvents).values({ actorId: admin.id, action: 'lot.returned', entityType: 'lot', entityId: String(lotId), data: { reason } });
     });
-    await this.mailGrower(farm.ownerId, (to) => returnedMail(to, lot, reason, env.PUBLIC_URL)).catch((err) => logger.error({ err, lotId }, 'return e-mail failed'));
+    await this.mailGrower(farm.ownerId, (to) => returnedMail(to, lot, reason, env.PUBLIC_URL));
   }
 
-  private async mailGrower(ownerId: number, make: (to: string) => Parameters<ApiDeps['mailer']['send']>[0]): Promise<void> {
+  /** Puts the grower's e-mail in the outbox (sent and retried in the background). */
+  private async mailGrower(ownerId: number, make: (to: string) => OutgoingMail): Promise<void> {
     const [owner] = await this.deps.db.select({ email: users.email }).from(users).where(eq(users.id, ownerId));
-    if (owner) await this.deps.mailer.send(make(owner.email));
+    if (owner) await this.deps.jobs.enqueueMail(make(owner.email));
   }
 }

@@ -16,8 +16,8 @@ export interface AlertOutcome {
  * narrowed to this lot, so an alert means the buyer would see the lot in that search.
  * A stored query that no longer parses (the catalogue changed) is skipped, not fatal.
  */
-export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'mailer' | 'env' | 'logger' | 'clock'>, lotId: number): Promise<AlertOutcome> {
-  const { db, mailer, env, logger } = deps;
+export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' | 'logger' | 'clock'>, lotId: number): Promise<AlertOutcome> {
+  const { db, jobs, env, logger } = deps;
   const lotsService = new LotsService(db);
   const candidates = await db
     .select({ search: savedSearches, email: users.email, displayName: users.displayName })
@@ -35,7 +35,7 @@ export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'mailer' | '
     const { items } = await lotsService.search(query.data, { lotIds: [lotId] });
     const lot = items[0];
     if (!lot) continue;
-    await mailer.send({ to: email, ...alertMail(displayName, search.name, search.query, lot, env.PUBLIC_URL) });
+    await jobs.enqueueMail({ to: email, ...alertMail(displayName, search.name, search.query, lot, env.PUBLIC_URL) });
     await db.update(savedSearches).set({ lastAlertedAt: deps.clock.now() }).where(eq(savedSearches.id, search.id));
     alerted.push(search.id);
   }

@@ -70,6 +70,7 @@ describe('saved searches', () => {
       t.mails.length = 0;
 
       const outcome = await alertSavedSearches(t.deps, lot.id);
+      await t.drainJobs();
 
       // Other tests' searches may match too (a blank query matches every lot); ours must be exactly right.
       const missedId = (await missed.agent.get('/saved-searches')).body.items[0].id;
@@ -94,6 +95,7 @@ describe('saved searches', () => {
       const lot = await createLot(t.deps.db, grower.farm.id, { title: `${tag} pending`, status: 'in_review' });
       t.mails.length = 0;
       expect((await alertSavedSearches(t.deps, lot.id)).alerted).toEqual([]);
+      await t.drainJobs();
       expect(t.mails.filter((m) => m.to === buyer.email)).toEqual([]);
     });
   });
