@@ -149,9 +149,14 @@ export interface LotSummary {
   publishedAt: string | null;
 }
 
+/** A catalogue search counts matching lots exactly up to this many; beyond, it says "more than". */
+export const SEARCH_TOTAL_CAP = 1000;
+
 export interface LotSearchResult {
   items: LotSummary[];
+  /** Matching lots, exact when `totalCapped` is false; otherwise SEARCH_TOTAL_CAP and more match. */
   total: number;
+  totalCapped: boolean;
   page: number;
   pageSize: number;
   /** Set when a ZIP was given: where distances are measured from. */

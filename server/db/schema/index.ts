@@ -16,3 +16,4 @@ export * from './payouts';
 export * from './audit-events';
 export * from './saved-searches';
 export * from './platform-settings';
+export * from './lot-search';

@@ -1,9 +1,9 @@
 import { and, asc, desc, eq, gte, inArray, lte, sql, type SQL } from 'drizzle-orm';
-import type { LotDetail, LotSearch, LotSearchResult, LotSummary, PhotoView } from '@shared/contracts/lots';
+import { SEARCH_TOTAL_CAP, type LotDetail, type LotSearch, type LotSearchResult, type LotSummary, type PhotoView } from '@shared/contracts/lots';
 import { mayViewLot } from '@shared/lifecycle/lot-lifecycle';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
-import { farms, labAnalyses, lots, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
+import { farms, labAnalyses, lots, lotSearch, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { farmDistanceSql, farmWithinSql, locateZip } from '../geo/geo';
 import { evaluationOf } from '../selling/analysis-values';
 import { samplingFactsOf, samplingReportOf } from './sampling-report';
@@ -23,47 +23,50 @@ export class LotsService {
   constructor(private readonly db: Db) {}
 
   /**
-   * Public catalogue: listed lots with a current analysis, filtered and sorted in SQL.
+   * Public catalogue: listed lots in stock with a current analysis, filtered and sorted in SQL on their
+   * search rows (`lot_search`, kept in step by triggers), then joined to the lot, farm and analysis for the
+   * page. The total is exact up to {@link SEARCH_TOTAL_CAP}; beyond it the result says "more than".
    * `scope.lotIds` narrows the search to those lots (saved-search alerts ask "does this new lot match?").
    */
   async search(query: LotSearch, scope: { lotIds?: readonly number[] } = {}): Promise<LotSearchResult> {
+    const s = lotSearch;
     const origin = query.zip ? locateZip(query.zip) : null;
-    const distance = origin ? farmDistanceSql(origin) : null;
-    const tonsAvailable = sql<number>`(${lots.balesAvailable} * ${lots.avgBaleWeightLb} / 2000.0)`;
-    const pricePerDmTon = sql<number>`(${lots.priceCentsPerTon} / (${labAnalyses.dryMatterPct} / 100.0))`;
+    const distance = origin ? farmDistanceSql(origin, s) : null;
 
-    const where: SQL[] = [eq(lots.status, 'listed'), sql`${lots.balesAvailable} > 0`];
+    const where: SQL[] = [];
     const add = (cond: SQL | undefined) => cond && where.push(cond);
-    if (scope.lotIds) add(inArray(lots.id, [...scope.lotIds]));
-    if (query.q) add(sql`(${lots.title} ilike ${'%' + query.q + '%'} or ${farms.name} ilike ${'%' + query.q + '%'})`);
-    if (query.rfvMin !== undefined) add(gte(labAnalyses.rfv, query.rfvMin));
-    if (query.rfvMax !== undefined) add(lte(labAnalyses.rfv, query.rfvMax));
-    if (query.rfqMin !== undefined) add(gte(labAnalyses.rfq, query.rfqMin));
-    if (query.cpMin !== undefined) add(gte(labAnalyses.crudeProteinPct, query.cpMin));
-    if (query.cpMax !== undefined) add(lte(labAnalyses.crudeProteinPct, query.cpMax));
-    if (query.adfMax !== undefined) add(lte(labAnalyses.adfPct, query.adfMax));
-    if (query.ndfMax !== undefined) add(lte(labAnalyses.ndfPct, query.ndfMax));
-    if (query.nscMax !== undefined) add(lte(labAnalyses.nscPct, query.nscMax));
-    if (query.forageType) add(eq(lots.forageType, query.forageType));
-    if (query.baleType) add(eq(lots.baleType, query.baleType));
-    if (query.cutting !== undefined) add(eq(lots.cutting, query.cutting));
-    if (query.harvestYear !== undefined) add(sql`extract(year from ${lots.harvestStartedOn}) = ${query.harvestYear}`);
-    if (query.priceMax !== undefined) add(lte(lots.priceCentsPerTon, Math.round(query.priceMax * 100)));
-    if (query.tonsMin !== undefined) add(sql`${tonsAvailable} >= ${query.tonsMin}::float8`);
-    if (query.compliantOnly) add(eq(samplingRecords.compliant, true));
-    if (query.verifiedOnly) add(and(eq(labAnalyses.verification, 'verified'), eq(labAnalyses.labCertified, true)));
-    if (origin && query.radiusMi !== undefined) add(farmWithinSql(origin, query.radiusMi));
+    if (scope.lotIds) add(inArray(s.lotId, [...scope.lotIds]));
+    if (query.q) add(sql`(${s.title} ilike ${'%' + query.q + '%'} or ${s.farmName} ilike ${'%' + query.q + '%'})`);
+    if (query.rfvMin !== undefined) add(gte(s.rfv, query.rfvMin));
+    if (query.rfvMax !== undefined) add(lte(s.rfv, query.rfvMax));
+    if (query.rfqMin !== undefined) add(gte(s.rfq, query.rfqMin));
+    if (query.cpMin !== undefined) add(gte(s.crudeProteinPct, query.cpMin));
+    if (query.cpMax !== undefined) add(lte(s.crudeProteinPct, query.cpMax));
+    if (query.adfMax !== undefined) add(lte(s.adfPct, query.adfMax));
+    if (query.ndfMax !== undefined) add(lte(s.ndfPct, query.ndfMax));
+    if (query.nscMax !== undefined) add(lte(s.nscPct, query.nscMax));
+    if (query.forageType) add(eq(s.forageType, query.forageType));
+    if (query.baleType) add(eq(s.baleType, query.baleType));
+    if (query.cutting !== undefined) add(eq(s.cutting, query.cutting));
+    if (query.harvestYear !== undefined) add(eq(s.harvestYear, query.harvestYear));
+    if (query.priceMax !== undefined) add(lte(s.priceCentsPerTon, Math.round(query.priceMax * 100)));
+    if (query.tonsMin !== undefined) add(sql`${s.tonsAvailable} >= ${query.tonsMin}::float8`);
+    if (query.compliantOnly) add(eq(s.samplingCompliant, true));
+    if (query.verifiedOnly) add(eq(s.labVerified, true));
+    if (origin && query.radiusMi !== undefined) add(farmWithinSql(origin, query.radiusMi, undefined, s));
 
+    // Each order matches an index on lot_search, newest ties broken by the higher lot id.
     const order: SQL[] = {
-      newest: [desc(lots.publishedAt)],
-      price: [asc(lots.priceCentsPerTon)],
-      price_dm: [asc(pricePerDmTon)],
-      rfv: [desc(labAnalyses.rfv)],
-      protein: [desc(labAnalyses.crudeProteinPct)],
+      newest: [sql`${s.publishedAt} desc nulls first`],
+      price: [asc(s.priceCentsPerTon)],
+      price_dm: [asc(s.priceCentsPerDmTon)],
+      rfv: [sql`${s.rfv} desc nulls last`],
+      protein: [sql`${s.crudeProteinPct} desc nulls last`],
       distance: distance ? [asc(distance)] : [],
     }[query.sort];
 
-    const base = this.db
+    const offset = (query.page - 1) * query.pageSize;
+    const rows = await this.db
       .select({
         id: lots.id,
         title: lots.title,
@@ -76,10 +79,10 @@ export class LotsService {
         baleType: lots.baleType,
         avgBaleWeightLb: lots.avgBaleWeightLb,
         balesAvailable: lots.balesAvailable,
-        tonsAvailable,
+        tonsAvailable: s.tonsAvailable,
         priceCentsPerTon: lots.priceCentsPerTon,
-        priceCentsPerDmTon: pricePerDmTon,
-        harvestYear: sql<number>`extract(year from ${lots.harvestStartedOn})::int`,
+        priceCentsPerDmTon: s.priceCentsPerDmTon,
+        harvestYear: s.harvestYear,
         dryMatterPct: labAnalyses.dryMatterPct,
         rfv: labAnalyses.rfv,
         rfq: labAnalyses.rfq,
@@ -88,29 +91,28 @@ export class LotsService {
         ndfPct: labAnalyses.ndfPct,
         nscPct: labAnalyses.nscPct,
         usdaGrade: labAnalyses.usdaGrade,
-        samplingCompliant: sql<boolean>`coalesce(${samplingRecords.compliant}, false)`,
+        samplingCompliant: s.samplingCompliant,
         labCertified: labAnalyses.labCertified,
         analysisVerified: sql<boolean>`${labAnalyses.verification} = 'verified'`,
         distanceMi: distance ? sql<number>`${distance}` : sql<null>`null::float8`,
         publishedAt: lots.publishedAt,
-        total: sql<number>`count(*) over ()`.mapWith(Number),
       })
-      .from(lots)
+      .from(s)
+      .innerJoin(lots, eq(lots.id, s.lotId))
       .innerJoin(farms, eq(farms.id, lots.farmId))
       .innerJoin(labAnalyses, and(eq(labAnalyses.lotId, lots.id), eq(labAnalyses.isCurrent, true)))
-      .leftJoin(samplingRecords, eq(samplingRecords.lotId, lots.id))
       .where(and(...where))
-      .orderBy(...order, desc(lots.id))
+      .orderBy(...order, sql`${s.lotId} desc nulls last`)
       .limit(query.pageSize)
-      .offset((query.page - 1) * query.pageSize);
+      .offset(offset);
 
-    const rows = await base;
-    const total = rows[0]?.total ?? (query.page > 1 ? await this.countOnly(where) : 0);
+    // A short last page tells the total without counting; otherwise count, but stop past the cap.
+    const { total, totalCapped } =
+      rows.length > 0 && rows.length < query.pageSize ? { total: offset + rows.length, totalCapped: false } : await this.cappedCount(where);
     const covers = await this.coversFor(rows.map((r) => r.id));
-    const items: LotSummary[] = rows.map(({ total: _total, publishedAt, ...r }) => ({
+    const items: LotSummary[] = rows.map(({ publishedAt, ...r }) => ({
       ...r,
-      tonsAvailable: Number(r.tonsAvailable),
-      priceCentsPerDmTon: Math.round(Number(r.priceCentsPerDmTon)),
+      priceCentsPerDmTon: Math.round(r.priceCentsPerDmTon),
       distanceMi: r.distanceMi === null ? null : Number(r.distanceMi),
       cover: covers.get(r.id) ?? null,
       publishedAt: publishedAt ? publishedAt.toISOString() : null,
@@ -118,21 +120,19 @@ export class LotsService {
     return {
       items,
       total,
+      totalCapped,
       page: query.page,
       pageSize: query.pageSize,
       origin: origin ? { zip: origin.zip, city: origin.city, state: origin.state } : null,
     };
   }
 
-  private async countOnly(where: SQL[]): Promise<number> {
-    const [row] = await this.db
-      .select({ n: sql<number>`count(*)`.mapWith(Number) })
-      .from(lots)
-      .innerJoin(farms, eq(farms.id, lots.farmId))
-      .innerJoin(labAnalyses, and(eq(labAnalyses.lotId, lots.id), eq(labAnalyses.isCurrent, true)))
-      .leftJoin(samplingRecords, eq(samplingRecords.lotId, lots.id))
-      .where(and(...where));
-    return row?.n ?? 0;
+  /** How many search rows match, exact up to SEARCH_TOTAL_CAP; reading stops one row past it. */
+  private async cappedCount(where: SQL[]): Promise<{ total: number; totalCapped: boolean }> {
+    const matching = this.db.select({ one: sql`1` }).from(lotSearch).where(and(...where)).limit(SEARCH_TOTAL_CAP + 1).as('matching');
+    const [row] = await this.db.select({ n: sql<number>`count(*)`.mapWith(Number) }).from(matching);
+    const n = row?.n ?? 0;
+    return n > SEARCH_TOTAL_CAP ? { total: SEARCH_TOTAL_CAP, totalCapped: true } : { total: n, totalCapped: false };
   }
 
   /** The cover photo of each lot (the marked cover, else the first by position). */
