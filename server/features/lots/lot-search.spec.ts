@@ -127,11 +127,25 @@ describe('catalogue search against a plain reference', () => {
   });
 
   it(`counts exactly up to ${SEARCH_TOTAL_CAP} and says "more than" beyond (common practice for large result sets)`, async () => {
-    const all = await service.search(LotSearchSchema.parse({}));
-    const [{ n }] = (await db.execute(sql`select count(*)::int as n from lots l join lab_analyses a on a.lot_id = l.id and a.is_current
-      where l.status = 'listed' and l.bales_available > 0`)).rows as [{ n: number }];
-    expect(all.totalCapped).toBe(n > SEARCH_TOTAL_CAP);
-    expect(all.total).toBe(Math.min(n, SEARCH_TOTAL_CAP));
+    // Many more lots under a second tag, made set-based: each a copy of one of the varied lots above.
+    const many = `M${randomUUID().slice(0, 8)}`;
+    await db.execute(sql`insert into lots (farm_id, title, field_name, cutting, forage_type, forage_class, harvest_started_on, harvest_ended_on,
+        storage, bale_type, bale_count, bales_available, avg_bale_weight_lb, price_cents_per_ton, status, published_at)
+      select l.farm_id, ${many} || ' lot ' || g, l.field_name, l.cutting, l.forage_type, l.forage_class, l.harvest_started_on, l.harvest_ended_on,
+        l.storage, l.bale_type, l.bale_count, l.bale_count, l.avg_bale_weight_lb, l.price_cents_per_ton + g, 'listed', l.published_at
+      from generate_series(1, ${SEARCH_TOTAL_CAP + 20}) g, (select * from lots where title like ${tag + '%'} order by id limit 1) l`);
+    await db.execute(sql`insert into lab_analyses (lot_id, lab_name, lab_certified, report_date, dry_matter_pct, crude_protein_pct, adf_pct, ndf_pct,
+        rfv, tdn_pct, tdn_method, de_mcal_per_kg_dm, de_method, usda_grade, verification)
+      select l.id, a.lab_name, a.lab_certified, a.report_date, a.dry_matter_pct, a.crude_protein_pct - (l.id % 3), a.adf_pct, a.ndf_pct,
+        a.rfv, a.tdn_pct, a.tdn_method, a.de_mcal_per_kg_dm, a.de_method, a.usda_grade, a.verification
+      from lots l, (select * from lab_analyses where lot_id = (select min(id) from lots where title like ${tag + '%'}) and is_current) a
+      where l.title like ${many + '%'}`);
+    const all = await service.search(LotSearchSchema.parse({ q: many }));
+    expect(all).toMatchObject({ total: SEARCH_TOTAL_CAP, totalCapped: true });
+    // A filter that leaves about a third is counted exactly, and pages agree with the reference.
+    const [{ cp }] = (await db.execute(sql`select max(crude_protein_pct) as cp from lab_analyses a join lots l on l.id = a.lot_id where l.title like ${many + '%'}`)).rows as [{ cp: number }];
+    await expectSameAsReference(LotSearchSchema.parse({ q: many, cpMin: String(cp - 0.5), sort: 'price', page: '3' }));
+    expect((await service.search(LotSearchSchema.parse({ q: many, cpMin: String(cp - 0.5) }))).totalCapped).toBe(false);
   });
 
   /** The reference: plain joins over the source tables, filtered and ordered here rather than in SQL. */
@@ -142,11 +156,11 @@ describe('catalogue search against a plain reference', () => {
           a.dry_matter_pct, a.rfv, a.rfq, a.crude_protein_pct, a.adf_pct, a.ndf_pct, a.nsc_pct, a.verification, a.lab_certified, s.compliant
         from lots l join farms f on f.id = l.farm_id join lab_analyses a on a.lot_id = l.id and a.is_current
         left join sampling_records s on s.lot_id = l.id`)
-    ).rows as Record<string, never>[];
+    ).rows as unknown as ReferenceRow[];
     const origin = q.zip ? locateZip(q.zip) : null;
     const needle = q.q?.toLowerCase();
     const keep = rows
-      .map((r) => ({ ...(r as Record<string, any>), distance: origin ? haversineMiles({ lat: origin.latitude, lon: origin.longitude }, { lat: r['latitude'], lon: r['longitude'] }) : null }))
+      .map((r) => ({ ...r, distance: origin ? haversineMiles({ lat: origin.latitude, lon: origin.longitude }, { lat: r.latitude, lon: r.longitude }) : null }))
       .filter((r) =>
         r.status === 'listed' && r.bales_available > 0 &&
         (!needle || r.title.toLowerCase().includes(needle) || r.farm_name.toLowerCase().includes(needle)) &&
@@ -187,6 +201,33 @@ describe('catalogue search against a plain reference', () => {
     got.items.forEach((item, k) => (want.distances[k] === null ? expect(item.distanceMi).toBeNull() : expect(item.distanceMi).toBeCloseTo(want.distances[k]!, 6)));
   }
 });
+
+interface ReferenceRow {
+  id: number;
+  title: string;
+  farm_name: string;
+  status: string;
+  bales_available: number;
+  avg_bale_weight_lb: number;
+  price_cents_per_ton: number;
+  forage_type: string;
+  bale_type: string;
+  cutting: number;
+  harvest: string;
+  published_at: string | null;
+  latitude: number;
+  longitude: number;
+  dry_matter_pct: number;
+  rfv: number;
+  rfq: number | null;
+  crude_protein_pct: number;
+  adf_pct: number;
+  ndf_pct: number;
+  nsc_pct: number | null;
+  verification: string;
+  lab_certified: boolean;
+  compliant: boolean | null;
+}
 
 /** A small seeded PRNG (Mulberry32), so the varied data is the same on every run. */
 function mulberry32(seed: number): () => number {
