@@ -63,14 +63,16 @@ export const WASTE_ALLOWANCES: Readonly<Record<FeedingMethod, WasteAllowance>> =
     source: MARTINSON_2012,
   },
   'stall-feeder': {
-    wasteFraction: 0.01,
-    range: { min: 0.01, max: 0.013 },
+    // As published: 1.3 % (Martinson, UMN webcast "Reducing hay waste", 2011), not rounded.
+    wasteFraction: 0.013,
+    range: { min: 0.013, max: 0.013 },
     label: 'In a stall, from a feeder',
     source: UMN_STALL,
   },
   'stall-no-feeder': {
-    wasteFraction: 0.07,
-    range: { min: 0.07, max: 0.073 },
+    // As published: 7.3 % (same source), not rounded.
+    wasteFraction: 0.073,
+    range: { min: 0.073, max: 0.073 },
     label: 'In a stall, off the floor',
     source: UMN_STALL,
   },

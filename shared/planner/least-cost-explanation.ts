@@ -5,7 +5,7 @@
 
 import type { Solution } from 'yalps';
 import { type Cents, formatCents } from '../units/money';
-import { formatNumber } from '../units/rounding';
+import { formatNumber, roundTo } from '../units/rounding';
 import type { FreightModel, LeastCostPlan, ParsedLeastCostRequest, PlanLine } from './least-cost-contract';
 import type { LotYield } from './least-cost-model';
 
@@ -27,7 +27,7 @@ export function summarySentences(
   const freight = lines.reduce((sum, l) => sum + l.freightCents, 0);
   const hay = lines.reduce((sum, l) => sum + l.hayCents, 0);
   const { needs } = request;
-  const wasteNote = request.wasteFraction > 0 ? ` after ${formatNumber(request.wasteFraction * 100, 0)} % feeding waste` : '';
+  const wasteNote = request.wasteFraction > 0 ? ` after ${roundTo(request.wasteFraction * 100, 1)} % feeding waste` : '';
   return [
     `Buy ${tonsText(tons)} of hay from ${lines.length === 1 ? 'one lot' : `${lines.length} lots`} for ${formatCents(totalCostCents)} delivered (${formatCents(hay)} hay and ${formatCents(freight)} freight).`,
     `Eaten${wasteNote}, it supplies ${formatNumber(supplied.deMcal, 0)} Mcal of digestible energy (need ${formatNumber(needs.deMcal, 0)}) and ${formatNumber(supplied.crudeProteinKg, 0)} kg of crude protein (need ${formatNumber(needs.crudeProteinKg, 0)}), in ${formatNumber(supplied.dryMatterKg, 0)} kg of dry matter (the horses can eat up to ${formatNumber(needs.maxDryMatterKg, 0)} kg).`,

@@ -136,7 +136,7 @@ describe('planner API', () => {
     const herd = {
       groups: [{ count: 1, bodyWeight: 500, weightUnit: 'kg', class: 'maintenance' }],
       days: 100,
-      feedingMethod: 'stall-feeder', // 1 % waste (UMN, Martinson)
+      feedingMethod: 'stall-feeder', // 1.3 % waste (Martinson, UMN webcast 2011)
       hayShareOfDiet: 1,
     };
 
@@ -153,8 +153,8 @@ describe('planner API', () => {
       //   energy  2.0x + 2.4y ≥ 1665      protein 0.06x + 0.20y ≥ 63      cost 150x + 300y (per kg DM, ÷ k)
       // Grass alone needs x = 1,050 (cost 157,500/k); alfalfa alone y = 693.75 (208,125/k); where both bind,
       // x = 832.5 − 1.2y and 0.128y = 13.05 → y = 101.95, x = 710.16 (137,110/k): the cheapest vertex.
-      // Tons bought = kg DM ÷ k, with k = 907.2 kg × 90 % DM × (1 − 1 % waste).
-      const k = KG_PER_SHORT_TON * 0.9 * 0.99;
+      // Tons bought = kg DM ÷ k, with k = 907.2 kg × 90 % DM × (1 − 1.3 % waste).
+      const k = KG_PER_SHORT_TON * 0.9 * 0.987;
       const tons = (id: number) => body.lines.find((l: { lotId: number }) => l.lotId === id)?.tons;
       expect(body.plan.feasible).toBe(true);
       expect(tons(grass)).toBeCloseTo(710.156 / k, 2);
@@ -182,7 +182,7 @@ describe('planner API', () => {
         maxDistanceMi: 25,
       });
       // DE 0.0363 × 500 × 1.9 = 34.49 Mcal a day within 12.5 kg DM (2.5 % BW) needs 2.76 Mcal/kg DM eaten;
-      // the richest lot has 2.4 × 0.99 (waste), so no mix of these hays can do it.
+      // the richest lot has 2.4 × 0.987 (waste), so no mix of these hays can do it.
       expect(res.status).toBe(200);
       expect(res.body.plan.feasible).toBe(false);
       expect(res.body.plan.explanation.join(' ')).toMatch(/can eat at most/);
