@@ -10,6 +10,7 @@ import { authRouter, configurePassport } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
 import { adminRouter } from './features/admin/admin.router';
+import { adminPayoutsRouter, growerPayoutsRouter } from './features/payouts/payouts.router';
 import { forageRouter } from './features/forage/forage.router';
 import { farmsRouter } from './features/farms/farms.router';
 import { sellingRouter } from './features/selling/selling.router';
@@ -68,7 +69,9 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, issueCsrfCookie: csrf.issueCookie }));
   api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(deps));
+  api.use('/admin/payouts', adminPayoutsRouter(deps));
   api.use('/admin', adminRouter(deps));
+  api.use('/payouts', growerPayoutsRouter(deps));
   api.use('/forage', forageRouter());
   api.use('/farms', farmsRouter(deps));
   api.use('/selling', sellingRouter(deps));

@@ -1,0 +1,56 @@
+import { and, asc, eq, inArray, isNull, lte, notExists, or, sql } from 'drizzle-orm';
+import type { DueDeduction, DueOrderLine, GrowerPayoutDue } from '@shared/contracts/payouts';
+import type { DbOrTx } from '../audit/audit-log';
+import { farms, lots, orders, payoutAdjustments, payoutLines, users } from '../../db/schema';
+
+/** Why a grower's payout is held, in words; null when it can be sent. */
+export function heldReasonOf(farm: { payoutAccountId: string | null; payoutsEnabled: boolean }): string | null {
+  if (!farm.payoutAccountId) return 'The grower has not started payout set-up with the payment provider.';
+  if (!farm.payoutsEnabled) return 'The grower started payout set-up but has not finished it.';
+  return null;
+}
+
+/**
+ * What each grower is owed now: orders delivered and accepted (or past the acceptance date) that no
+ * payout has paid yet, net of refunds (the platform fee was paid by the buyer on top, and stays), less
+ * refunds made after an earlier payout.
+ */
+export async function payoutsDue(db: DbOrTx, now: Date, farmIds?: number[]): Promise<GrowerPayoutDue[]> {
+  const eligible = or(eq(orders.status, 'completed'), and(eq(orders.status, 'delivered'), lte(orders.acceptBy, now)));
+  const rows = await db
+    .select({ order: orders, lotTitle: lots.title })
+    .from(orders)
+    .innerJoin(lots, eq(lots.id, orders.lotId))
+    .where(and(eligible, farmIds ? inArray(orders.farmId, farmIds) : undefined, notExists(db.select({ one: sql`1` }).from(payoutLines).where(eq(payoutLines.orderId, orders.id)))))
+    .orderBy(asc(orders.farmId), asc(orders.id));
+  const adjustments = await db
+    .select()
+    .from(payoutAdjustments)
+    .where(and(isNull(payoutAdjustments.payoutId), farmIds ? inArray(payoutAdjustments.farmId, farmIds) : undefined))
+    .orderBy(asc(payoutAdjustments.id));
+
+  const ids = [...new Set([...rows.map((r) => r.order.farmId), ...adjustments.map((a) => a.farmId)])];
+  if (ids.length === 0) return [];
+  const farmRows = await db.select({ farm: farms, email: users.email }).from(farms).innerJoin(users, eq(users.id, farms.ownerId)).where(inArray(farms.id, ids));
+
+  return farmRows
+    .map(({ farm, email }) => {
+      const lines: DueOrderLine[] = rows
+        .filter((r) => r.order.farmId === farm.id)
+        .map(({ order, lotTitle }) => ({
+          orderId: order.id,
+          lotTitle,
+          deliveredAt: order.deliveredAt?.toISOString() ?? null,
+          goodsCents: order.goodsCents,
+          freightCents: order.freightCents,
+          platformFeeCents: order.platformFeeCents,
+          refundedCents: order.refundedCents,
+          amountCents: Math.max(0, order.goodsCents + order.freightCents - order.refundedCents),
+        }));
+      const deductions: DueDeduction[] = adjustments.filter((a) => a.farmId === farm.id).map((a) => ({ orderId: a.orderId, reason: a.reason, amountCents: a.amountCents }));
+      const totalCents = lines.reduce((s, l) => s + l.amountCents, 0) + deductions.reduce((s, d) => s + d.amountCents, 0);
+      const heldReason = heldReasonOf(farm);
+      return { farmId: farm.id, farmName: farm.name, growerEmail: email, ready: heldReason === null, heldReason, orders: lines, deductions, totalCents };
+    })
+    .sort((a, b) => a.farmName.localeCompare(b.farmName));
+}
