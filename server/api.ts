@@ -19,6 +19,7 @@ import { reviewRouter } from './features/review/review.router';
 import { lotCompareRouter } from './features/lots/lot-compare.router';
 import { plannerRouter } from './features/planner/planner.router';
 import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
+import { createOrderFeature, deliveryCalendarRouter, ordersRouter, paymentWebhookRouter } from './features/orders/orders.router';
 import { createCsrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 
@@ -58,6 +59,9 @@ export function createApi(deps: ApiDeps): Express {
     }),
   );
   api.use(helmet());
+  const orderFeature = createOrderFeature(deps);
+  // Verified on the raw bytes, so before the JSON parser; the provider holds no CSRF cookie.
+  api.use('/payments/webhook', paymentWebhookRouter(orderFeature));
   api.use(express.json({ limit: '200kb' }));
   api.use(createSessionMiddleware(deps));
   configurePassport(db);
@@ -79,6 +83,8 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/review', reviewRouter(deps));
   api.use('/planner', plannerRouter(db));
   api.use('/saved-searches', savedSearchesRouter(db));
+  api.use('/orders', ordersRouter(orderFeature));
+  api.use('/delivery-calendar', deliveryCalendarRouter(orderFeature));
 
   api.use(apiNotFound);
   api.use(errorHandler(logger));

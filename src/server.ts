@@ -10,6 +10,7 @@ import { join } from 'node:path';
 import { createApi } from '../server/api';
 import { createAppDeps } from '../server/app-deps';
 import { mediaRouter } from '../server/features/media/media.router';
+import { startOrderTimers } from '../server/features/orders/order-timers';
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 
@@ -53,6 +54,7 @@ if (isMainModule(import.meta.url) || process.env['pm_id']) {
     if (error) throw error;
     deps.logger.info(`Baleproof listening on http://127.0.0.1:${port}`);
   });
+  startOrderTimers(deps);
   const shutdown = (signal: string) => {
     deps.logger.info({ signal }, 'shutting down');
     server.close(() => {

@@ -16,6 +16,11 @@ const ALLOWED: ReadonlyArray<[OrderStatus, OrderEvent, Actor, OrderStatus]> = [
   // The grower confirms a date, then marks the load delivered or picked up.
   ['paid', 'schedule', 'grower', 'scheduled'],
   ['paid', 'schedule', 'admin', 'scheduled'],
+  ['paid', 'schedule', 'buyer', 'scheduled'],
+  // Moving an agreed date means agreeing again.
+  ['scheduled', 'reschedule', 'buyer', 'paid'],
+  ['scheduled', 'reschedule', 'grower', 'paid'],
+  ['scheduled', 'reschedule', 'admin', 'paid'],
   ['scheduled', 'deliver', 'grower', 'delivered'],
   ['scheduled', 'deliver', 'admin', 'delivered'],
   // The buyer accepts or reports a problem; silence accepts after the set number of days.
@@ -57,6 +62,7 @@ describe('order life-cycle', () => {
     expect(orderEventsFor('awaiting_payment', 'buyer')).toEqual(['cancel']);
     expect(orderEventsFor('delivered', 'buyer').sort()).toEqual(['accept', 'report_problem']);
     expect(orderEventsFor('paid', 'grower')).toEqual(['schedule']);
+    expect(orderEventsFor('scheduled', 'grower').sort()).toEqual(['deliver', 'reschedule']);
     expect(orderEventsFor('completed', 'admin')).toEqual([]);
   });
 

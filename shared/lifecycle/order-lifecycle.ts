@@ -17,7 +17,7 @@ export const ORDER_STATUSES = [
 ] as const;
 export type OrderStatus = (typeof ORDER_STATUSES)[number];
 
-export const ORDER_EVENTS = ['pay', 'cancel', 'decline', 'expire', 'schedule', 'deliver', 'accept', 'report_problem', 'settle_claim', 'refund'] as const;
+export const ORDER_EVENTS = ['pay', 'cancel', 'decline', 'expire', 'schedule', 'reschedule', 'deliver', 'accept', 'report_problem', 'settle_claim', 'refund'] as const;
 export type OrderEvent = (typeof ORDER_EVENTS)[number];
 
 export const ORDER_LIFECYCLE: Lifecycle<OrderStatus, OrderEvent> = {
@@ -28,7 +28,10 @@ export const ORDER_LIFECYCLE: Lifecycle<OrderStatus, OrderEvent> = {
     cancel: { from: ['awaiting_payment'], to: 'cancelled', by: ['buyer', 'admin'] },
     decline: { from: ['awaiting_payment'], to: 'cancelled', by: ['system'] },
     expire: { from: ['awaiting_payment'], to: 'expired', by: ['system'] },
-    schedule: { from: ['paid'], to: 'scheduled', by: ['grower', 'admin'] },
+    // Scheduled once both agree: the grower confirming the buyer's date, or the buyer agreeing to the grower's.
+    schedule: { from: ['paid'], to: 'scheduled', by: ['grower', 'admin', 'buyer'] },
+    // Either side moving an agreed date puts it back to be agreed.
+    reschedule: { from: ['scheduled'], to: 'paid', by: ['buyer', 'grower', 'admin'] },
     deliver: { from: ['scheduled'], to: 'delivered', by: ['grower', 'admin'] },
     // After the acceptance period the system accepts for a buyer who said nothing.
     accept: { from: ['delivered'], to: 'completed', by: ['buyer', 'system'] },

@@ -23,13 +23,13 @@ import { testClock } from './test-clock';
  * With `smtp: true` mail goes out through SMTP to the mail catcher instead (SMTP_URL, set by `npm test`
  * or the Jest global setup); read it back with e2e/support/mail-catcher.ts.
  */
-export async function startTestApi(overrides: Record<string, string> = {}, options: { smtp?: boolean } = {}) {
+export async function startTestApi(overrides: Record<string, string> = {}, options: { smtp?: boolean; stripe?: StripeFakeServer } = {}) {
   const url = process.env['TEST_DATABASE_URL'];
   if (!url) throw new Error('TEST_DATABASE_URL is not set: run the suite with `npm test`, which prepares the test database.');
-  const stripeServer = await new Promise<import('node:http').Server>((resolve) => {
-    const s = createStripeFake().listen(0, '127.0.0.1', () => resolve(s));
-  });
-  const stripePort = (stripeServer.address() as AddressInfo).port;
+  // A test may pass its own fake to keep the provider's state across a restart of the API.
+  const ownFake = options.stripe ? null : await startStripeFake();
+  const stripeFake = options.stripe ?? ownFake!;
+  const stripePort = stripeFake.port;
   const env = readEnv({ NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'silent', SIGN_IN_RATE_LIMIT: '1000', ...overrides });
   const mails: OutgoingMail[] = [];
   const clock = testClock();
@@ -72,13 +72,15 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
     clock,
     /** The storage folder behind `deps.storage` (one per test API). */
     uploadDir,
+    /** The Stripe fake this API talks to (its events, payment page). */
+    stripeFake,
     /** A supertest agent that keeps cookies and sends the CSRF header like the Angular app does. */
     agent: () => csrfAgent(api),
     close: async () => {
       await jobs.stop();
       await db.execute(sql.raw(`drop schema if exists ${queueSchema} cascade`));
       await deps.db.$client.end();
-      await new Promise((resolve) => stripeServer.close(resolve));
+      if (ownFake) await ownFake.close();
     },
   };
 }
@@ -92,6 +94,17 @@ function smtpUrl(): string {
 let apiCounter = 0;
 
 export type TestApi = Awaited<ReturnType<typeof startTestApi>>;
+
+/** The Stripe fake on a free port. */
+export async function startStripeFake() {
+  const fake = createStripeFake();
+  const server = await new Promise<import('node:http').Server>((resolve) => {
+    const s = fake.listen(0, '127.0.0.1', () => resolve(s));
+  });
+  const port = (server.address() as AddressInfo).port;
+  return { fake, port, base: `http://127.0.0.1:${port}`, close: () => new Promise((resolve) => server.close(resolve)) };
+}
+export type StripeFakeServer = Awaited<ReturnType<typeof startStripeFake>>;
 
 export function csrfAgent(api: Parameters<typeof request.agent>[0]) {
   const agent = request.agent(api);

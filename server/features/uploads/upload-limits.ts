@@ -53,3 +53,6 @@ export function filesOf(req: { files?: unknown }, what: string): Express.Multer.
   }
   return files;
 }
+
+/** A photo of the weighbridge ticket, optional when a grower marks a load handed over. */
+export const acceptScaleTicket = acceptFiles('ticket', { maxBytes: PHOTO_MAX_BYTES, maxFiles: 1, what: 'scale-ticket photo' });

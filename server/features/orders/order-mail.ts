@@ -1,0 +1,65 @@
+import { formatCents } from '@shared/units/money';
+import type { OutgoingMail } from '../../adapters/mail/mailer';
+
+/** The facts of an order that every order e-mail repeats. */
+export interface OrderMailFacts {
+  orderId: number;
+  lotTitle: string;
+  forageType: string;
+  cutting: number;
+  farmName: string;
+  bales: number;
+  tons: number;
+  method: 'delivery' | 'pickup';
+  goodsCents: number;
+  freightCents: number;
+  platformFeeCents: number;
+  totalCents: number;
+  refundedCents: number;
+  windowStart: Date | null;
+  deliveryAddress: string | null;
+}
+
+export type OrderMailKind = 'order_received' | 'new_order' | 'date_confirmed' | 'date_changed' | 'delivered' | 'receipt';
+
+const escape = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
+const day = (d: Date) => d.toLocaleDateString('en-US', { weekday: 'long', month: 'long', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
+const when = (f: OrderMailFacts) =>
+  f.windowStart ? (f.method === 'pickup' ? `pickup ${day(f.windowStart)} at ${f.windowStart.getUTCHours()}:00 (farm time)` : `delivery on ${day(f.windowStart)}`) : 'date to agree';
+
+function factRows(f: OrderMailFacts): [string, string][] {
+  return [
+    ['Lot', `${f.lotTitle} (${f.forageType.replace(/_/g, ' ')}, cutting ${f.cutting})`],
+    ['From', f.farmName],
+    ['Quantity', `${f.bales} bales, about ${f.tons.toFixed(2)} t`],
+    [f.method === 'pickup' ? 'Pickup' : 'Delivery', when(f) + (f.method === 'delivery' && f.deliveryAddress ? ` to ${f.deliveryAddress}` : '')],
+    ['Hay', formatCents(f.goodsCents)],
+    ['Freight', formatCents(f.freightCents)],
+    ['Platform fee', formatCents(f.platformFeeCents)],
+    ['Total', formatCents(f.totalCents)],
+    ...(f.refundedCents > 0 ? ([['Refunded', formatCents(f.refundedCents)]] as [string, string][]) : []),
+  ];
+}
+
+const INTRO: Record<OrderMailKind, (f: OrderMailFacts) => { subject: string; lead: string }> = {
+  order_received: (f) => ({ subject: `Order ${f.orderId} paid: ${f.lotTitle}`, lead: 'Thank you: your payment arrived and the grower has been told. You will hear when the date is confirmed.' }),
+  new_order: (f) => ({ subject: `New order ${f.orderId}: ${f.bales} bales of ${f.lotTitle}`, lead: 'A buyer has paid for hay from your lot. Please confirm the date or offer another one.' }),
+  date_confirmed: (f) => ({ subject: `Date confirmed for order ${f.orderId}`, lead: `The grower confirmed the ${when(f)}.` }),
+  date_changed: (f) => ({ subject: `Another date offered for order ${f.orderId}`, lead: `The grower offered another date: ${when(f)}. Please agree to it or ask for another.` }),
+  delivered: (f) => ({ subject: `Order ${f.orderId} handed over`, lead: 'The grower marked your hay delivered or picked up. Please accept the load, or report a problem within 3 days.' }),
+  receipt: (f) => ({ subject: `Receipt for order ${f.orderId}`, lead: 'Your order is complete. This is your receipt.' }),
+};
+
+const CAUTION =
+  'Check hay for mould, dust and (in alfalfa) blister beetles before feeding, and store it dry: wet hay can heat and catch fire. Confirm feeding plans with a veterinarian or equine nutritionist.';
+
+/** An order e-mail in plain text and HTML, with the lot's facts and a link to the order. */
+export function orderMail(kind: OrderMailKind, to: string, facts: OrderMailFacts, publicUrl: string): OutgoingMail {
+  const { subject, lead } = INTRO[kind](facts);
+  const url = `${publicUrl}/orders/${facts.orderId}`;
+  const rows = factRows(facts);
+  const text = `${lead}\n\n${rows.map(([k, v]) => `${k}: ${v}`).join('\n')}\n\nSee the order: ${url}\n\n${CAUTION}\n\n— Baleproof`;
+  const html = `<p>${escape(lead)}</p><table>${rows.map(([k, v]) => `<tr><th align="left">${escape(k)}</th><td>${escape(v)}</td></tr>`).join('')}</table>
+<p><a href="${escape(url)}">See the order</a></p><p style="color:#555;font-size:90%">${escape(CAUTION)}</p><p>— Baleproof</p>`;
+  return { to, subject, text, html };
+}

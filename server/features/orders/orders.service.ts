@@ -1,0 +1,322 @@
+import { and, desc, eq, inArray, lte, sql } from 'drizzle-orm';
+import type { CreatedOrder, CreateOrder, OrderQuote, OrderQuoteRequest, OrderSummary, OrderView } from '@shared/contracts/orders';
+import { RESERVATION_MINUTES } from '@shared/lifecycle/order-lifecycle';
+import type { Actor } from '@shared/lifecycle/state-machine';
+import { haversineMiles } from '@shared/pricing/distance';
+import { minimumBales, orderProblem, orderTotal, type LotTerms } from '@shared/pricing/order-total';
+import type { ApiDeps } from '../../api-deps';
+import { deliveries, farms, lots, orderEvents, orderRefunds, orders, users } from '../../db/schema';
+import { conflict, HttpError, notFound } from '../../middleware/http-error';
+import { locateZip } from '../geo/geo';
+import { windowFor } from './delivery-window';
+import { orderMail, type OrderMailKind } from './order-mail';
+import { OrderPayments } from './order-payments';
+import { loadOrderRecord, mailFacts, orderView, readableOrder, type OrderRecord } from './order-record';
+import { applyOrderEvent, lockOrder, type OrderRow, type Tx } from './order-transition';
+import { releaseBales, reserveBales } from './stock';
+
+type Deps = Pick<ApiDeps, 'db' | 'stripe' | 'env' | 'clock' | 'logger' | 'mailer'>;
+
+const round1 = (x: number) => Math.round(x * 10) / 10;
+
+/** Orders: quoting, placing (reserving stock and opening the payment page), reading, cancelling, lists. */
+export class OrdersService {
+  readonly payments: OrderPayments;
+  constructor(private readonly deps: Deps) {
+    this.payments = new OrderPayments(deps.stripe, deps.env);
+  }
+
+  private get db() {
+    return this.deps.db;
+  }
+
+  /** The figures of an order before it is placed, or why it cannot be. */
+  async quote(input: OrderQuoteRequest): Promise<OrderQuote> {
+    const { lot, farm } = await this.listedLot(input.lotId);
+    const terms = lotTerms(lot);
+    const distanceMi = input.method === 'delivery' && input.deliveryZip ? this.distance(farm, input.deliveryZip) : null;
+    const request = { bales: input.bales, method: input.method, distanceMi };
+    const problem = orderProblem(terms, request);
+    const total = orderTotal(terms, request, farm);
+    return { lotId: lot.id, ...total, distanceMi, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, problem: problem?.message ?? null };
+  }
+
+  /**
+   * Places an order: the bales are taken off the lot at once (held until `reservedUntil`), then the payment
+   * page is opened. Bales that are gone answer 409; a payment provider that fails releases them again.
+   */
+  async create(user: Express.User, input: CreateOrder): Promise<CreatedOrder> {
+    const { lot, farm } = await this.listedLot(input.lotId);
+    const terms = lotTerms(lot);
+    const distanceMi = input.method === 'delivery' && input.deliveryZip ? this.distance(farm, input.deliveryZip) : null;
+    const request = { bales: input.bales, method: input.method, distanceMi };
+    const problem = orderProblem(terms, request);
+    if (problem?.code === 'not_enough_bales') throw conflict('not_enough_bales', problem.message);
+    if (problem) throw new HttpError(400, problem.code, problem.message, [{ path: problem.code === 'below_minimum' ? 'bales' : problem.code === 'no_distance' ? 'deliveryZip' : 'method', message: problem.message }]);
+    if (input.method === 'pickup' && !lot.pickupAllowed) throw new HttpError(400, 'no_pickup', 'This lot is not sold for pickup at the farm; choose delivery.');
+    const total = orderTotal(terms, request, farm);
+    const window = input.window ? windowFor(farm, input.method, input.window, this.deps.clock.now()) : null;
+    const now = this.deps.clock.now();
+
+    const order = await this.db.transaction(async (tx) => {
+      if (!(await reserveBales(tx, lot.id, input.bales, now))) {
+        const [left] = await tx.select({ balesAvailable: lots.balesAvailable }).from(lots).where(eq(lots.id, lot.id));
+        const n = left?.balesAvailable ?? 0;
+        throw conflict('not_enough_bales', n === 0 ? 'Those bales are no longer available: this lot has none left.' : `Those bales are no longer available: only ${n} are left.`);
+      }
+      const [row] = await tx
+        .insert(orders)
+        .values({
+          buyerId: user.id,
+          lotId: lot.id,
+          farmId: farm.id,
+          bales: total.bales,
+          tons: total.tons,
+          pricingUnit: lot.pricingUnit,
+          priceCentsPerTon: lot.priceCentsPerTon,
+          goodsCents: total.goodsCents,
+          freightCents: total.freightCents,
+          platformFeeCents: total.platformFeeCents,
+          totalCents: total.totalCents,
+          method: input.method,
+          loads: total.loads,
+          deliveryZip: input.method === 'delivery' ? (input.deliveryZip ?? null) : null,
+          deliveryAddress: input.method === 'delivery' ? (input.deliveryAddress ?? null) : null,
+          distanceMi,
+          reservedUntil: new Date(now.getTime() + RESERVATION_MINUTES * 60_000),
+          createdAt: now,
+          updatedAt: now,
+        })
+        .returning();
+      await tx.insert(orderEvents).values({ orderId: row!.id, event: 'place', status: 'awaiting_payment', actor: 'buyer', actorId: user.id, note: `${total.bales} bales reserved`, createdAt: now });
+      if (window) await tx.insert(deliveries).values({ orderId: row!.id, method: input.method, status: 'proposed', windowStart: window.start, windowEnd: window.end, updatedAt: now });
+      return row!;
+    });
+
+    let session: { id: string; url: string };
+    try {
+      session = await this.payments.startCheckout(order, { lotTitle: lot.title, buyerEmail: user.email });
+    } catch (err) {
+      await this.db.transaction(async (tx) => {
+        const locked = await lockOrder(tx, order.id);
+        if (locked?.status !== 'awaiting_payment') return;
+        await applyOrderEvent(tx, locked, 'cancel', { actor: 'admin', actorId: null }, this.deps.clock.now(), { cancelReason: 'payment_provider_unreachable', reservedUntil: null }, 'The payment page could not be opened.');
+        await releaseBales(tx, locked.lotId, locked.bales, this.deps.clock.now());
+      });
+      throw err;
+    }
+    await this.db.update(orders).set({ checkoutSessionId: session.id, paymentUrl: session.url }).where(eq(orders.id, order.id));
+    return { id: order.id, status: 'awaiting_payment', totalCents: order.totalCents, paymentUrl: session.url };
+  }
+
+  /** The order for its buyer, its grower or an admin; an unpaid order is first checked with the provider. */
+  async get(user: Express.User, id: number): Promise<OrderView> {
+    let { record, part } = await readableOrder(this.db, id, user);
+    if (record.order.status === 'awaiting_payment' && record.order.checkoutSessionId) {
+      await this.reconcile(record.order).catch((err) => this.deps.logger.warn({ err, orderId: id }, 'could not check payment status'));
+      record = (await loadOrderRecord(this.db, id))!;
+    }
+    return orderView(this.db, record, part);
+  }
+
+  /** The buyer (or an admin) cancels an unpaid order: the payment page closes and the bales go back on the lot. */
+  async cancel(user: Express.User, id: number): Promise<OrderView> {
+    const { record, part } = await readableOrder(this.db, id, user);
+    const actor: Actor = part;
+    const order = record.order;
+    if (order.status === 'awaiting_payment' && order.checkoutSessionId) {
+      const session = await this.payments.close(order.checkoutSessionId);
+      if (session?.payment_status === 'paid') {
+        await this.markPaid(order.id, session.payment_intent as string | null);
+        throw conflict('already_paid', 'This order has just been paid, so it can no longer be cancelled here.');
+      }
+    }
+    await this.db.transaction(async (tx) => {
+      const locked = (await lockOrder(tx, id))!;
+      await applyOrderEvent(tx, locked, 'cancel', { actor, actorId: user.id }, this.deps.clock.now(), { cancelReason: 'cancelled_by_' + part, reservedUntil: null });
+      await releaseBales(tx, locked.lotId, locked.bales, this.deps.clock.now());
+    });
+    return this.get(user, id);
+  }
+
+  async listForBuyer(userId: number): Promise<OrderSummary[]> {
+    return this.summaries(eq(orders.buyerId, userId));
+  }
+
+  async listForGrower(userId: number): Promise<OrderSummary[]> {
+    const farmIds = (await this.db.select({ id: farms.id }).from(farms).where(eq(farms.ownerId, userId))).map((f) => f.id);
+    if (farmIds.length === 0) return [];
+    // Unpaid orders are the buyer's business until paid; the grower sees them once money has arrived.
+    return this.summaries(and(inArray(orders.farmId, farmIds), sql`${orders.status} not in ('awaiting_payment', 'cancelled', 'expired')`)!);
+  }
+
+  /** Payment arrived (webhook, or found when checking): the order is paid and its bales sold. Safe to repeat. */
+  async markPaid(orderId: number, paymentIntentId: string | null): Promise<void> {
+    const now = this.deps.clock.now();
+    const outcome = await this.db.transaction(async (tx) => {
+      const order = await lockOrder(tx, orderId);
+      if (!order) return 'missing' as const;
+      if (order.status === 'awaiting_payment') {
+        await applyOrderEvent(tx, order, 'pay', { actor: 'system', actorId: null }, now, { paidAt: now, reservedUntil: null, paymentIntentId });
+        return 'paid' as const;
+      }
+      if ((order.status === 'cancelled' || order.status === 'expired') && !order.paidAt) {
+        // Paid after the hold ran out: take the bales again if they are still there, else refund in full.
+        if (await reserveBales(tx, order.lotId, order.bales, now)) {
+          await tx.update(orders).set({ status: 'paid', paidAt: now, paymentIntentId, cancelReason: null, updatedAt: now }).where(eq(orders.id, orderId));
+          await tx.insert(orderEvents).values({ orderId, event: 'pay', status: 'paid', actor: 'system', note: 'Paid after the hold ran out; the bales were still there.', createdAt: now });
+          return 'paid' as const;
+        }
+        await tx.update(orders).set({ paidAt: now, paymentIntentId, updatedAt: now }).where(eq(orders.id, orderId));
+        return 'refund_late' as const;
+      }
+      return 'already' as const;
+    });
+    if (outcome === 'paid') await this.notify(orderId, ['order_received', 'new_order']);
+    if (outcome === 'refund_late' && paymentIntentId) {
+      const order = (await loadOrderRecord(this.db, orderId))!.order;
+      await this.refundOnce(order, order.totalCents - order.refundedCents, 'late_payment', `order-${orderId}-late-payment-refund`, paymentIntentId);
+    }
+  }
+
+  /** A declined card ends the order at once: the payment page closes and the bales go back. */
+  async decline(orderId: number): Promise<void> {
+    const order = (await loadOrderRecord(this.db, orderId))?.order;
+    if (!order || order.status !== 'awaiting_payment') return;
+    if (order.checkoutSessionId) {
+      const session = await this.payments.close(order.checkoutSessionId);
+      if (session?.payment_status === 'paid') return this.markPaid(orderId, session.payment_intent as string | null);
+    }
+    await this.endUnpaid(orderId, 'decline', 'payment_declined', 'The card was declined.');
+  }
+
+  async reconcileById(orderId: number): Promise<void> {
+    const order = (await loadOrderRecord(this.db, orderId))?.order;
+    if (order?.status === 'awaiting_payment') await this.reconcile(order);
+  }
+
+  /** Checks an unpaid order with the payment provider and applies what happened there. */
+  async reconcile(order: OrderRow): Promise<void> {
+    if (!order.checkoutSessionId) return;
+    const session = await this.payments.retrieve(order.checkoutSessionId);
+    if (session.payment_status === 'paid') await this.markPaid(order.id, session.payment_intent as string | null);
+    else if (session.status === 'expired') await this.endUnpaid(order.id, 'expire', 'reservation_expired', 'The payment page expired.');
+  }
+
+  /**
+   * Ends every hold whose time is up (run on a timer): a payment that did arrive is applied instead;
+   * otherwise the payment page is closed and the bales go back on the lot. Returns how many holds ended.
+   */
+  async expireDueReservations(): Promise<number> {
+    const now = this.deps.clock.now();
+    const due = await this.db.select().from(orders).where(and(eq(orders.status, 'awaiting_payment'), lte(orders.reservedUntil, now)));
+    let ended = 0;
+    for (const order of due) {
+      try {
+        const session = order.checkoutSessionId ? await this.payments.close(order.checkoutSessionId) : null;
+        if (session?.payment_status === 'paid') {
+          await this.markPaid(order.id, session.payment_intent as string | null);
+          continue;
+        }
+        if (await this.endUnpaid(order.id, 'expire', 'reservation_expired', `Unpaid after ${RESERVATION_MINUTES} minutes; the bales went back on the lot.`)) ended++;
+      } catch (err) {
+        // The provider is unreachable: keep the hold and try again on the next run rather than guess.
+        this.deps.logger.warn({ err, orderId: order.id }, 'could not end an expired hold yet');
+      }
+    }
+    return ended;
+  }
+
+  /** Refunds `amountCents` once for a given key: the key is stored first, so a repeat finds it and stops. */
+  async refundOnce(order: OrderRow, amountCents: number, reason: string, key: string, paymentIntentId = order.paymentIntentId, createdBy: number | null = null): Promise<boolean> {
+    if (amountCents <= 0 || !paymentIntentId) return false;
+    const claimed = await this.db.transaction(async (tx) => {
+      const inserted = await tx.insert(orderRefunds).values({ orderId: order.id, amountCents, reason, idempotencyKey: key, createdBy }).onConflictDoNothing().returning();
+      if (inserted.length === 0) return false;
+      await tx.update(orders).set({ refundedCents: sql`${orders.refundedCents} + ${amountCents}`, updatedAt: this.deps.clock.now() }).where(eq(orders.id, order.id));
+      return true;
+    });
+    const [row] = await this.db.select().from(orderRefunds).where(eq(orderRefunds.idempotencyKey, key));
+    if (row?.providerRefundId) return false;
+    // Same key to the provider: a retry after a crash here refunds once there too.
+    const refund = await this.payments.refund(paymentIntentId, row!.amountCents, key, { orderId: String(order.id), reason });
+    await this.db.update(orderRefunds).set({ providerRefundId: refund.id }).where(eq(orderRefunds.idempotencyKey, key));
+    return claimed;
+  }
+
+  /** Sends order e-mails after the fact; a mail failure is logged, never undoes the order. */
+  async notify(orderId: number, kinds: OrderMailKind[]): Promise<void> {
+    const record = await loadOrderRecord(this.db, orderId);
+    if (!record) return;
+    for (const kind of kinds) {
+      const to = kind === 'new_order' ? record.grower.email : record.buyer.email;
+      try {
+        await this.deps.mailer.send(orderMail(kind, to, mailFacts(record), this.deps.env.PUBLIC_URL));
+      } catch (err) {
+        this.deps.logger.error({ err, orderId, kind }, 'order e-mail failed');
+      }
+    }
+  }
+
+  private async endUnpaid(orderId: number, event: 'expire' | 'decline', reason: string, note: string): Promise<boolean> {
+    return this.db.transaction(async (tx: Tx) => {
+      const order = await lockOrder(tx, orderId);
+      if (order?.status !== 'awaiting_payment') return false;
+      await applyOrderEvent(tx, order, event, { actor: 'system', actorId: null }, this.deps.clock.now(), { cancelReason: reason, reservedUntil: null }, note);
+      await releaseBales(tx, order.lotId, order.bales, this.deps.clock.now());
+      return true;
+    });
+  }
+
+  private async summaries(where: ReturnType<typeof eq>): Promise<OrderSummary[]> {
+    const rows = await this.db
+      .select({ order: orders, lot: lots, farm: farms, buyerName: users.displayName, delivery: deliveries })
+      .from(orders)
+      .innerJoin(lots, eq(lots.id, orders.lotId))
+      .innerJoin(farms, eq(farms.id, orders.farmId))
+      .innerJoin(users, eq(users.id, orders.buyerId))
+      .leftJoin(deliveries, and(eq(deliveries.orderId, orders.id), eq(deliveries.loadNumber, 1)))
+      .where(where)
+      .orderBy(desc(orders.createdAt), desc(orders.id))
+      .limit(200);
+    return rows.map((r) => ({
+      id: r.order.id,
+      status: r.order.status,
+      bales: r.order.bales,
+      tons: r.order.tons,
+      totalCents: r.order.totalCents,
+      method: r.order.method,
+      createdAt: r.order.createdAt.toISOString(),
+      lot: { id: r.lot.id, title: r.lot.title, forageType: r.lot.forageType, cutting: r.lot.cutting, baleType: r.lot.baleType, avgBaleWeightLb: r.lot.avgBaleWeightLb },
+      farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour },
+      buyerName: r.buyerName,
+      windowStart: r.delivery?.windowStart.toISOString() ?? null,
+      deliveryStatus: r.delivery?.status ?? null,
+    }));
+  }
+
+  private async listedLot(lotId: number) {
+    const [row] = await this.db.select({ lot: lots, farm: farms }).from(lots).innerJoin(farms, eq(farms.id, lots.farmId)).where(eq(lots.id, lotId));
+    if (!row || !['listed', 'sold_out'].includes(row.lot.status)) throw notFound('Lot');
+    return row;
+  }
+
+  private distance(farm: typeof farms.$inferSelect, zip: string): number {
+    const place = locateZip(zip);
+    return round1(haversineMiles({ lat: farm.latitude, lon: farm.longitude }, { lat: place.latitude, lon: place.longitude }));
+  }
+}
+
+export function lotTerms(lot: typeof lots.$inferSelect): LotTerms {
+  return {
+    pricingUnit: lot.pricingUnit,
+    priceCentsPerTon: lot.priceCentsPerTon,
+    priceCentsPerBale: lot.priceCentsPerBale,
+    avgBaleWeightLb: lot.avgBaleWeightLb,
+    minOrderTons: lot.minOrderTons,
+    balesAvailable: lot.balesAvailable,
+    freightCentsPerLoadedMile: lot.freightCentsPerLoadedMile,
+  };
+}
+
+export type { OrderRecord };

@@ -1,0 +1,33 @@
+import { and, eq, gte, sql } from 'drizzle-orm';
+import { lots } from '../../db/schema';
+import type { Tx } from './order-transition';
+
+/**
+ * Takes `bales` off a listed lot in one conditional UPDATE: PostgreSQL locks the row, so of many
+ * concurrent buyers only those who still find enough bales succeed. The lot shows as sold out at zero.
+ * Returns false when the bales are no longer there.
+ */
+export async function reserveBales(tx: Tx, lotId: number, bales: number, at: Date): Promise<boolean> {
+  const rows = await tx
+    .update(lots)
+    .set({
+      balesAvailable: sql`${lots.balesAvailable} - ${bales}`,
+      status: sql`case when ${lots.balesAvailable} - ${bales} = 0 then 'sold_out'::lot_status else ${lots.status} end`,
+      updatedAt: at,
+    })
+    .where(and(eq(lots.id, lotId), eq(lots.status, 'listed'), gte(lots.balesAvailable, bales)))
+    .returning({ id: lots.id });
+  return rows.length === 1;
+}
+
+/** Puts released bales back on the lot; a lot sold out only by reservations goes back on sale. */
+export async function releaseBales(tx: Tx, lotId: number, bales: number, at: Date): Promise<void> {
+  await tx
+    .update(lots)
+    .set({
+      balesAvailable: sql`least(${lots.baleCount}, ${lots.balesAvailable} + ${bales})`,
+      status: sql`case when ${lots.status} = 'sold_out' then 'listed'::lot_status else ${lots.status} end`,
+      updatedAt: at,
+    })
+    .where(eq(lots.id, lotId));
+}

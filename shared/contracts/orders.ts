@@ -1,0 +1,160 @@
+import { z } from 'zod';
+import type { DeliveryStatus } from '../lifecycle/delivery-lifecycle';
+import type { OrderEvent, OrderStatus } from '../lifecycle/order-lifecycle';
+
+const zip = z.string().trim().regex(/^\d{5}$/, 'Enter a 5-digit ZIP code.');
+const isoDay = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD.');
+
+/** What the buyer asks for: a number of bales from one lot, delivered or picked up. */
+export const OrderQuoteSchema = z
+  .object({
+    lotId: z.coerce.number().int().positive('Choose a lot.'),
+    bales: z.coerce.number().int('Order whole bales.').positive('Order at least one bale.').max(100_000, 'That is more bales than any lot holds.'),
+    method: z.enum(['pickup', 'delivery'], { message: 'Choose delivery or pickup at the farm.' }),
+    deliveryZip: zip.optional(),
+  })
+  .refine((o) => o.method === 'pickup' || o.deliveryZip !== undefined, { message: 'Give the delivery ZIP code so the freight can be worked out.', path: ['deliveryZip'] });
+export type OrderQuoteRequest = z.infer<typeof OrderQuoteSchema>;
+
+/** The buyer's wish for when: a delivery day, or a pickup day and hour (farm time). */
+export const WindowSchema = z.object({
+  date: isoDay,
+  pickupHour: z.number().int().min(0).max(23).optional(),
+});
+export type WindowRequest = z.infer<typeof WindowSchema>;
+
+export const CreateOrderSchema = z
+  .object({
+    lotId: z.number().int().positive('Choose a lot.'),
+    bales: z.number().int('Order whole bales.').positive('Order at least one bale.').max(100_000, 'That is more bales than any lot holds.'),
+    method: z.enum(['pickup', 'delivery'], { message: 'Choose delivery or pickup at the farm.' }),
+    deliveryZip: zip.optional(),
+    deliveryAddress: z.string().trim().min(5, 'Give the delivery address.').max(300, 'Use at most 300 characters.').optional(),
+    window: WindowSchema.optional(),
+  })
+  .strict()
+  .refine((o) => o.method === 'pickup' || o.deliveryZip !== undefined, { message: 'Give the delivery ZIP code so the freight can be worked out.', path: ['deliveryZip'] })
+  .refine((o) => o.method === 'pickup' || o.deliveryAddress !== undefined, { message: 'Give the delivery address.', path: ['deliveryAddress'] });
+export type CreateOrder = z.infer<typeof CreateOrderSchema>;
+
+export interface OrderQuote {
+  lotId: number;
+  bales: number;
+  tons: number;
+  goodsCents: number;
+  freightCents: number;
+  platformFeeCents: number;
+  totalCents: number;
+  loads: number;
+  /** Straight-line miles from the farm, an estimate (roads run longer). */
+  distanceMi: number | null;
+  minBales: number;
+  balesAvailable: number;
+  /** Why this order cannot be placed as asked, or null. */
+  problem: string | null;
+}
+
+export interface CreatedOrder {
+  id: number;
+  status: OrderStatus;
+  totalCents: number;
+  paymentUrl: string;
+}
+
+export interface OrderTimelineEntry {
+  event: string;
+  status: OrderStatus;
+  actor: string;
+  note: string;
+  at: string;
+}
+
+export interface DeliveryView {
+  id: number;
+  method: 'delivery' | 'pickup';
+  status: DeliveryStatus;
+  windowStart: string;
+  windowEnd: string;
+  scaleTicketLb: number | null;
+  hasScaleTicket: boolean;
+  completedAt: string | null;
+}
+
+export interface OrderView {
+  id: number;
+  status: OrderStatus;
+  lot: { id: number; title: string; forageType: string; cutting: number; baleType: string; avgBaleWeightLb: number };
+  farm: { id: number; name: string; city: string; state: string; pickupFromHour: number; pickupToHour: number };
+  buyer: { displayName: string; email: string };
+  bales: number;
+  tons: number;
+  pricingUnit: 'ton' | 'bale';
+  priceCentsPerTon: number;
+  goodsCents: number;
+  freightCents: number;
+  platformFeeCents: number;
+  totalCents: number;
+  refundedCents: number;
+  method: 'delivery' | 'pickup';
+  loads: number;
+  deliveryZip: string | null;
+  deliveryAddress: string | null;
+  distanceMi: number | null;
+  paymentUrl: string | null;
+  reservedUntil: string | null;
+  weighedTons: number | null;
+  paidAt: string | null;
+  deliveredAt: string | null;
+  acceptBy: string | null;
+  cancelReason: string | null;
+  createdAt: string;
+  delivery: DeliveryView | null;
+  timeline: OrderTimelineEntry[];
+  /** What the signed-in user may do now (order events plus delivery steps). */
+  actions: string[];
+  /** The viewer's part in this order. */
+  viewerRole: 'buyer' | 'grower' | 'admin';
+}
+
+export type OrderSummary = Pick<OrderView, 'id' | 'status' | 'bales' | 'tons' | 'totalCents' | 'method' | 'createdAt' | 'lot' | 'farm'> & {
+  buyerName: string;
+  windowStart: string | null;
+  deliveryStatus: DeliveryStatus | null;
+};
+
+export const CancelReasonSchema = z.object({ reason: z.string().trim().max(500).optional() }).strict();
+
+export const ProposeWindowSchema = WindowSchema.strict();
+
+export const HandOverSchema = z
+  .object({
+    /** Net hay weight from the scale ticket, short tons. */
+    weighedTons: z.coerce.number().positive('The weighed tons must be above zero.').max(1000, 'That is more than any order.').optional(),
+  })
+  .strict();
+
+export const ReportProblemSchema = z.object({ reason: z.string().trim().min(10, 'Say what is wrong in a sentence or two.').max(2000) }).strict();
+
+export const DeliverySettingsSchema = z
+  .object({
+    deliveryWeekdays: z.array(z.number().int().min(0).max(6)).max(7).refine((d) => new Set(d).size === d.length, 'Each day once.'),
+    loadsPerDay: z.number().int().min(0, 'Zero or more loads a day.').max(50),
+    tonsPerLoad: z.number().positive('A load carries some hay.').max(40, 'More than 40 t is beyond legal truck weights.'),
+    balesPerLoad: z.number().int().positive().max(5000).nullable(),
+    pickupFromHour: z.number().int().min(0).max(23),
+    pickupToHour: z.number().int().min(1).max(24),
+  })
+  .strict()
+  .refine((s) => s.pickupToHour > s.pickupFromHour, { message: 'Pickup hours must end after they start.', path: ['pickupToHour'] });
+export type DeliverySettings = z.infer<typeof DeliverySettingsSchema>;
+
+/** One day of the grower's delivery calendar. */
+export interface CalendarDay {
+  date: string;
+  deliveryDay: boolean;
+  capacityLoads: number;
+  bookedLoads: number;
+  orders: { id: number; status: OrderStatus; deliveryStatus: DeliveryStatus; method: 'delivery' | 'pickup'; loads: number; buyerName: string; lotTitle: string; windowStart: string }[];
+}
+
+export type { DeliveryStatus, OrderEvent, OrderStatus };
