@@ -102,6 +102,7 @@ describe('buying a load', () => {
     const { body } = await buyer.agent.post('/orders', { lotId: lot.id, bales: 100, method: 'pickup' });
     const paid = await pay(body.paymentUrl, TEST_CARD_OK);
     expect(paid.status).toBe(303);
+    await t.drainJobs();
     const mailsBefore = t.mails.length;
     const first = await deliverEvents(body.id);
     expect(first.every((r) => r.status === 200)).toBe(true);
@@ -114,6 +115,7 @@ describe('buying a load', () => {
     const pays = await t.deps.db.select().from(orderEvents).where(eq(orderEvents.orderId, body.id));
     expect(pays.filter((e) => e.event === 'pay')).toHaveLength(1);
     // One "paid" e-mail to the buyer and one "new order" to the grower, not four.
+    await t.drainJobs();
     expect(t.mails.length - mailsBefore).toBe(2);
   });
 
@@ -239,6 +241,7 @@ describe('buying a load', () => {
 
     const accepted = await buyer.agent.post(`/orders/${body.id}/accept`, {});
     expect(accepted.body.status).toBe('completed');
+    await t.drainJobs();
     expect(t.mails.some((m) => m.subject === `Receipt for order ${body.id}` && m.text.includes('Refunded: $154.50'))).toBe(true);
   });
 

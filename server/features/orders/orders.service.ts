@@ -15,7 +15,7 @@ import { loadOrderRecord, mailFacts, orderView, readableOrder, type OrderRecord 
 import { applyOrderEvent, lockOrder, type OrderRow, type Tx } from './order-transition';
 import { releaseBales, reserveBales } from './stock';
 
-type Deps = Pick<ApiDeps, 'db' | 'stripe' | 'env' | 'clock' | 'logger' | 'mailer'>;
+type Deps = Pick<ApiDeps, 'db' | 'stripe' | 'env' | 'clock' | 'logger' | 'jobs'>;
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
 
@@ -244,16 +244,16 @@ export class OrdersService {
     return claimed;
   }
 
-  /** Sends order e-mails after the fact; a mail failure is logged, never undoes the order. */
+  /** Puts order e-mails in the outbox (the job queue sends and retries them); never undoes the order. */
   async notify(orderId: number, kinds: OrderMailKind[]): Promise<void> {
     const record = await loadOrderRecord(this.db, orderId);
     if (!record) return;
     for (const kind of kinds) {
       const to = kind === 'new_order' ? record.grower.email : record.buyer.email;
       try {
-        await this.deps.mailer.send(orderMail(kind, to, mailFacts(record), this.deps.env.PUBLIC_URL));
+        await this.deps.jobs.enqueueMail(orderMail(kind, to, mailFacts(record), this.deps.env.PUBLIC_URL));
       } catch (err) {
-        this.deps.logger.error({ err, orderId, kind }, 'order e-mail failed');
+        this.deps.logger.error({ err, orderId, kind }, 'order e-mail could not be queued');
       }
     }
   }
