@@ -1,4 +1,5 @@
-import { expect, test, type APIRequestContext } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Locator } from '@playwright/test';
+import type { ComparedLot } from '@shared/contracts/compare';
 
 /** Titles the API lists for a catalogue query (the oracle for what the page should show). */
 async function apiTitles(request: APIRequestContext, query: string): Promise<string[]> {
@@ -78,11 +79,30 @@ test.describe('buyers find and choose hay', () => {
     await expect(page).toHaveURL(/\/hay\/compare\?ids=\d+(%2C|,)\d+&zip=66502/);
     await expect(page.getByRole('heading', { level: 1, name: 'Compare hay' })).toBeVisible();
     await expect(page.getByRole('columnheader', { name: new RegExp(first!) })).toBeVisible();
-    const proteinRow = page.getByRole('row', { name: /Cost per lb of crude protein/ });
-    await expect(proteinRow.getByRole('cell')).toHaveCount(2);
-    await expect(proteinRow.getByRole('cell').first()).toHaveText(/\$\d+\.\d\d/);
-    await expect(page.getByRole('row', { name: /Freight/ }).getByRole('cell').first()).toHaveText(/\$[\d,]+ \(1 load × \d+ mi × \$\d+\.\d\d per loaded mile\)/);
-    await expect(page.getByRole('rowheader', { name: /Crude protein \(CP\)/ })).toBeVisible();
+    // The oracle: the compare API's figures for the same lots and ZIP, column by column.
+    const ids = new URL(page.url()).searchParams.get('ids')!;
+    const comparison = (await (await request.get(`/api/lots/compare?ids=${ids}&zip=66502`)).json()) as { items: ComparedLot[] };
+    expect(comparison.items.map((l) => l.title)).toEqual([first, second]);
+    const headers = page.getByRole('columnheader');
+    await expect(headers.filter({ hasText: first! })).toHaveCount(1);
+    await expect(headers.filter({ hasText: second! })).toHaveCount(1);
+    const cells = (label: RegExp) => page.getByRole('row', { name: label }).getByRole('cell');
+    const usd = (cents: number, digits: number) => `$${(cents / 100).toLocaleString('en-US', { minimumFractionDigits: digits, maximumFractionDigits: digits })}`;
+    const exactly = (text: string) => new RegExp(`^\\s*${text.replace(/[$.()×]/g, '\\$&')}(\\s*lowest)?\\s*$`);
+    await expect(cells(/Cost per lb of crude protein/)).toHaveText(comparison.items.map((l) => exactly(usd(l.pricing.perLbCrudeProteinCents!, 2))));
+    await expect(cells(/Cost per ton of dry matter/)).toHaveText(comparison.items.map((l) => exactly(usd(l.pricing.perDmTonCents, 0))));
+    await expect(cells(/Price per ton delivered/)).toHaveText(comparison.items.map((l) => exactly(usd(l.pricing.perTonCents, 0))));
+    await expect(cells(/^Freight/)).toHaveText(
+      comparison.items.map((l) => exactly(`${usd(l.pricing.freightCents, 0)} (${l.pricing.loads} load${l.pricing.loads === 1 ? '' : 's'} × ${Math.round(l.distanceMi!)} mi × ${usd(l.freightCentsPerLoadedMile!, 2)} per loaded mile)`)),
+    );
+    await expect(cells(/Crude protein \(CP\)/)).toHaveText(comparison.items.map((l) => exactly(`${l.nutrients.crudeProteinPct.toFixed(1)}%`)));
+    await expect(cells(/^RFV/)).toHaveText(comparison.items.map((l) => exactly(l.nutrients.rfv.toFixed(0))));
+    // And the API's protein cost is the delivered cost over the pounds of protein bought (common practice):
+    // total ÷ (tons × 2,000 lb × DM fraction × CP fraction), to the cent.
+    for (const l of comparison.items) {
+      const lbProtein = l.pricing.tons * 2000 * (l.nutrients.dryMatterPct / 100) * (l.nutrients.crudeProteinPct / 100);
+      expect(Math.abs(l.pricing.perLbCrudeProteinCents! - l.pricing.totalCents / lbProtein)).toBeLessThanOrEqual(1);
+    }
     await expect(page.locator('app-nutrient-chart canvas')).toBeVisible();
     await expect(page.getByRole('complementary', { name: 'Caution' })).toContainText('veterinarian or an equine nutritionist');
 
@@ -105,14 +125,41 @@ test.describe('buyers find and choose hay', () => {
     await page.getByLabel('Deliver to ZIP').fill('66044');
     await page.getByRole('button', { name: 'Find the cheapest mix' }).click();
     await expect(page.getByText(/^Buy [\d.,]+ t of hay from/)).toBeVisible({ timeout: 20_000 });
+    // The plan's lines as the planner shows them: lot, tons, bales, hay and freight.
+    const planTable = page.getByRole('table').filter({ has: page.getByRole('columnheader', { name: 'Delivered' }) });
+    const planned = await tableLines(planTable, { tons: 0, bales: 1, hay: 3, freight: 4 });
+    expect(planned.length).toBeGreaterThan(0);
+    const planTotal = (await planTable.getByRole('row', { name: /Total delivered/ }).getByRole('cell').last().textContent())!.trim();
     await page.getByRole('button', { name: 'Put this plan in my cart' }).click();
     await page.getByRole('link', { name: 'Open your cart' }).click();
 
     await expect(page.getByRole('heading', { level: 1, name: 'Your cart' })).toBeVisible();
-    await expect(page.getByRole('row', { name: /Total/ })).toContainText('$');
+    // Line by line, the cart holds exactly the planned mix, and the same delivered total.
+    const cartTable = page.getByRole('table', { name: 'Lots in your cart' });
+    await expect(cartTable.locator('tbody').getByRole('row')).toHaveCount(planned.length);
+    expect(await tableLines(cartTable, { tons: 0, bales: 1, hay: 2, freight: 3 })).toEqual(planned);
+    await expect(cartTable.getByRole('row', { name: /Total/ }).getByRole('cell').last()).toHaveText(planTotal);
     await expect(page.getByText('Checkout is not open yet.')).toBeVisible();
     // The cart survives a reload (kept in the browser).
     await page.reload();
     await expect(page.getByRole('row', { name: /Total/ })).toBeVisible();
+    expect(await tableLines(page.getByRole('table', { name: 'Lots in your cart' }), { tons: 0, bales: 1, hay: 2, freight: 3 })).toEqual(planned);
   });
 });
+
+/** The body rows of a table of lots: the lot's link text and the named cells (by index), in page order. */
+async function tableLines(table: Locator, columns: { tons: number; bales: number; hay: number; freight: number }) {
+  const rows = table.locator('tbody').getByRole('row');
+  const lines = [];
+  for (const row of await rows.all()) {
+    const cells = (await row.getByRole('cell').allTextContents()).map((c) => c.trim());
+    lines.push({
+      lot: (await row.getByRole('rowheader').getByRole('link').textContent())!.trim(),
+      tons: cells[columns.tons],
+      bales: cells[columns.bales],
+      hay: cells[columns.hay],
+      freight: cells[columns.freight],
+    });
+  }
+  return lines;
+}

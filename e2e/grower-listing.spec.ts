@@ -1,9 +1,14 @@
 import { expect, test, type Page } from '@playwright/test';
 import { makeJpeg, makeNoisyJpeg, makePdf } from '../tests/support/upload-fixtures';
+import { waitForMail } from './support/mail-catcher';
 
 // Demo accounts from the seed (README lists them).
 const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
 const ADMIN = { email: 'admin@baleproof.example', password: 'admin-demo-pass' };
+const BUYER = { email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass' };
+
+/** The stored photo a variant URL belongs to (`/media/photos/<photo>/<width>.webp`). */
+const photoOf = (src: string | null) => /photos\/([^/]+)\//.exec(src ?? '')?.[1] ?? `no photo in ${src}`;
 
 async function signIn(page: Page, account: { email: string; password: string }): Promise<void> {
   await page.goto('/sign-in');
@@ -28,13 +33,21 @@ const daysAgo = (days: number) => new Date(Date.now() - days * 86_400_000).toISO
 const saveAndContinue = (page: Page) => page.getByRole('button', { name: 'Save and continue' }).click();
 
 test('a grower lists a tested lot, an admin approves it, and buyers find it in the catalogue', async ({ page }) => {
-  test.setTimeout(120_000);
+  test.setTimeout(240_000);
   const field = `Creek Bend ${Date.now().toString(36)}`;
   const title = `Alfalfa, 2nd cutting — ${field}`;
   const photos = [
     { name: 'stack-north.jpg', mimeType: 'image/jpeg', buffer: await makeJpeg(2400, 1800, 1) },
     { name: 'bale-ends.jpg', mimeType: 'image/jpeg', buffer: await makeNoisyJpeg(2200, 1700, 2) },
   ];
+
+  // A buyer saves a search for this field before the lot exists, asking to be alerted.
+  await signIn(page, BUYER);
+  await page.goto(`/hay?q=${encodeURIComponent(field)}`);
+  await page.getByLabel('Name this search').fill(`Hay from ${field}`);
+  await page.getByRole('button', { name: 'Save and alert me' }).click();
+  await expect(page.getByRole('status').filter({ hasText: /saved/i })).toBeVisible();
+  await signOut(page);
 
   await signIn(page, GROWER);
   await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'My lots' }).click();
@@ -108,9 +121,18 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   const seen = await page.evaluate(() => (window as unknown as { progressSeen: string[] }).progressSeen.map(Number));
   expect(seen.some((v) => v > 0 && v < 100)).toBe(true);
   await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
-  await expect(page.getByRole('list', { name: 'Photos of this lot' }).getByRole('listitem')).toHaveCount(2);
-  await page.getByRole('button', { name: 'Make cover' }).click();
-  await expect(page.getByRole('list', { name: 'Photos of this lot' }).getByText('Cover', { exact: true })).toHaveCount(1);
+  const items = page.getByRole('list', { name: 'Photos of this lot' }).getByRole('listitem');
+  await expect(items).toHaveCount(2);
+  // Which photo is the cover, by the stored photo its thumbnail shows, before and after the click.
+  const coverItem = items.filter({ has: page.getByText('Cover', { exact: true }) });
+  const otherItem = items.filter({ has: page.getByRole('button', { name: 'Make cover' }) });
+  await expect(coverItem).toHaveCount(1);
+  const firstCover = photoOf(await coverItem.getByRole('img').getAttribute('src'));
+  const newCover = photoOf(await otherItem.getByRole('img').getAttribute('src'));
+  expect(newCover).not.toBe(firstCover);
+  await otherItem.getByRole('button', { name: 'Make cover' }).click();
+  await expect(coverItem.getByRole('img')).toHaveAttribute('src', new RegExp(`photos/${newCover}/`));
+  await expect(otherItem.getByRole('img')).toHaveAttribute('src', new RegExp(`photos/${firstCover}/`));
   await saveAndContinue(page);
 
   // Step 6: price and delivery.
@@ -136,14 +158,31 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await expect(page.getByRole('status')).toContainText('on sale');
   await signOut(page);
 
-  // Anyone now finds it in the catalogue, with WebP photo variants and its analysis.
+  // The grower hears of the approval, and the buyer's saved search alerts them: both read from the mail catcher.
+  const listedMail = await waitForMail(GROWER.email, title);
+  expect(listedMail.text).toContain(`/hay/${lotId}`);
+  const alert = await waitForMail(BUYER.email, title);
+  expect(alert.text).toContain(`/hay/${lotId}`);
+  expect(alert.text).toContain('RFV 152');
+
+  // Anyone now finds it in the catalogue, with what the grower typed in, the chosen cover and WebP photo variants.
   await page.goto(`/hay?q=${encodeURIComponent(field)}`);
   await page.getByRole('link', { name: title }).first().click();
   await expect(page.getByRole('heading', { level: 1, name: title })).toBeVisible();
   await expect(page.getByRole('heading', { name: 'Lab analysis' })).toBeVisible();
-  await expect(page.getByRole('rowheader', { name: 'Crude protein (CP)' })).toBeVisible();
+  // Entered on a dry-matter basis at 88 % DM; as fed = DM value × 0.88 (common practice).
+  const nutrient = (abbr: string) => page.getByRole('row', { name: new RegExp(`\\(${abbr}\\)`) }).getByRole('cell');
+  await expect(nutrient('CP')).toHaveText(['20.0%', '17.6%']);
+  await expect(nutrient('ADF')).toHaveText(['30.0%', '26.4%']);
+  await expect(nutrient('NDF')).toHaveText(['40.0%', '35.2%']);
+  await expect(page.getByRole('term').filter({ hasText: /^\s*RFV/ })).toHaveText(/RFV\s*152\b/);
+  // $265 a ton as fed is $265 / 0.88 = $301 a ton of dry matter.
+  await expect(page.getByText(/\$265\s+per ton as-fed/)).toBeVisible();
+  await expect(page.getByText(/\$301 per ton of dry matter/)).toBeVisible();
+  await expect(page.getByText(/\$3\.50 per loaded mile/)).toBeVisible();
+  await expect(page.getByText(/500 of 500 bales ≈ 15\.0 tons/)).toBeVisible();
   const photo = page.locator('figure img').first();
-  await expect(photo).toHaveAttribute('src', /\/media\/photos\/.+\.webp$/);
+  await expect(photo).toHaveAttribute('src', new RegExp(`/media/photos/${newCover}/.+\\.webp$`));
   const image = await page.request.get((await photo.getAttribute('src'))!);
   expect(image.headers()['content-type']).toBe('image/webp');
   await expect(page.locator('figure img').first()).toHaveAttribute('srcset', /320w.*800w.*1600w/);
