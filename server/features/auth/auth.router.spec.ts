@@ -121,12 +121,14 @@ describe('sign-in rate limit', () => {
   });
   afterAll(() => t.close());
 
-  it('answers 429 after too many attempts for one account', async () => {
+  it('answers 429 after too many attempts for one account, while another account from the same address may still try', async () => {
     const agent = t.agent();
     const email = uniqueEmail();
     const statuses = [];
     for (let i = 0; i < 4; i++) statuses.push((await agent.post('/auth/sign-in', { email, password: 'wrong-password' })).status);
     expect(statuses).toEqual([401, 401, 401, 429]);
+    // Same client, same address, another account: not limited, so the limit is per account, not per address alone.
+    expect((await agent.post('/auth/sign-in', { email: uniqueEmail(), password: 'wrong-password' })).status).toBe(401);
   });
 });
 
