@@ -1,13 +1,12 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { AuditQuerySchema, ChangeRoleSchema, ReinstateSchema, SuspendSchema, UsersQuerySchema } from '@shared/contracts/admin';
 import type { ApiDeps } from '../../api-deps';
+import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
 import { auditTrail } from '../audit/audit-query';
 import { SettingsService } from '../settings/settings.service';
 import { UsersService } from '../users/users.service';
 
-const UserParams = z.object({ id: z.coerce.number().int().positive('User id must be a positive whole number.') });
 
 /** Admin-only tools: users, settings, the audit trail. Every route here sits behind requireRole('admin'). */
 export function adminRouter(deps: ApiDeps): Router {
@@ -22,19 +21,19 @@ export function adminRouter(deps: ApiDeps): Router {
   });
 
   router.post('/users/:id/role', async (req, res) => {
-    const { id } = UserParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That user' });
     const { role, reason } = ChangeRoleSchema.parse(req.body);
     res.json(await usersService.changeRole(req.user!, id, role, reason));
   });
 
   router.post('/users/:id/suspend', async (req, res) => {
-    const { id } = UserParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That user' });
     const { reason } = SuspendSchema.parse(req.body);
     res.json(await usersService.suspend(req.user!, id, reason));
   });
 
   router.post('/users/:id/reinstate', async (req, res) => {
-    const { id } = UserParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That user' });
     const { reason } = ReinstateSchema.parse(req.body);
     res.json(await usersService.reinstate(req.user!, id, reason));
   });

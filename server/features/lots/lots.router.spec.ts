@@ -107,6 +107,13 @@ describe('lots API', () => {
     expect(shown.body.analysis).toMatchObject({ crudeProteinPct: 22, adfPct: 28, ndfPct: 36, verification: 'verified' });
     expect(shown.body.sampling).toMatchObject({ coresTaken: 20 });
     expect((await t.agent().get(`/lots/${ids['hidden']}`)).status).toBe(404);
-    expect((await t.agent().get('/lots/not-a-number')).status).toBe(400);
+  });
+
+  it('answers 404, never 500, to a lot id that cannot exist: not a whole number, or beyond PostgreSQL integer range (2147483647, PostgreSQL manual "Numeric Types")', async () => {
+    for (const id of ['not-a-number', '0', '-3', '1.5', '2147483648', '99999999999999999999']) {
+      const res = await t.agent().get(`/lots/${id}`);
+      expect({ id, status: res.status, code: res.body.error?.code }).toEqual({ id, status: 404, code: 'not_found' });
+    }
+    expect((await t.agent().get('/uploads/lots/2147483648/report')).status).toBe(404);
   });
 });

@@ -1,11 +1,10 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { ReturnLotSchema } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api-deps';
+import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
 import { ReviewService } from './review.service';
 
-const LotParams = z.object({ id: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
 
 /** Admin verification of submitted lots. */
 export function reviewRouter(deps: ApiDeps): Router {
@@ -18,18 +17,18 @@ export function reviewRouter(deps: ApiDeps): Router {
   });
 
   router.get('/lots/:id', async (req, res) => {
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     res.json(await service.lot(id));
   });
 
   router.post('/lots/:id/approve', async (req, res) => {
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     await service.approve(req.user!, id);
     res.json(await service.lot(id));
   });
 
   router.post('/lots/:id/return', async (req, res) => {
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     const { reason } = ReturnLotSchema.parse(req.body);
     await service.returnToGrower(req.user!, id, reason);
     res.json(await service.lot(id));

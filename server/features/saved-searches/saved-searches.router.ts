@@ -1,11 +1,10 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { SavedSearchCreateSchema } from '@shared/contracts/saved-searches';
 import type { Db } from '../../db/client';
+import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
 import { SavedSearchesService } from './saved-searches.service';
 
-const IdParams = z.object({ id: z.coerce.number().int().positive('Saved search id must be a positive whole number.') });
 
 /** A signed-in buyer's saved catalogue searches. */
 export function savedSearchesRouter(db: Db): Router {
@@ -23,7 +22,7 @@ export function savedSearchesRouter(db: Db): Router {
   });
 
   router.delete('/:id', async (req, res) => {
-    const { id } = IdParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That saved search' });
     await service.remove(req.user!.id, id);
     res.status(204).end();
   });

@@ -1,15 +1,15 @@
 import { and, eq, sql } from 'drizzle-orm';
 import {
-  AnalysisStepSchema,
+  type AnalysisStep,
   centsPerTonFromBale,
   defaultLotTitle,
   deriveQuantity,
   FORAGE_CLASS_OF,
-  LotStepSchema,
+  type LotStep,
   parseAnalysisValues,
-  PriceStepSchema,
-  QuantityStepSchema,
-  SamplingStepSchema,
+  type PriceStep,
+  type QuantityStep,
+  type SamplingStep,
   stepIndex,
   type LotFormStep,
 } from '@shared/contracts/selling';
@@ -39,8 +39,7 @@ export class LotStepsService {
   ) {}
 
   /** Starts a draft from the first step. */
-  async create(user: Express.User, body: unknown): Promise<number> {
-    const input = LotStepSchema.parse(body);
+  async create(user: Express.User, input: LotStep): Promise<number> {
     const farm = await farmOf(this.db, user.id);
     const [row] = await this.db
       .insert(lots)
@@ -60,8 +59,7 @@ export class LotStepsService {
     return row!.id;
   }
 
-  async saveLot(user: Express.User, lotId: number, body: unknown): Promise<void> {
-    const input = LotStepSchema.parse(body);
+  async saveLot(user: Express.User, lotId: number, input: LotStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'lot');
     const columns = this.lotColumns(input);
     const { forageClass: _derived, ...facts } = columns;
@@ -73,8 +71,7 @@ export class LotStepsService {
     });
   }
 
-  async saveQuantity(user: Express.User, lotId: number, body: unknown): Promise<void> {
-    const input = QuantityStepSchema.parse(body);
+  async saveQuantity(user: Express.User, lotId: number, input: QuantityStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'quantity');
     const q = deriveQuantity(input)!;
     const firstTime = lot.draftStep < stepIndex('quantity');
@@ -101,8 +98,7 @@ export class LotStepsService {
     });
   }
 
-  async saveSampling(user: Express.User, lotId: number, body: unknown): Promise<void> {
-    const input = SamplingStepSchema.parse(body);
+  async saveSampling(user: Express.User, lotId: number, input: SamplingStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'sampling');
     const verdict = samplingReportOf(lot, input, this.clock.now());
     await this.db.transaction(async (tx) => {
@@ -113,8 +109,7 @@ export class LotStepsService {
     });
   }
 
-  async saveAnalysis(user: Express.User, lotId: number, body: unknown): Promise<void> {
-    const input = AnalysisStepSchema.parse(body);
+  async saveAnalysis(user: Express.User, lotId: number, input: AnalysisStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'analysis');
     const request = parseAnalysisValues(input.values, lot.forageClass);
     const { columns, evaluation } = analysisColumns(request);
@@ -142,8 +137,7 @@ export class LotStepsService {
     await this.db.update(lots).set(this.progress(lot, 'photos')).where(eq(lots.id, lotId));
   }
 
-  async savePrice(user: Express.User, lotId: number, body: unknown): Promise<void> {
-    const input = PriceStepSchema.parse(body);
+  async savePrice(user: Express.User, lotId: number, input: PriceStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'price');
     const perTon = input.pricingUnit === 'bale' ? centsPerTonFromBale(input.priceCentsPerBale!, lot.avgBaleWeightLb) : input.priceCentsPerTon!;
     await this.db
@@ -171,7 +165,7 @@ export class LotStepsService {
     return found;
   }
 
-  private lotColumns(input: ReturnType<typeof LotStepSchema.parse>) {
+  private lotColumns(input: LotStep) {
     return {
       title: input.title || defaultLotTitle(input),
       fieldName: input.fieldName,

@@ -1,7 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { labAnalyses, lots } from '../../db/schema';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { ANALYSIS_STEP, completeLot, LOT_STEP, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 
 describe('selling API', () => {
   let t: TestApi;
@@ -141,6 +141,30 @@ describe('selling API', () => {
     const c = await approve();
     const reshaped = await grower.agent.put(`/selling/lots/${c}/quantity`, { ...QUANTITY_STEP, baleType: 'round_5x5' });
     expect(reshaped.body.status).toBe('in_review');
+  }, 60_000);
+
+  it('orders the photos with a chosen cover, and moves the cover on when the cover photo is removed', async () => {
+    const id = await completeLot(grower.agent);
+    const token = await grower.agent.token();
+    const added = await grower.agent.raw.post(`/uploads/lots/${id}/photos`).set('X-XSRF-TOKEN', token).attach('photos', await makeJpeg(800, 600, 3), 'second.jpg');
+    expect(added.status).toBe(201);
+    const before = (await grower.agent.get(`/selling/lots/${id}`)).body.photos as Array<{ id: number; isCover: boolean }>;
+    expect(before).toHaveLength(2);
+    const [first, second] = before.map((p) => p.id) as [number, number];
+
+    const mismatch = await grower.agent.put(`/selling/lots/${id}/photo-order`, { order: [second], coverId: second });
+    expect(mismatch.status).toBe(400);
+    expect(mismatch.body.error.code).toBe('photo_order_mismatch');
+
+    const ordered = await grower.agent.put(`/selling/lots/${id}/photo-order`, { order: [second, first], coverId: second });
+    expect(ordered.status).toBe(200);
+    expect(ordered.body.photos.map((p: { id: number; isCover: boolean }) => [p.id, p.isCover])).toEqual([[second, true], [first, false]]);
+
+    const removed = await grower.agent.delete(`/selling/lots/${id}/photos/${second}`);
+    expect(removed.status).toBe(200);
+    expect(removed.body.photos.map((p: { id: number; isCover: boolean }) => [p.id, p.isCover])).toEqual([[first, true]]);
+    expect((await grower.agent.delete(`/selling/lots/${id}/photos/${second}`)).status).toBe(404);
+    expect((await grower.agent.delete(`/selling/lots/${id}/photos/2147483648`)).status).toBe(404);
   }, 60_000);
 
   it('withdraws and relists, and copies a lot as the start of the next cutting', async () => {

@@ -1,21 +1,16 @@
-import { and, eq } from 'drizzle-orm';
 import { Router } from 'express';
-import { z } from 'zod';
-import { mayViewLot } from '@shared/lifecycle/lot-lifecycle';
 import type { ApiDeps } from '../../api-deps';
-import { labAnalyses, storedFiles } from '../../db/schema';
-import { forbidden, notFound, unauthenticated } from '../../middleware/http-error';
+import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
-import { findLotWithFarm, ownedLot } from '../selling/lot-access';
+import { ownedLot } from '../selling/lot-access';
 import { addLotPhotos } from './photo-upload';
+import { openLabReport } from './report-download';
 import { attachLabReport } from './report-upload';
 import { readingSummary, readLabReportPdf } from './report-reading';
 import { sniffPdf } from './file-sniff';
 import { displayName } from './photo-upload';
 import { prefillFromReading } from '@shared/lab-report/compare-reading';
 import { acceptPhotos, acceptReport, filesOf } from './upload-limits';
-
-const LotParams = z.object({ id: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
 
 /**
  * Bytes in and out: lot photos and the lab report PDF. Uploads are the owning grower's; the report is
@@ -28,22 +23,22 @@ export function uploadsRouter(deps: ApiDeps): Router {
 
   router.post('/lots/:id/photos', requireRole('grower'), async (req, res, next) => {
     // Ownership is checked before the body is read, so strangers' uploads are never buffered.
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     await ownedLot(db, id, req.user);
     acceptPhotos(req, res, next);
   }, async (req, res) => {
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     const { lot } = await ownedLot(db, id, req.user);
     const added = await addLotPhotos(deps, lot, req.user!.id, filesOf(req, 'photo'));
     res.status(201).json({ photos: added });
   });
 
   router.post('/lots/:id/report', requireRole('grower'), async (req, res, next) => {
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     await ownedLot(db, id, req.user);
     acceptReport(req, res, next);
   }, async (req, res) => {
-    const { id } = LotParams.parse(req.params);
+    const { id } = idParams(req.params, { id: 'That lot' });
     const { lot } = await ownedLot(db, id, req.user);
     const [file] = filesOf(req, 'lab report PDF');
     const stored = await attachLabReport(deps, lot, req.user!.id, file!);
@@ -59,23 +54,8 @@ export function uploadsRouter(deps: ApiDeps): Router {
   });
 
   router.get('/lots/:id/report', async (req, res) => {
-    const { id } = LotParams.parse(req.params);
-    if (!req.user) throw unauthenticated();
-    const { lot, farm } = await findLotWithFarm(db, id);
-    const [row] = await db
-      .select({ file: storedFiles, verification: labAnalyses.verification })
-      .from(labAnalyses)
-      .innerJoin(storedFiles, eq(storedFiles.id, labAnalyses.reportFileId))
-      .where(and(eq(labAnalyses.lotId, id), eq(labAnalyses.isCurrent, true)));
-    const viewer = { isOwner: farm.ownerId === req.user.id, isAdmin: req.user.role === 'admin' };
-    // Do not reveal whether an unlisted lot exists.
-    if (!mayViewLot(lot.status, viewer)) throw notFound('That lab report');
-    if (!viewer.isOwner && !viewer.isAdmin && row?.verification !== 'verified') {
-      throw forbidden('The lab report is shown once an admin has verified it.');
-    }
-    if (!row) throw notFound('That lab report');
-    const file = await storage.read(row.file.storageKey);
-    if (!file) throw notFound('That lab report');
+    const { id } = idParams(req.params, { id: 'That lot' });
+    const file = await openLabReport(deps, id, req.user);
     res.setHeader('Content-Type', 'application/pdf');
     res.setHeader('Content-Length', String(file.size));
     res.setHeader('Content-Disposition', `inline; filename="lab-report-lot-${id}.pdf"`);
