@@ -5,11 +5,11 @@ import { CreateBatchSchema } from '@shared/contracts/payouts';
 import type { ApiDeps } from '../../api-deps';
 import { farms } from '../../db/schema';
 import { notFound } from '../../middleware/http-error';
+import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
 import { payoutStatementCsv } from './payout-statement';
 import { PayoutsService } from './payouts.service';
 
-const Id = z.object({ id: z.coerce.number().int().positive('Id must be a positive whole number.') });
 const FarmQuery = z.object({ farmId: z.coerce.number().int().positive('farmId must be a positive whole number.') }).strict();
 
 function sendCsv(res: Response, name: string, csv: string): void {
@@ -35,13 +35,13 @@ export function adminPayoutsRouter(deps: ApiDeps): Router {
     res.status(201).json(await service.createBatch(req.user!, input));
   });
   router.get('/batches/:id', async (req, res) => {
-    res.json(await service.batch(Id.parse(req.params).id));
+    res.json(await service.batch(idParams(req.params, { id: 'That payout batch' }).id));
   });
   router.post('/batches/:id/settle', async (req, res) => {
-    res.json(await service.settle(req.user!, Id.parse(req.params).id));
+    res.json(await service.settle(req.user!, idParams(req.params, { id: 'That payout batch' }).id));
   });
   router.post('/:id/retry', async (req, res) => {
-    res.json(await service.retry(req.user!, Id.parse(req.params).id));
+    res.json(await service.retry(req.user!, idParams(req.params, { id: 'That payout' }).id));
   });
   router.get('/statement.csv', async (req, res) => {
     const { farmId } = FarmQuery.parse(req.query);
