@@ -1,4 +1,4 @@
-import { consistencyFindings, methodFindings, type ConsistencyInput, type MethodNotesInput } from './analysis-findings';
+import { calciumPhosphorusFindings, consistencyFindings, methodFindings, type ConsistencyInput, type MethodNotesInput } from './analysis-findings';
 import type { Finding, Nutrients } from './forage-contract';
 
 const dm: Nutrients = {
@@ -177,3 +177,30 @@ describe('analysis-findings', () => {
 function find(findings: Finding[], code: string): Finding | undefined {
   return findings.find((f) => f.code === code);
 }
+
+describe('calciumPhosphorusFindings', () => {
+  // Ca:P for horses: never below 1:1; 1.5–3:1 for growing horses; mature horses tolerate up to about 8:1
+  // (experts123 equine-nutrition FAQ; common practice). Hand-worked ratios below.
+  it('flags inverted hay: Ca 0.25 % / P 0.30 % = 0.8:1', () => {
+    expect(calciumPhosphorusFindings(0.25, 0.3).map((f) => [f.code, f.severity])).toEqual([['ca-p-inverted', 'warning']]);
+  });
+
+  it('says nothing in the usual range: grass hay Ca 0.4 % / P 0.15 % = 2.7:1', () => {
+    expect(calciumPhosphorusFindings(0.4, 0.15)).toEqual([]);
+  });
+
+  it('leaves alfalfa-like ratios alone, which mature horses tolerate: Ca 1.4 % / P 0.25 % = 5.6:1', () => {
+    expect(calciumPhosphorusFindings(1.4, 0.25)).toEqual([]);
+  });
+
+  it('warns far above the mature range: Ca 1.8 % / P 0.2 % = 9.0:1, and defers to a professional', () => {
+    const [f] = calciumPhosphorusFindings(1.8, 0.2);
+    expect(f).toMatchObject({ code: 'ca-p-far-above-range', severity: 'warning' });
+    expect(f!.message).toMatch(/veterinarian or an equine nutritionist/);
+  });
+
+  it('needs both minerals', () => {
+    expect(calciumPhosphorusFindings(null, 0.2)).toEqual([]);
+    expect(calciumPhosphorusFindings(1, null)).toEqual([]);
+  });
+});

@@ -156,6 +156,8 @@ export function consistencyFindings(input: ConsistencyInput): Finding[] {
     });
   }
 
+  findings.push(...calciumPhosphorusFindings(dm.calciumPct, dm.phosphorusPct));
+
   if (dm.crudeProteinPct > NITRATE_TEST_CP_PCT) {
     findings.push({
       severity: 'info',
@@ -165,6 +167,29 @@ export function consistencyFindings(input: ConsistencyInput): Finding[] {
   }
 
   return findings;
+}
+
+/**
+ * Ca:P ratio bands for horses (experts123 equine-nutrition FAQ; common practice): never less calcium than
+ * phosphorus (below 1:1 is "inverted" and draws calcium from bone); about 2:1 is the aim and 1.5–3:1 the
+ * range for growing horses; mature horses tolerate up to about 8:1 when phosphorus is adequate. Alfalfa's
+ * usual 4–6:1 is therefore not flagged; only an inverted ratio or one far above 8:1.
+ */
+export const CA_P_RATIO = { inverted: 1, matureMax: 8 } as const;
+
+/** Findings on the calcium : phosphorus ratio of the hay (both % DM), when both are reported. */
+export function calciumPhosphorusFindings(calciumPct: number | null, phosphorusPct: number | null): Finding[] {
+  if (calciumPct === null || phosphorusPct === null || phosphorusPct <= 0) return [];
+  const ratio = calciumPct / phosphorusPct;
+  const text = `${ratio.toFixed(1)}:1`;
+  const vet = 'Balance the ration with your veterinarian or an equine nutritionist.';
+  if (ratio < CA_P_RATIO.inverted) {
+    return [{ severity: 'warning', code: 'ca-p-inverted', message: `Calcium : phosphorus is ${text}, inverted (less calcium than phosphorus); fed alone this hay can draw calcium from the horse's bones. ${vet}` }];
+  }
+  if (ratio > CA_P_RATIO.matureMax) {
+    return [{ severity: 'warning', code: 'ca-p-far-above-range', message: `Calcium : phosphorus is ${text}, far above the up to about ${CA_P_RATIO.matureMax}:1 that mature horses tolerate; check phosphorus is adequate. ${vet}` }];
+  }
+  return [];
 }
 
 function withoutNsc(dm: Nutrients): Omit<Nutrients, 'nscPct'> {

@@ -1,4 +1,4 @@
-import { afgcLegumeGrade, gradeForage, usdaAlfalfaCriterionGrade, usdaAlfalfaGrade, usdaGrassGrade } from './grades';
+import { afgcGradeRule, afgcLegumeGrade, gradeForage, usdaAlfalfaCriterionGrade, usdaAlfalfaGrade, usdaGradeRule, usdaGrassGrade } from './grades';
 import { relativeFeedValue } from './rfv';
 import { tdnFromAdf } from './tdn';
 
@@ -144,5 +144,20 @@ describe('grades', () => {
       expect(grades.usda.name).toBe('Supreme');
       expect(grades.afgc?.name).toBe('Prime');
     });
+  });
+});
+
+describe('grading rule in words', () => {
+  // USDA AMS (S7): the overall alfalfa grade is the lowest any criterion gives; grass hay on CP alone.
+  it('names the measure that set an alfalfa grade', () => {
+    const grade = usdaAlfalfaGrade({ ...supreme, ndfPct: 41 });
+    expect(usdaGradeRule(grade)).toBe(
+      'The USDA AMS alfalfa grade is the worst grade any one measure gives (ADF, NDF, RFV, TDN and crude protein, on dry matter); here NDF sets it at Fair.',
+    );
+  });
+
+  it('states the grass and AFGC rules with their printed bands (S7, S9)', () => {
+    expect(usdaGradeRule(usdaGrassGrade(10))).toMatch(/crude protein alone \(Premium above 13 %, Good 9–13 %, Fair 5–9 %, Low below 5 %.*this hay is Good\.$/);
+    expect(afgcGradeRule(afgcLegumeGrade(130))).toMatch(/RFV alone \(Prime above 151, Grade 1 125–151.*this hay is Grade 1\.$/);
   });
 });

@@ -184,3 +184,25 @@ export function gradeForage(forageClass: ForageClass, inputs: AlfalfaGradeInputs
   if (forageClass === 'grass') return { usda: usdaGrassGrade(inputs.crudeProteinPct), afgc: null };
   return { usda: usdaAlfalfaGrade(inputs), afgc: afgcLegumeGrade(inputs.rfv) };
 }
+
+/** The USDA rule in one line, for places that show a grade without its measures (lot cards). */
+export const USDA_GRADE_RULE_SHORT =
+  'USDA grade: alfalfa and mixed hay take the worst grade of ADF, NDF, RFV, TDN and crude protein; grass hay is graded on crude protein alone.';
+
+const CRITERION_NAMES: Record<UsdaCriterion, string> = { adf: 'ADF', ndf: 'NDF', rfv: 'RFV', tdn: 'TDN', crudeProtein: 'crude protein' };
+
+/** The USDA grading rule in words, naming the measure that set this grade. */
+export function usdaGradeRule(grade: UsdaGrade): string {
+  if (grade.table === 'usda-ams-2003-grass') {
+    return `USDA AMS grass hay is graded on crude protein alone (Premium above 13 %, Good 9–13 %, Fair 5–9 %, Low below 5 % of dry matter); this hay is ${grade.name}.`;
+  }
+  return (
+    `The USDA AMS alfalfa grade is the worst grade any one measure gives (ADF, NDF, RFV, TDN and crude protein, on dry matter); ` +
+    `here ${CRITERION_NAMES[grade.basis]} sets it at ${grade.name}.`
+  );
+}
+
+/** The AFGC grading rule in words. */
+export function afgcGradeRule(grade: AfgcGrade): string {
+  return `AFGC legume grades follow RFV alone (Prime above 151, Grade 1 125–151, Grade 2 103–124, Grade 3 87–102, Grade 4 75–86, Grade 5 below 75); this hay is ${grade.name}.`;
+}

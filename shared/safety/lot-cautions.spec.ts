@@ -37,3 +37,23 @@ describe('lotCautions', () => {
     for (const c of all.filter((c) => c.code !== 'outside-storage')) expect(c.message).toMatch(/veterinarian|fire service|fire guidance/);
   });
 });
+
+describe('lotCautions — botulism in wet or wrapped bales', () => {
+  // Wright & Kenney, OMAFRA (domain brief S29): wet, fermented round-bale haylage and torn wrap carry botulism;
+  // horses are the most sensitive domestic species. Alberta Agriculture: 20 % is the top of any safe baling range.
+  it('cautions when the bales were made or tested above 20 % moisture, and not at or below it', () => {
+    expect(codes({ ...base, moistureAtBalingPct: 20 })).not.toContain('botulism');
+    expect(codes({ ...base, moistureAtBalingPct: 35, baleType: 'round_4x5' })).toContain('botulism');
+    expect(codes({ ...base, moistureAtBalingPct: null, dryMatterPct: 60 })).toContain('botulism');
+    expect(codes({ ...base, moistureAtBalingPct: null, dryMatterPct: 88 })).not.toContain('botulism');
+  });
+
+  it('says more for legume and round bales, and defers to a veterinarian', () => {
+    const alfalfa = lotCautions({ ...base, forageClass: 'legume', baleType: 'round_5x5', moistureAtBalingPct: 45 }).find((c) => c.code === 'botulism')!;
+    expect(alfalfa.message).toMatch(/legume bales are the riskier kind/);
+    expect(alfalfa.message).toMatch(/Large round bales wrapped wet/);
+    expect(alfalfa.message).toMatch(/veterinarian/);
+    const grass = lotCautions({ ...base, moistureAtBalingPct: 45 }).find((c) => c.code === 'botulism')!;
+    expect(grass.message).not.toMatch(/legume/);
+  });
+});

@@ -2,7 +2,7 @@ import type { BaleType } from '../contracts/lots';
 
 /** A safety note shown with a lot; each ends by deferring to a professional or local guidance. */
 export interface Caution {
-  code: 'storage-moisture' | 'blister-beetles' | 'mould-dust' | 'high-nsc' | 'outside-storage';
+  code: 'storage-moisture' | 'blister-beetles' | 'mould-dust' | 'high-nsc' | 'outside-storage' | 'botulism';
   title: string;
   message: string;
 }
@@ -30,6 +30,19 @@ export interface CautionInput {
   moistureAtBalingPct: number | null;
   storage: 'barn' | 'tarped' | 'outside';
   nscFlag: 'within-advised-limit' | 'above-strict-limit' | 'above-upper-limit' | null;
+  /** Dry matter of the lab sample, % as fed, when known. */
+  dryMatterPct?: number | null;
+}
+
+/**
+ * Above this moisture (% as fed) a bale ferments rather than cures: the top of Alberta Agriculture's safe
+ * baling range for any bale type (20 %, small squares). Wet or wrapped bales of that kind (baleage,
+ * haylage) carry a botulism risk to horses (Wright & Kenney, OMAFRA, domain brief S29).
+ */
+export const FERMENTING_BALE_MOISTURE_PCT = 20;
+
+function isRound(baleType: BaleType): boolean {
+  return baleType.startsWith('round');
 }
 
 /** The cautions that apply to a lot, most serious first. */
@@ -44,6 +57,23 @@ export function lotCautions(lot: CautionInput): Caution[] {
         `This lot was baled at ${lot.moistureAtBalingPct}% moisture, above the ${safe}% usually advised for this bale type. ` +
         'Wet hay can heat, lose protein and catch fire in the stack. Check bale temperatures with a probe thermometer ' +
         '(150 °F: check twice a day; 175 °F: call the fire service) and follow local fire guidance.',
+    });
+  }
+  const labMoisture = lot.dryMatterPct === null || lot.dryMatterPct === undefined ? null : 100 - lot.dryMatterPct;
+  const wettest = Math.max(lot.moistureAtBalingPct ?? 0, labMoisture ?? 0);
+  if (wettest > FERMENTING_BALE_MOISTURE_PCT) {
+    // Legumes resist the acid fermentation that keeps clostridia down (pH 4.5, S29), so wet alfalfa is the riskier case (from memory).
+    const forage =
+      lot.forageClass === 'grass'
+        ? ''
+        : ' Legume hay such as alfalfa ferments less well than grass, so wet or wrapped legume bales are the riskier kind.';
+    const bale = isRound(lot.baleType) ? ' Large round bales wrapped wet, or with torn wrap, are the classic source.' : '';
+    out.push({
+      code: 'botulism',
+      title: 'Wet or wrapped bales: botulism risk',
+      message:
+        `At about ${wettest.toFixed(0)}% moisture these bales ferment rather than cure, like baleage, which can carry botulism; horses are the most sensitive livestock to it.${bale}${forage} ` +
+        'Do not feed bales that are torn, smell off or hold animal remains, and ask your veterinarian about botulism vaccination before feeding wet or wrapped hay.',
     });
   }
   if (lot.forageClass !== 'grass') {

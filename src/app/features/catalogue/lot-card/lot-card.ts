@@ -3,6 +3,7 @@ import { MatButton } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { LotSummary } from '@shared/contracts/lots';
+import { USDA_GRADE_RULE_SHORT } from '@shared/forage/grades';
 import { dollars, fixed } from '../format';
 import { CompareSelection } from '../lot-compare/compare-selection';
 
@@ -19,6 +20,7 @@ export class LotCard {
   readonly lot = input.required<LotSummary>();
 
   protected readonly compared = computed(() => this.selection.ids().includes(this.lot().id));
+  protected readonly gradeRule = USDA_GRADE_RULE_SHORT;
   protected readonly forage = computed(() => FORAGE_TYPE_LABELS[this.lot().forageType]);
   protected readonly bale = computed(() => BALE_TYPE_LABELS[this.lot().baleType]);
   protected readonly srcset = computed(() => {

@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
 import type { LotAnalysisView, LotDetail } from '@shared/contracts/lots';
-import type { ForageEvaluation, Nutrients } from '@shared/forage';
+import { afgcGradeRule, type ForageEvaluation, type Nutrients, usdaGradeRule } from '@shared/forage';
 import { lotCautions } from '@shared/safety/lot-cautions';
 import { fixed } from '../format';
 import { DE_METHOD_LABELS, FIGURE_MEANINGS, NSC_FLAG_TEXT, NSC_METHOD_LABELS, TDN_METHOD_LABELS } from './figure-notes';
@@ -44,7 +44,13 @@ export class LotAnalysisPanel {
       moistureAtBalingPct: lot.moistureAtBalingPct,
       storage: lot.storage,
       nscFlag: this.evaluation().nscFlag,
+      dryMatterPct: this.analysis().dryMatterPct,
     });
+  });
+  protected readonly usdaRule = computed(() => usdaGradeRule(this.evaluation().grades.usda));
+  protected readonly afgcRule = computed(() => {
+    const afgc = this.evaluation().grades.afgc;
+    return afgc === null ? null : afgcGradeRule(afgc);
   });
   protected readonly deMcalPerLbDm = computed(() => this.evaluation().horseDe.mcalPerLbDm);
 
