@@ -11,6 +11,7 @@ import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
 import { adminRouter } from './features/admin/admin.router';
 import { adminPayoutsRouter, growerPayoutsRouter } from './features/payouts/payouts.router';
+import { adminClaimsRouter, claimsRouter } from './features/claims/claims.router';
 import { forageRouter } from './features/forage/forage.router';
 import { farmsRouter } from './features/farms/farms.router';
 import { sellingRouter } from './features/selling/selling.router';
@@ -74,6 +75,8 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(deps));
   api.use('/admin/payouts', adminPayoutsRouter(deps));
+  api.use('/admin/claims', adminClaimsRouter(deps));
+  api.use('/claims', claimsRouter(deps));
   api.use('/admin', adminRouter(deps));
   api.use('/payouts', growerPayoutsRouter(deps));
   api.use('/forage', forageRouter());

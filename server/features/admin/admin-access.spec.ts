@@ -4,6 +4,7 @@ import { signedInUser } from '../../../tests/support/grower-lot';
 import { reviewRouter } from '../review/review.router';
 import { adminRouter } from './admin.router';
 import { adminPayoutsRouter } from '../payouts/payouts.router';
+import { adminClaimsRouter } from '../claims/claims.router';
 
 /** Every route a router declares, read from the router itself so a new admin endpoint is covered at once. */
 function routesOf(router: Router, mount: string): { method: string; path: string }[] {
@@ -20,7 +21,7 @@ describe('admin endpoints', () => {
   let routes: { method: string; path: string }[];
   beforeAll(async () => {
     t = await startTestApi();
-    routes = [...routesOf(adminRouter(t.deps), '/admin'), ...routesOf(adminPayoutsRouter(t.deps), '/admin/payouts'), ...routesOf(reviewRouter(t.deps), '/review')];
+    routes = [...routesOf(adminRouter(t.deps), '/admin'), ...routesOf(adminPayoutsRouter(t.deps), '/admin/payouts'), ...routesOf(adminClaimsRouter(t.deps), '/admin/claims'), ...routesOf(reviewRouter(t.deps), '/review')];
   });
   afterAll(() => t.close());
 

@@ -1,0 +1,104 @@
+import { randomUUID } from 'node:crypto';
+import { and, eq } from 'drizzle-orm';
+import { auditEvents, orders } from '../../db/schema';
+import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+import { signedInUser } from '../../../tests/support/grower-lot';
+import { deliveredOrder, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
+import { simplePdf } from '../../db/seed/simple-pdf';
+
+const DAY = 86_400_000;
+// The listing (tests/support/fixtures createLot): alfalfa, DM 88, CP 20, ADF 30, NDF 40 on DM.
+const RETEST = { labName: 'Invented County Forage Lab', labCertified: true, reportDate: '2026-09-14', values: { basis: 'dm', dryMatterPct: 88, crudeProteinPct: 16.5, adfPct: 34.5, ndfPct: 46 } };
+
+describe('quality claims', () => {
+  let t: TestApi;
+  let admin: Awaited<ReturnType<typeof signedInUser>>;
+  let buyer: Awaited<ReturnType<typeof signedInUser>>;
+  let buyerId: number;
+  beforeAll(async () => {
+    t = await startTestApi();
+    admin = await signedInUser(t, 'admin');
+    buyer = await signedInUser(t, 'buyer');
+    buyerId = (await buyer.agent.get('/auth/me')).body.user.id;
+  });
+  afterAll(() => t.close());
+
+  const now = () => t.clock.now().getTime();
+  const deliveredYesterday = async (farmId: number) =>
+    deliveredOrder(t.deps.db, t.deps.stripe, farmId, { goodsCents: 120_000, freightCents: 10_000, feeCents: 3_600, status: 'delivered', deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() + 2 * DAY), buyerId });
+
+  it('lets the buyer report within the window with a retest, and nobody else', async () => {
+    const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
+    const late = await deliveredTenDaysAgo(g.farm.id);
+    expect((await buyer.agent.post('/claims', { orderId: late.id, reason: 'Dusty bales throughout the load.' })).status).toBe(409);
+    const order = await deliveredYesterday(g.farm.id);
+    const other = await signedInUser(t, 'buyer');
+    expect((await other.agent.post('/claims', { orderId: order.id, reason: 'Not my order at all, though.' })).status).toBe(404);
+    expect((await buyer.agent.post('/claims', { orderId: order.id, reason: 'short' })).status).toBe(400);
+    const res = await buyer.agent.post('/claims', { orderId: order.id, reason: 'Leafless and stemmy; our lab found far less protein.', retest: RETEST });
+    expect(res.status).toBe(201);
+    expect(res.body).toMatchObject({ status: 'open', judgement: { outside: ['Crude protein (CP)', 'Acid detergent fibre (ADF)', 'Neutral detergent fibre (NDF)'] } });
+    const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
+    expect(o!.status).toBe('claimed');
+    const token = await buyer.agent.token();
+    const pdf = await buyer.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', token).attach('report', simplePdf(['Retest', 'Crude protein 16.5 %']), 'retest.pdf');
+    expect(pdf.status).toBe(201);
+    expect(pdf.body.retest.reportUrl).toBe(`/api/claims/${res.body.id}/retest`);
+    expect((await other.agent.get(`/claims/${res.body.id}`)).status).toBe(404);
+  }, 60_000);
+
+  it('ends in a partial refund once, e-mails both sides, audits it, and lowers the grower’s payout for the order', async () => {
+    const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
+    const order = await deliveredYesterday(g.farm.id);
+    const claim = (await buyer.agent.post('/claims', { orderId: order.id, reason: 'Leafless and stemmy; our lab found far less protein.', retest: RETEST })).body;
+    const before = await platformBalance(t.deps.stripe);
+    const decision = { outcome: 'partial', refundCents: 20_000, note: 'The retest is outside tolerance on CP, ADF and NDF; $200 back on the hay.' };
+    const [a, b] = await Promise.all([admin.agent.post(`/admin/claims/${claim.id}/resolve`, decision), admin.agent.post(`/admin/claims/${claim.id}/resolve`, decision)]);
+    expect([a.status, b.status].sort()).toEqual([200, 409]);
+    expect(before - (await platformBalance(t.deps.stripe))).toBe(20_000);
+    const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
+    expect(o).toMatchObject({ status: 'completed', refundedCents: 20_000 });
+    const refunds = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.action, 'refund.issued'), eq(auditEvents.entityId, String(order.id))));
+    expect(refunds).toEqual([expect.objectContaining({ before: { refundedCents: 0 }, after: { refundedCents: 20_000 } })]);
+
+    await t.drainJobs();
+    const decided = t.mails.filter((m) => m.subject === `Claim decided: order ${order.id}`).map((m) => m.to).sort();
+    expect(decided).toEqual([buyer.email, g.email].sort());
+
+    // All three roles see the outcome.
+    const grower = t.agent();
+    await grower.post('/auth/sign-in', { email: g.email, password: g.password });
+    for (const agent of [buyer.agent, grower, admin.agent]) {
+      expect((await agent.get(`/claims/${claim.id}`)).body).toMatchObject({ status: 'upheld', refundCents: 20_000 });
+    }
+
+    // The grower's payout for the order: 1,200.00 hay + 100.00 freight − 200.00 refunded.
+    const due = (await admin.agent.get('/admin/payouts/due')).body.items.find((i: { farmId: number }) => i.farmId === g.farm.id);
+    expect(due.totalCents).toBe(110_000);
+    const batch = (await admin.agent.post('/admin/payouts/batches', { requestKey: randomUUID(), farmIds: [g.farm.id] })).body;
+    const settled = await admin.agent.post(`/admin/payouts/batches/${batch.id}/settle`);
+    expect(settled.body.payouts[0]).toMatchObject({ status: 'sent', amountCents: 110_000 });
+  }, 60_000);
+
+  it('rejects a claim without money moving, and a full refund returns everything the buyer paid', async () => {
+    const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
+    const kept = await deliveredYesterday(g.farm.id);
+    const c1 = (await buyer.agent.post('/claims', { orderId: kept.id, reason: 'Smells a bit different from last year.' })).body;
+    const before = await platformBalance(t.deps.stripe);
+    const rejected = await admin.agent.post(`/admin/claims/${c1.id}/resolve`, { outcome: 'reject', note: 'No retest and the photos show bright, leafy hay.' });
+    expect(rejected.body).toMatchObject({ status: 'declined', refundCents: 0 });
+    expect(await platformBalance(t.deps.stripe)).toBe(before);
+
+    const bad = await deliveredYesterday(g.farm.id);
+    const c2 = (await buyer.agent.post('/claims', { orderId: bad.id, reason: 'Mouldy through the middle of most bales.', retest: RETEST })).body;
+    expect((await admin.agent.post(`/admin/claims/${c2.id}/resolve`, { outcome: 'partial', refundCents: 999_999, note: 'Too much on purpose.' })).status).toBe(400);
+    const full = await admin.agent.post(`/admin/claims/${c2.id}/resolve`, { outcome: 'full', note: 'Mould confirmed; everything back.' });
+    expect(full.body).toMatchObject({ status: 'upheld', refundCents: 133_600, refundableCents: 0 });
+    const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, bad.id));
+    expect(o!.status).toBe('refunded');
+  }, 60_000);
+
+  async function deliveredTenDaysAgo(farmId: number) {
+    return deliveredOrder(t.deps.db, t.deps.stripe, farmId, { goodsCents: 50_000, status: 'delivered', deliveredAt: new Date(now() - 10 * DAY), acceptBy: new Date(now() + DAY), buyerId });
+  }
+});
