@@ -4,6 +4,7 @@ import { ForageEvaluationRequestSchema } from '../forage';
 import type { ReadingComparison, ReportReading } from './report-reading';
 import { FORAGE_TYPE_LABELS } from './labels';
 import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetail, type LotStatus, type PhotoView } from './lots';
+import { lbToShortTons, shortTonsToLb } from '../units/mass';
 
 /*
  * Contracts of the grower's side: farm profile, the guided lot form (one schema per step), the
@@ -117,7 +118,7 @@ export const QuantityStepSchema = z
     }
     if (derived.baleCount < 1 || derived.baleCount > 100_000) ctx.addIssue({ code: 'custom', path: ['baleCount'], message: 'That works out at fewer than 1 or more than 100,000 bales.' });
     if (q.baleCount !== null && q.avgBaleWeightLb !== null && q.totalTons !== null) {
-      const tons = (q.baleCount * q.avgBaleWeightLb) / 2000;
+      const tons = lbToShortTons(q.baleCount * q.avgBaleWeightLb);
       if (Math.abs(tons - q.totalTons) > Math.max(0.05, tons * 0.02)) {
         ctx.addIssue({ code: 'custom', path: ['totalTons'], message: `${q.baleCount} bales of ${q.avgBaleWeightLb} lb make ${tons.toFixed(2)} tons, not ${q.totalTons}; leave one of the three blank.` });
       }
@@ -131,9 +132,9 @@ export type QuantityStep = z.infer<typeof QuantityStepSchema>;
 /** Completes bale count / average weight / total tons from any two of them (tons = bales × lb ÷ 2000). */
 export function deriveQuantity(q: { baleCount: number | null; avgBaleWeightLb: number | null; totalTons: number | null }): { baleCount: number; avgBaleWeightLb: number; totalTons: number } | null {
   const { baleCount, avgBaleWeightLb, totalTons } = q;
-  if (baleCount !== null && avgBaleWeightLb !== null) return { baleCount, avgBaleWeightLb, totalTons: (baleCount * avgBaleWeightLb) / 2000 };
+  if (baleCount !== null && avgBaleWeightLb !== null) return { baleCount, avgBaleWeightLb, totalTons: lbToShortTons(baleCount * avgBaleWeightLb) };
   if (totalTons !== null && avgBaleWeightLb !== null && avgBaleWeightLb > 0) {
-    return { baleCount: Math.max(1, Math.round((totalTons * 2000) / avgBaleWeightLb)), avgBaleWeightLb, totalTons };
+    return { baleCount: Math.max(1, Math.round(shortTonsToLb(totalTons) / avgBaleWeightLb)), avgBaleWeightLb, totalTons };
   }
   if (totalTons !== null && baleCount !== null && baleCount > 0) return { baleCount, avgBaleWeightLb: (totalTons * 2000) / baleCount, totalTons };
   return null;

@@ -12,6 +12,7 @@ import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users }
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
 import { simplePdf } from './simple-pdf';
 import { DEMO_BUYERS, DEMO_FARMS, DEMO_LABS, DEMO_LOTS, DEMO_PASSWORDS, FORAGE_PROFILES, type DemoLotPlan } from './demo-scenario';
+import { balesToTons } from '@shared/units';
 
 export interface SeedOptions {
   db: Db;
@@ -135,7 +136,7 @@ async function insertDemoLot(db: Db, storage: FileStorage, plan: DemoLotPlan, in
     baleShape: square as 'small-square' | 'large-square' | 'round',
     harvestStartedOn,
     harvestEndedOn,
-    lotTons: (plan.bales * plan.baleWeightLb) / 2000,
+    lotTons: balesToTons(plan.bales, plan.baleWeightLb),
     sampledBy: index % 3 === 0 ? 'Grower' : 'County extension agent (demo)',
   };
   const samplingResult = evaluateSampling(sampling, { listedOn });

@@ -44,7 +44,7 @@ describe('GET /lots/compare', () => {
     expect(p.tons).toBe(12);
     expect(p.freightCents).toBe(0);
     expect(p.perDmTonCents).toBeCloseTo(20000 / 0.9, 6);
-    // 2000 lb × 0.90 × 0.10 = 180 lb of protein per ton.
+    // A ton of 2,000 lb × 0.90 × 0.10 = 180 lb of protein per ton.
     expect(p.perLbCrudeProteinCents).toBeCloseTo(20000 / 180, 6);
     // 907.2 kg × 0.90 × 2.0 Mcal = 1,633 Mcal per ton.
     expect(p.perMcalDeCents).toBeCloseTo(20000 / (KG_PER_SHORT_TON * 0.9 * 2.0), 6);

@@ -5,6 +5,7 @@ import { costPerLbCrudeProteinCents, costPerMcalDeCents, costPerTonDryMatterCent
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { farmDistanceSql, locateZip } from '../geo/geo';
+import { balesToTons } from '@shared/units';
 
 /** Lots side by side: nutrients on a DM basis and cost per unit of what the horse gets, delivered to a ZIP. */
 export async function compareLots(db: Db, query: LotCompareQuery): Promise<LotComparison> {
@@ -24,7 +25,7 @@ export async function compareLots(db: Db, query: LotCompareQuery): Promise<LotCo
     if (!row) continue;
     const { lot, farm, analysis } = row;
     const distanceMi = row.distanceMi === null ? null : Number(row.distanceMi);
-    const tonsAvailable = (lot.balesAvailable * lot.avgBaleWeightLb) / 2000;
+    const tonsAvailable = balesToTons(lot.balesAvailable, lot.avgBaleWeightLb);
     items.push({
       id: lot.id,
       title: lot.title,

@@ -7,6 +7,7 @@ import { farms, labAnalyses, lots, samplingRecords } from '../../db/schema';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { locateZip } from '../geo/geo';
 import { LotsService } from './lots.service';
+import { lbToShortTons } from '@shared/units';
 
 /**
  * The catalogue searches its trigger-kept search rows; these tests hold it to a plain reference: every lot
@@ -173,7 +174,7 @@ describe('catalogue search against a plain reference', () => {
         (q.cutting === undefined || r.cutting === q.cutting) &&
         (q.harvestYear === undefined || Number(r.harvest.slice(0, 4)) === q.harvestYear) &&
         (q.priceMax === undefined || r.price_cents_per_ton <= q.priceMax * 100) &&
-        (q.tonsMin === undefined || (r.bales_available * r.avg_bale_weight_lb) / 2000 >= q.tonsMin) &&
+        (q.tonsMin === undefined || lbToShortTons(r.bales_available * r.avg_bale_weight_lb) >= q.tonsMin) &&
         (!q.compliantOnly || r.compliant === true) &&
         (!q.verifiedOnly || (r.verification === 'verified' && r.lab_certified)) &&
         (q.radiusMi === undefined || r.distance! <= q.radiusMi),

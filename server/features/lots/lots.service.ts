@@ -7,6 +7,7 @@ import { farms, labAnalyses, lots, lotSearch, photos, samplingRecords, type Phot
 import { farmDistanceSql, farmWithinSql, locateZip } from '../geo/geo';
 import { evaluationOf } from '../selling/analysis-values';
 import { samplingFactsOf, samplingReportOf } from './sampling-report';
+import { balesToTons } from '@shared/units';
 
 export function photoView(row: { id: number; altText: string; width: number; height: number; isCover: boolean; variants: PhotoVariant[] }): PhotoView {
   return {
@@ -182,7 +183,7 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: C
     baleCount: lot.baleCount,
     balesAvailable: lot.balesAvailable,
     avgBaleWeightLb: lot.avgBaleWeightLb,
-    tonsAvailable: (lot.balesAvailable * lot.avgBaleWeightLb) / 2000,
+    tonsAvailable: balesToTons(lot.balesAvailable, lot.avgBaleWeightLb),
     pricingUnit: lot.pricingUnit,
     priceCentsPerTon: lot.priceCentsPerTon,
     priceCentsPerBale: lot.priceCentsPerBale,

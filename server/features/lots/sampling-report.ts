@@ -1,6 +1,7 @@
 import { baleShapeOf } from '@shared/contracts/lots';
 import { evaluateSampling, type SamplingEvaluation, type SamplingRecord } from '@shared/forage';
 import type { lots, samplingRecords } from '../../db/schema';
+import { balesToTons } from '@shared/units';
 
 type LotFacts = Pick<typeof lots.$inferSelect, 'baleType' | 'harvestStartedOn' | 'harvestEndedOn' | 'baleCount' | 'avgBaleWeightLb'>;
 type SamplingFacts = Pick<
@@ -28,7 +29,7 @@ export function samplingRecordOf(lot: LotFacts, s: SamplingFacts): SamplingRecor
     baleShape: baleShapeOf(lot.baleType),
     harvestStartedOn: lot.harvestStartedOn,
     harvestEndedOn: lot.harvestEndedOn,
-    lotTons: (lot.baleCount * lot.avgBaleWeightLb) / 2000,
+    lotTons: balesToTons(lot.baleCount, lot.avgBaleWeightLb),
   };
 }
 

@@ -87,7 +87,7 @@ describe('planner API', () => {
         lot: { dryMatterPct: 88, crudeProteinPctDm: 10, deMcalPerKgDm: 2.0, baleWeightLb: 1000 },
       });
       expect(res.status).toBe(200);
-      // 4 × 499.0 kg × 2 % = 39.9 kg DM/day; ÷ 0.88 = 45.4 kg as-fed = 100.0 lb/day; × 365 / 2000 = 18.25 t; ÷ 0.9 = 20.3 t.
+      // 4 × 499.0 kg × 2 % = 39.9 kg DM/day; ÷ 0.88 = 45.4 kg as-fed = 100.0 lb/day; × 365 ÷ 2,000 lb a ton = 18.25 t; ÷ 0.9 = 20.3 t.
       expect(res.body.totals.dmiKgPerDay).toBeCloseTo(39.92, 1);
       expect(res.body.lot.purchaseTons).toBeCloseTo(20.28, 1);
       expect(res.body.lot.bales).toBe(41);

@@ -5,6 +5,7 @@ import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '@shared/planner
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { farmDistanceSql, farmWithinSql, locateZip, type ZipPlace } from '../geo/geo';
+import { balesToTons } from '@shared/units';
 
 /** More candidates than this slows the whole-load search without changing realistic plans. */
 export const MAX_PLAN_CANDIDATES = 30;
@@ -49,7 +50,7 @@ export async function loadPlanCandidates(db: Db, zip: string, maxDistanceMi: num
       ...r,
       distanceMi: Number(r.distanceMi),
       freightCentsPerLoadedMile: r.freightCentsPerLoadedMile ?? 0,
-      tonsAvailable: (r.balesAvailable * r.avgBaleWeightLb) / 2000,
+      tonsAvailable: balesToTons(r.balesAvailable, r.avgBaleWeightLb),
     })),
   };
 }

@@ -9,6 +9,7 @@ import { HttpError } from '../../middleware/http-error';
 import { LotsService } from '../lots/lots.service';
 import { ownedLot } from './lot-access';
 import { editableLot } from './lot-view';
+import { balesToTons } from '@shared/units';
 
 /** Submitting, withdrawing, relisting and copying lots, and the grower's list of them. */
 export class LotLifecycleService {
@@ -104,7 +105,7 @@ export class LotLifecycleService {
     const covers = await new LotsService(this.db).coversFor(rows.map((r) => r.id));
     return rows.map(({ avgBaleWeightLb, updatedAt, ...r }) => ({
       ...r,
-      tonsAvailable: (r.balesAvailable * avgBaleWeightLb) / 2000,
+      tonsAvailable: balesToTons(r.balesAvailable, avgBaleWeightLb),
       cover: covers.get(r.id) ?? null,
       updatedAt: updatedAt.toISOString(),
     }));

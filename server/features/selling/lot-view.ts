@@ -7,6 +7,7 @@ import { photoView } from '../lots/lots.service';
 import { samplingFactsOf, samplingReportOf } from '../lots/sampling-report';
 import { enteredValuesOf, evaluationOf } from './analysis-values';
 import { findLotWithFarm } from './lot-access';
+import { balesToTons } from '@shared/units';
 
 /** URL of a lot's lab report PDF (access-checked, see uploads.router). */
 export const reportUrl = (lotId: number) => `/api/uploads/lots/${lotId}/report`;
@@ -19,7 +20,7 @@ export async function editableLot(db: Db, lotId: number, clock: Clock): Promise<
   const [report] = analysis?.reportFileId ? await db.select().from(storedFiles).where(eq(storedFiles.id, analysis.reportFileId)) : [];
   const photoRows = await db.select().from(photos).where(eq(photos.lotId, lotId)).orderBy(asc(photos.position), desc(photos.isCover), asc(photos.id));
   const saved = (step: (typeof LOT_FORM_STEPS)[number]) => lot.draftStep >= LOT_FORM_STEPS.indexOf(step) + 1;
-  const totalTons = (lot.baleCount * lot.avgBaleWeightLb) / 2000;
+  const totalTons = balesToTons(lot.baleCount, lot.avgBaleWeightLb);
 
   const view: EditableLot = {
     id: lot.id,
