@@ -226,7 +226,7 @@ async function addDemoPhotos(db: Db, storage: FileStorage, lotId: number, plan: 
   for (let p = 0; p < count; p++) {
     const jpeg = await drawDemoBalePhoto(profile.tint, index * 10 + p, plan.baleType.startsWith('round'));
     const id = randomUUID();
-    const originalKey = `originals/${id}.jpg`;
+    const originalKey = `private/originals/${id}.jpg`;
     await storage.put(originalKey, jpeg);
     const [file] = await db
       .insert(storedFiles)

@@ -1,7 +1,7 @@
 import { and, asc, eq } from 'drizzle-orm';
 import type { PhotoOrder } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api-deps';
-import { photos } from '../../db/schema';
+import { photos, storedFiles } from '../../db/schema';
 import { HttpError, notFound } from '../../middleware/http-error';
 import { ownedLot } from '../selling/lot-access';
 
@@ -38,11 +38,13 @@ export class LotPhotosService {
         const [next] = await tx.select({ id: photos.id }).from(photos).where(eq(photos.lotId, lotId)).orderBy(asc(photos.position), asc(photos.id)).limit(1);
         if (next) await tx.update(photos).set({ isCover: true }).where(eq(photos.id, next.id));
       }
-      return row;
+      // The original (camera metadata, GPS) goes with the photo: its record here, its file below.
+      const [original] = row.originalFileId ? await tx.delete(storedFiles).where(eq(storedFiles.id, row.originalFileId)).returning({ key: storedFiles.storageKey }) : [];
+      return { variants: row.variants, originalKey: original?.key };
     });
-    // The row is gone, so the public variants can go; the original upload stays in stored_files.
-    const results = await Promise.allSettled(removed.variants.map((v) => storage.remove(v.key)));
+    const keys = [...removed.variants.map((v) => v.key), ...(removed.originalKey ? [removed.originalKey] : [])];
+    const results = await Promise.allSettled(keys.map((key) => storage.remove(key)));
     const failed = results.filter((r) => r.status === 'rejected').length;
-    if (failed) logger.warn({ photoId, failed }, 'some photo variants could not be removed');
+    if (failed) logger.warn({ photoId, failed }, 'some photo files could not be removed');
   }
 }

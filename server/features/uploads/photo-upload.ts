@@ -52,7 +52,7 @@ export async function addLotPhotos(deps: Pick<ApiDeps, 'db' | 'storage'>, lot: L
     prepared.push({
       file,
       id,
-      originalKey: `originals/${id}.${sniffed[i]!.extension}`,
+      originalKey: `private/originals/${id}.${sniffed[i]!.extension}`,
       mimeType: sniffed[i]!.mimeType,
       width: rendered.width,
       height: rendered.height,
