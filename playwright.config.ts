@@ -34,6 +34,10 @@ export default defineConfig({
       PORT: String(port),
       PUBLIC_URL: `http://127.0.0.1:${port}`,
       NODE_ENV: 'production',
+      // Production refuses the published development secrets: the end-to-end server gets its own.
+      SESSION_SECRET: 'e2e-session-secret-not-the-public-default',
+      ADMIN_PASSWORD: 'e2e-admin-password-unused-by-the-server',
+      STRIPE_WEBHOOK_SECRET: process.env['STRIPE_WEBHOOK_SECRET'] ?? 'whsec_e2e_only_secret',
       COOKIE_SECURE: 'false',
       LOG_LEVEL: 'warn',
       DATABASE_URL: process.env['DATABASE_URL'] ?? '',
@@ -41,6 +45,7 @@ export default defineConfig({
       SMTP_URL: process.env['SMTP_URL'] ?? 'smtp://127.0.0.1:1026',
       STRIPE_FAKE_PORT: process.env['STRIPE_FAKE_PORT'] ?? '12112',
       SIGN_IN_RATE_LIMIT: '200',
+      SIGN_IN_IP_RATE_LIMIT: '400',
     },
   },
 });

@@ -41,7 +41,9 @@ DATABASE_URL="$TEST_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
 # A fresh mail folder per run, so no test can find a message an earlier run left.
 export MAIL_DIR="$ROOT/.data/test-mail"
 rm -rf "$MAIL_DIR"
-APP_PORT="$E2E_PORT" start_fakes
+APP_PORT="$E2E_PORT" # The Stripe fake signs webhooks with the secret the production-mode e2e server expects.
+export STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_e2e_only_secret}"
+start_fakes
 
 log "unit and integration tests (Jest)"
 NODE_ENV=test node_modules/.bin/jest --ci

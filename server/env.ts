@@ -26,10 +26,19 @@ const EnvSchema = z.object({
   ADMIN_PASSWORD: z.string().min(10).default('admin-demo-pass'),
   /** An ISO date-time the server treats as "now" (demos, end-to-end runs); ignored in production. */
   BALEPROOF_FIXED_NOW: z.iso.datetime({ offset: true }).optional(),
+  /** Failed sign-ins per account (e-mail) per 15 minutes. */
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
+  /** Failed sign-ins per client address per 15 minutes, whatever the accounts tried. */
+  SIGN_IN_IP_RATE_LIMIT: z.coerce.number().int().positive().default(30),
 });
 
 export type Env = z.infer<typeof EnvSchema>;
+
+/**
+ * Secrets whose development defaults are published in the README: production must set its own,
+ * or anyone could sign CSRF tokens and sessions, sign in as the admin or forge payment webhooks.
+ */
+const PUBLIC_DEFAULTS = ['SESSION_SECRET', 'ADMIN_PASSWORD', 'STRIPE_WEBHOOK_SECRET'] as const;
 
 export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const parsed = EnvSchema.safeParse(source);
@@ -37,7 +46,13 @@ export function readEnv(source: NodeJS.ProcessEnv = process.env): Env {
     const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
     throw new Error(`Invalid environment:\n${lines.join('\n')}`);
   }
-  return parsed.data;
+  const env = parsed.data;
+  if (env.NODE_ENV === 'production') {
+    const defaults = EnvSchema.parse({});
+    const lines = PUBLIC_DEFAULTS.filter((name) => env[name] === defaults[name]).map((name) => `  ${name}: must be set to a value of your own in production (the default is public)`);
+    if (lines.length > 0) throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  return env;
 }
 
 export function cookiesAreSecure(env: Env): boolean {

@@ -4,6 +4,11 @@ import { createDb } from '../client';
 import { seedDemo } from './seed';
 
 const env = readEnv();
+// The demo scenario's accounts have published passwords: never in production.
+if (env.NODE_ENV === 'production') {
+  console.error('[baleproof] the demo seed does not run with NODE_ENV=production; create the admin account by hand.');
+  process.exit(1);
+}
 const db = createDb(env.DATABASE_URL, 2);
 seedDemo({
   db,
