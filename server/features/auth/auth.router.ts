@@ -29,20 +29,25 @@ export function configurePassport(db: Db): void {
   });
 }
 
-export function authRouter(db: Db, options: { signInLimit: number; issueCsrfCookie: RequestHandler }): Router {
+export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit: number; issueCsrfCookie: RequestHandler }): Router {
   const auth = new AuthService(db);
   const router = Router();
 
-  const signInLimiter = rateLimit({
-    windowMs: 15 * 60 * 1000,
-    limit: options.signInLimit,
-    standardHeaders: 'draft-8',
-    legacyHeaders: false,
-    // Per address and account, so one attacker cannot lock out everyone behind the same address.
-    keyGenerator: (req) => `${ipKeyGenerator(req.ip ?? '')}:${String(req.body?.email ?? '').toLowerCase()}`,
-    handler: (_req, _res, next) =>
-      next(new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
-  });
+  // Two limits on failed sign-ins (successes are not counted): per account, keyed on the e-mail as the
+  // sign-in form normalises it (so " Name@X" is the same account), and per client address, so one
+  // password tried across many accounts is limited too.
+  const failedSignIns = (limit: number, keyGenerator: (req: Request) => string) =>
+    rateLimit({
+      windowMs: 15 * 60 * 1000,
+      limit,
+      standardHeaders: 'draft-8',
+      legacyHeaders: false,
+      skipSuccessfulRequests: true,
+      keyGenerator,
+      handler: (_req, _res, next) => next(new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
+    });
+  const perAccount = failedSignIns(options.signInLimit, (req) => `account:${normalisedEmail(req.body?.email)}`);
+  const perAddress = failedSignIns(options.signInIpLimit, (req) => `ip:${ipKeyGenerator(req.ip ?? '')}`);
 
   // The app's first call: it also hands out the CSRF cookie for API clients that start here.
   router.get('/me', options.issueCsrfCookie, (req, res) => {
@@ -56,7 +61,7 @@ export function authRouter(db: Db, options: { signInLimit: number; issueCsrfCook
     res.status(201).json({ user });
   });
 
-  router.post('/sign-in', signInLimiter, async (req, res) => {
+  router.post('/sign-in', perAddress, perAccount, async (req, res) => {
     const input = SignInSchema.parse(req.body);
     const user = await auth.checkCredentials(input);
     if (!user) throw new HttpError(401, 'invalid_credentials', 'E-mail or password is wrong.');
@@ -72,6 +77,11 @@ export function authRouter(db: Db, options: { signInLimit: number; issueCsrfCook
   });
 
   return router;
+}
+
+/** The account an attempt is about, normalised as SignInSchema does (trim, lower case). */
+function normalisedEmail(value: unknown): string {
+  return typeof value === 'string' ? value.trim().toLowerCase() : '';
 }
 
 /** passport 0.7 regenerates the session id on login, which prevents session fixation. */
