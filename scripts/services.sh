@@ -2,7 +2,7 @@
 # Needs env.sh; uses SMTP_PORT, MAILDEV_WEB_PORT, STRIPE_FAKE_PORT and MAIL_DIR (where caught mail is kept).
 #
 # A fake is never reused silently: whatever already listens on one of these ports is either a fake this
-# checkout started earlier (its PID file names a live process whose command line is ours), which is
+# checkout started earlier on that port (its PID file names a live process whose command line is ours), which is
 # stopped and started afresh so no state leaks between runs, or something else, and then we refuse to start.
 SERVICE_PIDS=()
 RUN_DIR="$ROOT/.data/run"
@@ -52,14 +52,14 @@ start_fakes() {
   local logdir="$ROOT/.data/logs" pid
   MAIL_DIR="${MAIL_DIR:-$ROOT/.data/mail}"
   mkdir -p "$logdir" "$MAIL_DIR" "$RUN_DIR"
-  claim_ports maildev "$ROOT/node_modules/.bin/maildev --smtp $SMTP_PORT --web $MAILDEV_WEB_PORT" "$SMTP_PORT" "$MAILDEV_WEB_PORT"
-  claim_ports stripe-fake "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" "$STRIPE_FAKE_PORT"
+  claim_ports "maildev-$MAILDEV_WEB_PORT" "$ROOT/node_modules/.bin/maildev --smtp $SMTP_PORT --web $MAILDEV_WEB_PORT" "$SMTP_PORT" "$MAILDEV_WEB_PORT"
+  claim_ports "stripe-fake-$STRIPE_FAKE_PORT" "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" "$STRIPE_FAKE_PORT"
 
   node "$ROOT/node_modules/.bin/maildev" --smtp "$SMTP_PORT" --web "$MAILDEV_WEB_PORT" \
     --ip 127.0.0.1 --web-ip 127.0.0.1 --mail-directory "$MAIL_DIR" >"$logdir/maildev.log" 2>&1 &
   pid=$!
   SERVICE_PIDS+=("$pid")
-  echo "$pid" >"$RUN_DIR/maildev.pid"
+  echo "$pid" >"$RUN_DIR/maildev-$MAILDEV_WEB_PORT.pid"
   wait_for_url "http://127.0.0.1:$MAILDEV_WEB_PORT/api/healthz" "maildev" "$pid"
   log "mail catcher: smtp 127.0.0.1:$SMTP_PORT, inbox http://127.0.0.1:$MAILDEV_WEB_PORT"
 
@@ -68,7 +68,7 @@ start_fakes() {
     node --import tsx "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" >"$logdir/stripe-fake.log" 2>&1 &
   pid=$!
   SERVICE_PIDS+=("$pid")
-  echo "$pid" >"$RUN_DIR/stripe-fake.pid"
+  echo "$pid" >"$RUN_DIR/stripe-fake-$STRIPE_FAKE_PORT.pid"
   wait_for_url "http://127.0.0.1:$STRIPE_FAKE_PORT/health" "Stripe fake" "$pid"
   log "Stripe fake: http://127.0.0.1:$STRIPE_FAKE_PORT"
 
@@ -84,5 +84,5 @@ stop_services() {
   for pid in "${SERVICE_PIDS[@]:-}"; do
     [ -n "$pid" ] && wait "$pid" 2>/dev/null || true
   done
-  rm -f "$RUN_DIR/maildev.pid" "$RUN_DIR/stripe-fake.pid"
+  rm -f "$RUN_DIR/maildev-$MAILDEV_WEB_PORT.pid" "$RUN_DIR/stripe-fake-$STRIPE_FAKE_PORT.pid"
 }
