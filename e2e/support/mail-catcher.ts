@@ -34,10 +34,10 @@ export async function mailsTo(address: string): Promise<CaughtMail[]> {
 }
 
 /**
- * Waits until a message to `address` whose subject matches arrives (mail may leave after the request
+ * Waits until a message to `address` whose subject matches arrives (mail leaves through the outbox after the request
  * that caused it has answered), and returns it. Fails with what did arrive for that address.
  */
-export async function waitForMail(address: string, subject: RegExp | string, timeoutMs = 15_000): Promise<CaughtMail> {
+export async function waitForMail(address: string, subject: RegExp | string, timeoutMs = 30_000): Promise<CaughtMail> {
   const matches = (m: CaughtMail) => (typeof subject === 'string' ? m.subject.includes(subject) : subject.test(m.subject));
   const deadline = Date.now() + timeoutMs;
   let seen: CaughtMail[] = [];
