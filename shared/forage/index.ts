@@ -9,3 +9,4 @@ export * from './grades';
 export * from './analysis-findings';
 export * from './sampling-findings';
 export * from './evaluate';
+export * from './nitrate';
