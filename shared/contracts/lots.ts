@@ -76,6 +76,8 @@ export const LotSearchSchema = z
     radiusMi: num('Radius', 1, 3000).optional(),
     compliantOnly: flag.optional(),
     verifiedOnly: flag.optional(),
+    /** Only lots whose current analysis includes a nitrate result. */
+    nitrateTestedOnly: flag.optional(),
     sort: z.enum(LOT_SORTS, { message: `Sort must be one of: ${LOT_SORTS.join(', ')}.` }).default('newest'),
     page: num('Page', 1, 10000).int().default(1),
     pageSize: num('Page size', 1, 100).int().default(12),

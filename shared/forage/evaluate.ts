@@ -7,6 +7,7 @@ import { horseDigestibleEnergy } from './horse-de';
 import { nonStructuralCarbohydrate, nscFlag } from './nsc';
 import { gradeForage } from './grades';
 import { consistencyFindings, methodFindings } from './analysis-findings';
+import { nitrateFindings } from './nitrate';
 
 /**
  * Evaluates a lab analysis of a hay lot: both bases, RFV, RFQ, TDN, horse DE, NSC, grades and
@@ -72,6 +73,7 @@ export function evaluateForage(req: ForageEvaluationRequest): ForageEvaluation {
       nscMethod: nsc?.method ?? null,
       nscFlag: flag,
     }),
+    ...nitrateFindings(req.nitrateNo3PctDm ?? null),
   ];
 
   return {

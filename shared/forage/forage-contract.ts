@@ -79,6 +79,12 @@ export const ForageEvaluationRequestSchema = z
     starchPct: percent('starchPct', 'starch').optional(),
     calciumPct: percent('calciumPct', 'calcium').optional(),
     phosphorusPct: percent('phosphorusPct', 'phosphorus').optional(),
+    /** Nitrate, % nitrate ion (NO3) of dry matter, whatever the basis of the other fields (labs report it on DM). */
+    nitrateNo3PctDm: z
+      .number({ error: 'nitrateNo3PctDm must be a number, % nitrate of dry matter' })
+      .min(0, { error: 'nitrateNo3PctDm cannot be negative' })
+      .max(10, { error: 'nitrateNo3PctDm above 10% is not a hay result; check the unit (ppm nitrate-N × 0.000443 = % nitrate)' })
+      .optional(),
     /** Moisture as reported by the lab, % as fed; optional cross-check of dryMatterPct. */
     moisturePct: z
       .number({ error: 'moisturePct must be a number, in percent' })

@@ -50,6 +50,8 @@ export const labAnalyses = pgTable(
     calciumPct: doublePrecision(),
     phosphorusPct: doublePrecision(),
     reportedRfv: doublePrecision(),
+    /** Nitrate, % nitrate ion of dry matter; null when not tested. */
+    nitrateNo3PctDm: doublePrecision(),
     // Computed by the forage engine (shared/forage) when saved.
     rfv: doublePrecision().notNull(),
     rfq: doublePrecision(),
@@ -84,6 +86,7 @@ export const labAnalyses = pgTable(
     pct('lab_starch_range', t.starchPct),
     pct('lab_ca_range', t.calciumPct),
     pct('lab_p_range', t.phosphorusPct),
+    check('lab_nitrate_range', sql`${t.nitrateNo3PctDm} is null or ${t.nitrateNo3PctDm} between 0 and 10`),
     check('lab_rfv_range', sql`${t.rfv} > 0 and ${t.rfv} < 1000`),
   ],
 );

@@ -26,6 +26,8 @@ export function analysisColumns(request: ForageEvaluationRequest): { columns: An
       calciumPct: dm.calciumPct,
       phosphorusPct: dm.phosphorusPct,
       reportedRfv: request.reportedRfv ?? null,
+      // Labs report nitrate on dry matter whatever basis the rest was typed in.
+      nitrateNo3PctDm: request.nitrateNo3PctDm ?? null,
       rfv: evaluation.rfv,
       rfq: evaluation.rfq,
       tdnPct: evaluation.tdnPct,
@@ -58,6 +60,7 @@ export type AnalysisColumns = Required<
     | 'calciumPct'
     | 'phosphorusPct'
     | 'reportedRfv'
+    | 'nitrateNo3PctDm'
     | 'rfv'
     | 'rfq'
     | 'tdnPct'

@@ -54,6 +54,9 @@ export class LotsService {
     if (query.tonsMin !== undefined) add(sql`${s.tonsAvailable} >= ${query.tonsMin}::float8`);
     if (query.compliantOnly) add(eq(s.samplingCompliant, true));
     if (query.verifiedOnly) add(eq(s.labVerified, true));
+    if (query.nitrateTestedOnly) {
+      add(sql`exists (select 1 from ${labAnalyses} la where la.lot_id = ${s.lotId} and la.is_current and la.nitrate_no3_pct_dm is not null)`);
+    }
     if (origin && query.radiusMi !== undefined) add(farmWithinSql(origin, query.radiusMi, undefined, s));
 
     // Each order matches an index on lot_search, newest ties broken by the higher lot id.

@@ -2,7 +2,7 @@ import { BASIS_DEPENDENT_FIELDS, evaluateForage, type ForageEvaluation, type For
 import type { labAnalyses } from '../../db/schema';
 
 type AnalysisRow = typeof labAnalyses.$inferSelect;
-const OPTIONAL = ['ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'reportedRfv'] as const;
+const OPTIONAL = ['ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'reportedRfv', 'nitrateNo3PctDm'] as const;
 
 /** The stored (dry-matter) analysis as an engine request on the DM basis. */
 export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationRequest['forageClass']): ForageEvaluationRequest {

@@ -39,7 +39,7 @@ export class LotSearchPage {
   protected readonly sorts = SORT_OPTIONS;
 
   protected readonly filters = inject(FormBuilder).nonNullable.group(
-    Object.fromEntries(FILTER_KEYS.map((k) => [k, k === 'compliantOnly' || k === 'verifiedOnly' ? false : ''])) as Record<string, string | boolean>,
+    Object.fromEntries(FILTER_KEYS.map((k) => [k, k === 'compliantOnly' || k === 'verifiedOnly' || k === 'nitrateTestedOnly' ? false : ''])) as Record<string, string | boolean>,
   );
 
   protected readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });

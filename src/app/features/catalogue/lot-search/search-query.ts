@@ -19,6 +19,7 @@ export const FILTER_KEYS = [
   'radiusMi',
   'compliantOnly',
   'verifiedOnly',
+  'nitrateTestedOnly',
 ] as const;
 
 /** Short names of the filters, for the empty state's "remove this filter" buttons. */
@@ -42,6 +43,7 @@ export const FILTER_LABELS: Record<(typeof FILTER_KEYS)[number], string> = {
   radiusMi: 'Within miles',
   compliantOnly: 'Sampled to protocol only',
   verifiedOnly: 'Certified lab only',
+  nitrateTestedOnly: 'Nitrate tested only',
 };
 
 export const SORT_OPTIONS = [

@@ -34,6 +34,7 @@ export const VALUE_FIELDS = [
   ['phosphorusPct', 'Phosphorus', false],
   ['moisturePct', 'Moisture (checks DM)', false],
   ['reportedRfv', 'RFV printed on report', false],
+  ['nitrateNo3PctDm', 'Nitrate, % of DM (ppm nitrate-N × 0.000443)', false],
 ] as const;
 type ValueField = (typeof VALUE_FIELDS)[number][0];
 

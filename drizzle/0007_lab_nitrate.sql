@@ -1,0 +1,2 @@
+ALTER TABLE "lab_analyses" ADD COLUMN "nitrate_no3_pct_dm" double precision;--> statement-breakpoint
+ALTER TABLE "lab_analyses" ADD CONSTRAINT "lab_nitrate_range" CHECK ("lab_analyses"."nitrate_no3_pct_dm" is null or "lab_analyses"."nitrate_no3_pct_dm" between 0 and 10);
