@@ -99,7 +99,7 @@ describe('lots API', () => {
     // The catalogue's "sampled to protocol" filter agrees.
     const compliantOnly = await t.agent().get(`/lots?q=${own}&compliantOnly=true`);
     expect(compliantOnly.body.items.map((i: { title: string }) => i.title)).toEqual([`${own} cores 20`]);
-  }, 60_000);
+  }, 120_000);
 
   it('shows a listed lot and hides one under review from the public', async () => {
     const shown = await t.agent().get(`/lots/${ids['rich']}`);

@@ -33,7 +33,7 @@ describe('review API', () => {
     expect(view.body.lot.evaluation.rfv).toBeGreaterThan(100);
     expect(view.body.farm.growerEmail).toBe(grower.email);
     expect((await grower.agent.get('/review/queue')).status).toBe(403);
-  }, 20_000);
+  }, 60_000);
 
   it('approves: the lot is public and verified, the grower is e-mailed, the audit trail and listeners run', async () => {
     const id = await submitted();
@@ -60,7 +60,7 @@ describe('review API', () => {
     const audit = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, String(id)), eq(auditEvents.action, 'lot.approved')));
     expect(audit).toHaveLength(1);
     expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(409);
-  }, 20_000);
+  }, 60_000);
 
   it('returns a lot with a reason the grower receives, and takes it back after a fix', async () => {
     const id = await submitted();
@@ -77,7 +77,7 @@ describe('review API', () => {
 
     const again = await grower.agent.post(`/selling/lots/${id}/submit`);
     expect(again.body).toMatchObject({ status: 'in_review', reviewNote: null, analysis: { verification: 'pending' } });
-  }, 20_000);
+  }, 60_000);
 
   it('shows each entered value beside the value read from the PDF and flags the mismatch', async () => {
     const id = await completeLot(grower.agent);
