@@ -15,7 +15,7 @@ describe('lots API', () => {
     const far = await createGrower(t.deps.db, '68901'); // Hastings, NE
     ids = {
       rich: (await createLot(t.deps.db, near.farm.id, { title: `${tag} rich`, priceDollarsPerTon: 320, analysis: { adfPct: 28, ndfPct: 36, crudeProteinPct: 22 } })).id,
-      plain: (await createLot(t.deps.db, near.farm.id, { title: `${tag} plain`, priceDollarsPerTon: 200, analysis: { adfPct: 36, ndfPct: 50, crudeProteinPct: 15 } })).id,
+      plain: (await createLot(t.deps.db, near.farm.id, { title: `${tag} plain`, priceDollarsPerTon: 200, analysis: { adfPct: 36, ndfPct: 50, crudeProteinPct: 15, nitrateNo3PctDm: 0.73 } })).id,
       far: (await createLot(t.deps.db, far.farm.id, { title: `${tag} far`, priceDollarsPerTon: 250, analysis: { adfPct: 30, ndfPct: 40, crudeProteinPct: 19 } })).id,
       hidden: (await createLot(t.deps.db, near.farm.id, { title: `${tag} hidden`, status: 'in_review' })).id,
     };
@@ -23,6 +23,19 @@ describe('lots API', () => {
   afterAll(() => t.close());
 
   const search = (query: string) => t.agent().get(`/lots?q=${tag}&${query}`);
+
+  it('filters to lots whose current analysis has a nitrate result', async () => {
+    const res = await search('nitrateTestedOnly=true');
+    expect(res.status).toBe(200);
+    expect(res.body.items.map((l: { id: number }) => l.id)).toEqual([ids['plain']]);
+  });
+
+  // 0.73 % nitrate ≈ 1,649 ppm nitrate-N: above Clemson's 1,000 ppm "safe under all conditions", below the ~1.5 % horse limit.
+  it('stores the nitrate result and its finding with the analysis', async () => {
+    const res = await t.agent().get(`/lots/${ids['plain']}`);
+    expect(res.status).toBe(200);
+    expect(JSON.stringify(res.body)).toContain('nitrate-above-livestock-safe');
+  });
   const titles = (body: { items: { title: string }[] }) => body.items.map((i) => i.title.replace(`${tag} `, ''));
 
   it('lists only listed lots, with total and computed RFV and protein', async () => {
