@@ -1,3 +1,4 @@
+import { parse as parseCookie } from 'cookie';
 import { createHmac, randomBytes, timingSafeEqual } from 'node:crypto';
 import type { Request, RequestHandler, Response } from 'express';
 import { HttpError } from './http-error';
@@ -53,11 +54,8 @@ export function createCsrf(secret: string, secure: boolean) {
   return { issueCookie, requireToken };
 }
 
+/** One cookie's value; a malformed header or value reads as absent (never an exception, so never a 500). */
 function readCookie(header: string | undefined, name: string): string | undefined {
   if (!header) return undefined;
-  for (const part of header.split(';')) {
-    const [key, ...rest] = part.trim().split('=');
-    if (key === name) return decodeURIComponent(rest.join('='));
-  }
-  return undefined;
+  return parseCookie(header)[name];
 }

@@ -1,19 +1,18 @@
 import type { ApiDeps } from '../../api-deps';
+import { DomainEvents } from '../../events/domain-events';
 import { alertSavedSearches } from '../saved-searches/saved-search-alerts';
 
 /** Something to do once a lot has been approved and is public (e.g. saved-search alerts). */
 export type LotApprovedListener = (deps: ApiDeps, lotId: number) => Promise<void> | void;
 
-// Buyers' saved-search e-mail alerts (issue #5) run after every approval.
-const listeners: LotApprovedListener[] = [async (deps, lotId) => void (await alertSavedSearches(deps, lotId))];
+const events = new DomainEvents();
+
+// Buyers' saved-search e-mail alerts run after every approval.
+events.on('lot.approved', async (deps, { lotId }) => void (await alertSavedSearches(deps, lotId)));
 
 /** Registers a listener; returns a function that removes it again. */
 export function addLotApprovedListener(listener: LotApprovedListener): () => void {
-  listeners.push(listener);
-  return () => {
-    const at = listeners.indexOf(listener);
-    if (at >= 0) listeners.splice(at, 1);
-  };
+  return events.on('lot.approved', (deps, { lotId }) => listener(deps, lotId));
 }
 
 /**
@@ -21,11 +20,5 @@ export function addLotApprovedListener(listener: LotApprovedListener): () => voi
  * and does not stop the others or undo the approval (the lot is already public).
  */
 export async function onLotApproved(deps: ApiDeps, lotId: number): Promise<void> {
-  for (const listener of [...listeners]) {
-    try {
-      await listener(deps, lotId);
-    } catch (err) {
-      deps.logger.error({ err, lotId }, 'a lot-approved listener failed');
-    }
-  }
+  await events.emit(deps, 'lot.approved', { lotId });
 }
