@@ -2,6 +2,7 @@ import type Stripe from 'stripe';
 import type { Jobs } from './adapters/queue/jobs';
 import type { FileStorage } from './adapters/storage/file-storage';
 import type { Clock } from './clock';
+import type { CatalogueCache } from './features/catalogue-cache/catalogue-cache';
 import type { Db } from './db/client';
 import type { Env } from './env';
 import type { Logger } from './logger';
@@ -20,4 +21,6 @@ export interface ApiDeps {
   stripe: Stripe;
   /** The current time for every service (a fixed clock in tests). */
   clock: Clock;
+  /** Short-lived caches of what every visitor sees alike; absent in tests that do not exercise them. */
+  catalogueCache?: CatalogueCache;
 }

@@ -5,6 +5,7 @@ import { createLocalStorage } from './adapters/storage/file-storage';
 import type { ApiDeps } from './api-deps';
 import { clockFromEnv } from './clock';
 import { createDb } from './db/client';
+import { CatalogueCache } from './features/catalogue-cache/catalogue-cache';
 import { readEnv } from './env';
 import { createLogger } from './logger';
 
@@ -21,5 +22,6 @@ export function createAppDeps(): ApiDeps {
     storage: createLocalStorage(env.UPLOAD_DIR),
     stripe: createStripeClient(env),
     clock: clockFromEnv(env),
+    catalogueCache: new CatalogueCache(env.CATALOGUE_CACHE_SECONDS * 1000),
   };
 }

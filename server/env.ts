@@ -26,6 +26,8 @@ const EnvSchema = z.object({
   ADMIN_PASSWORD: z.string().min(10).default('admin-demo-pass'),
   /** An ISO date-time the server treats as "now" (demos, end-to-end runs); ignored in production. */
   BALEPROOF_FIXED_NOW: z.iso.datetime({ offset: true }).optional(),
+  /** How long anonymous catalogue reads and pages may be served from memory; any catalogue change empties it. 0 turns it off. */
+  CATALOGUE_CACHE_SECONDS: z.coerce.number().int().min(0).max(300).default(10),
   /** Failed sign-ins per account (e-mail) per 15 minutes. */
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   /** Failed sign-ins per client address per 15 minutes, whatever the accounts tried. */

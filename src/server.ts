@@ -4,11 +4,16 @@ import {
   isMainModule,
   writeResponseToNodeResponse,
 } from '@angular/ssr/node';
+import compression from 'compression';
 import express from 'express';
 import helmet from 'helmet';
+import cluster from 'node:cluster';
+import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
 import { createApi } from '../server/api';
 import { createAppDeps } from '../server/app-deps';
+import { listenForCatalogueChanges } from '../server/features/catalogue-cache/catalogue-cache';
+import { cachedPages } from '../server/features/catalogue-cache/page-cache';
 import { mediaRouter } from '../server/features/media/media.router';
 import { startOrderTimers } from '../server/features/orders/order-timers';
 import { cookiesAreSecure } from '../server/env';
@@ -21,6 +26,8 @@ const app = express();
 app.disable('x-powered-by');
 const angularApp = new AngularNodeAppEngine();
 
+// Compressed responses (brotli or gzip, as the browser asks) for pages, API JSON and static files.
+app.use(compression());
 app.use('/api', createApi(deps));
 app.use('/media', mediaRouter(deps.storage));
 
@@ -39,15 +46,41 @@ app.use(
   }),
 );
 
-app.use((req, res, next) => {
-  angularApp
-    .handle(req)
-    .then((response) => (response ? writeResponseToNodeResponse(response, res) : next()))
-    .catch(next);
-});
+app.use(cachedPages((req) => angularApp.handle(req), writeResponseToNodeResponse, deps.catalogueCache));
 
-if (isMainModule(import.meta.url) || process.env['pm_id']) {
+/**
+ * Worker processes: WEB_CONCURRENCY, else every core in production and one process otherwise. Sessions,
+ * jobs and cache invalidation go through PostgreSQL, so workers share nothing in memory that matters
+ * (the sign-in rate limit is counted per worker).
+ */
+function workerCount(): number {
+  const asked = Number(process.env['WEB_CONCURRENCY']);
+  if (Number.isInteger(asked) && asked > 0) return asked;
+  return deps.env.NODE_ENV === 'production' ? availableParallelism() : 1;
+}
+
+const isEntry = isMainModule(import.meta.url) || process.env['pm_id'];
+if (isEntry && cluster.isPrimary && workerCount() > 1) {
+  const count = workerCount();
+  deps.logger.info(`Baleproof starting ${count} workers`);
+  let stopping = false;
+  for (let i = 0; i < count; i++) cluster.fork();
+  cluster.on('exit', (worker, code) => {
+    if (stopping) return;
+    deps.logger.error({ pid: worker.process.pid, code }, 'worker exited; starting another');
+    cluster.fork();
+  });
+  const stopAll = () => {
+    stopping = true;
+    for (const worker of Object.values(cluster.workers ?? {})) worker?.process.kill('SIGTERM');
+    setTimeout(() => process.exit(0), 6000).unref();
+    cluster.on('exit', () => Object.keys(cluster.workers ?? {}).length === 0 && process.exit(0));
+  };
+  process.once('SIGTERM', stopAll);
+  process.once('SIGINT', stopAll);
+} else if (isEntry) {
   const port = deps.env.PORT;
+  const stopListening = deps.catalogueCache ? listenForCatalogueChanges(deps.env.DATABASE_URL, deps.catalogueCache, deps.logger) : async () => undefined;
   // The job queue (e-mail outbox) creates its tables on first start and works in the background.
   deps.jobs.start().catch((err) => deps.logger.error({ err }, 'job queue did not start; jobs wait in the database'));
   const server = app.listen(port, '127.0.0.1', (error) => {
@@ -58,6 +91,7 @@ if (isMainModule(import.meta.url) || process.env['pm_id']) {
   const shutdown = (signal: string) => {
     deps.logger.info({ signal }, 'shutting down');
     server.close(() => {
+      void stopListening();
       deps.jobs
         .stop()
         .catch((err) => deps.logger.error({ err }, 'job queue did not stop cleanly'))

@@ -12,6 +12,7 @@ import { createLocalStorage } from '../../server/adapters/storage/file-storage';
 import { createApi } from '../../server/api';
 import type { ApiDeps } from '../../server/api-deps';
 import { createDb } from '../../server/db/client';
+import type { CatalogueCache } from '../../server/features/catalogue-cache/catalogue-cache';
 import { readEnv } from '../../server/env';
 import { createLogger } from '../../server/logger';
 import { testClock } from './test-clock';
@@ -23,7 +24,7 @@ import { testClock } from './test-clock';
  * With `smtp: true` mail goes out through SMTP to the mail catcher instead (SMTP_URL, set by `npm test`
  * or the Jest global setup); read it back with e2e/support/mail-catcher.ts.
  */
-export async function startTestApi(overrides: Record<string, string> = {}, options: { smtp?: boolean; stripe?: StripeFakeServer } = {}) {
+export async function startTestApi(overrides: Record<string, string> = {}, options: { smtp?: boolean; stripe?: StripeFakeServer; catalogueCache?: CatalogueCache } = {}) {
   const url = process.env['TEST_DATABASE_URL'];
   if (!url) throw new Error('TEST_DATABASE_URL is not set: run the suite with `npm test`, which prepares the test database.');
   // A test may pass its own fake to keep the provider's state across a restart of the API.
@@ -57,6 +58,7 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
     storage: createLocalStorage(uploadDir),
     clock,
     stripe: new Stripe('sk_test_local_fake', { host: '127.0.0.1', port: stripePort, protocol: 'http', maxNetworkRetries: 0, telemetry: false }),
+    catalogueCache: options.catalogueCache,
   };
   // The queue starts (and installs its schema) on first use, so tests that send nothing pay nothing.
   const api = createApi(deps);

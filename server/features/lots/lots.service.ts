@@ -70,7 +70,16 @@ export class LotsService {
     }[query.sort];
 
     const offset = (query.page - 1) * query.pageSize;
-    const rows = await this.db
+    // First the page's lot ids from the search rows alone (an index walk, or the few rows near a place),
+    // then their details: the joins touch only the lots on the page.
+    const page = await this.db
+      .select({ lotId: s.lotId, distanceMi: distance ? sql<number>`${distance}` : sql<null>`null::float8` })
+      .from(s)
+      .where(and(...where))
+      .orderBy(...order, sql`${s.lotId} desc nulls last`)
+      .limit(query.pageSize)
+      .offset(offset);
+    const details = page.length === 0 ? [] : await this.db
       .select({
         id: lots.id,
         title: lots.title,
@@ -98,17 +107,18 @@ export class LotsService {
         samplingCompliant: s.samplingCompliant,
         labCertified: labAnalyses.labCertified,
         analysisVerified: sql<boolean>`${labAnalyses.verification} = 'verified'`,
-        distanceMi: distance ? sql<number>`${distance}` : sql<null>`null::float8`,
         publishedAt: lots.publishedAt,
       })
       .from(s)
       .innerJoin(lots, eq(lots.id, s.lotId))
       .innerJoin(farms, eq(farms.id, lots.farmId))
       .innerJoin(labAnalyses, and(eq(labAnalyses.lotId, lots.id), eq(labAnalyses.isCurrent, true)))
-      .where(and(...where))
-      .orderBy(...order, sql`${s.lotId} desc nulls last`)
-      .limit(query.pageSize)
-      .offset(offset);
+      .where(inArray(s.lotId, page.map((p) => p.lotId)));
+    const byId = new Map(details.map((d) => [d.id, d]));
+    const rows = page.flatMap((p) => {
+      const d = byId.get(p.lotId);
+      return d ? [{ ...d, distanceMi: p.distanceMi }] : [];
+    });
 
     // A short last page tells the total without counting; otherwise count, but stop past the cap.
     const { total, totalCapped } =
