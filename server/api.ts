@@ -32,7 +32,14 @@ export function createSessionMiddleware({ env, db }: Pick<ApiDeps, 'env' | 'db'>
   return session({
     name: SESSION_COOKIE,
     secret: env.SESSION_SECRET,
-    store: new PgStore({ pool: db.$client, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 60 * 15 }),
+    // Tests open and close many apps on one pool; a prune timer firing after the pool closed would log after
+    // the test ended (which fails the Jest run), so expired sessions are pruned only outside tests.
+    store: new PgStore({
+      pool: db.$client,
+      tableName: 'session',
+      createTableIfMissing: false,
+      pruneSessionInterval: env.NODE_ENV === 'test' ? false : 60 * 15,
+    }),
     resave: false,
     saveUninitialized: false,
     rolling: true,
