@@ -154,7 +154,12 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await expect(page.locator('iframe[title="Lab report PDF"]')).toHaveAttribute('src', `/api/uploads/lots/${lotId}/report`);
   const pdf = await page.request.get(`/api/uploads/lots/${lotId}/report`);
   expect(pdf.headers()['content-type']).toBe('application/pdf');
+  // Each value is compared with the one read from the PDF; the admin ticks what they checked and confirms.
+  await expect(page.getByRole('table', { name: 'Entered values beside the PDF' })).toBeVisible();
+  await page.getByRole('checkbox', { name: 'Checked Crude protein (CP)' }).check();
   await page.getByRole('button', { name: 'Approve and list' }).click();
+  await expect(page.getByRole('alertdialog')).toContainText('List this lot for buyers?');
+  await page.getByRole('button', { name: 'Yes, approve and list' }).click();
   await expect(page.getByRole('status')).toContainText('on sale');
   await signOut(page);
 

@@ -53,3 +53,11 @@ export interface AuditRow {
   after: unknown;
   data: unknown;
 }
+
+export interface AdminOverview {
+  /** Paid orders and sales (paid less refunded, cents) per week, oldest first; weeks start on Monday (UTC). */
+  weeks: { weekStart: string; orders: number; salesCents: number }[];
+  lotsWaiting: number;
+  openClaims: number;
+  payoutsDue: { growers: number; totalCents: number; held: number };
+}

@@ -33,3 +33,25 @@ describe('admin routes', () => {
     expect(res.body.items).toEqual([expect.objectContaining({ email, role: 'admin' })]);
   });
 });
+
+describe('admin overview', () => {
+  let t: TestApi;
+  beforeAll(async () => {
+    t = await startTestApi();
+  });
+  afterAll(() => t.close());
+
+  it('gives twelve Monday-started weeks ending with the current one, and the counts that wait on an admin', async () => {
+    const email = uniqueEmail('admin');
+    await t.deps.db.insert(users).values({ email, displayName: 'Admin', role: 'admin', passwordHash: await hashPassword('admin-password-1') });
+    const agent = t.agent();
+    await agent.post('/auth/sign-in', { email, password: 'admin-password-1' });
+    const res = await agent.get('/admin/overview');
+    expect([res.status, res.body.error]).toEqual([200, undefined]);
+    expect(res.body.weeks).toHaveLength(12);
+    // TEST_NOW is Tuesday 15 September 2026: its ISO week starts on Monday the 14th (ISO 8601).
+    expect(res.body.weeks.at(-1).weekStart).toBe('2026-09-14');
+    expect(res.body.weeks[0].weekStart).toBe('2026-06-29');
+    expect(res.body).toMatchObject({ lotsWaiting: expect.any(Number), openClaims: expect.any(Number), payoutsDue: { growers: expect.any(Number), totalCents: expect.any(Number) } });
+  });
+});

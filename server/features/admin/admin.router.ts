@@ -4,6 +4,7 @@ import type { ApiDeps } from '../../api-deps';
 import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
 import { auditTrail } from '../audit/audit-query';
+import { adminOverview } from './overview';
 import { SettingsService } from '../settings/settings.service';
 import { UsersService } from '../users/users.service';
 
@@ -15,6 +16,10 @@ export function adminRouter(deps: ApiDeps): Router {
   const settings = new SettingsService(db, clock);
   const router = Router();
   router.use(requireRole('admin'));
+
+  router.get('/overview', async (_req, res) => {
+    res.json(await adminOverview(db, clock.now()));
+  });
 
   router.get('/users', async (req, res) => {
     res.json({ items: await usersService.list(UsersQuerySchema.parse(req.query)) });

@@ -1,6 +1,8 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, OnInit, signal } from '@angular/core';
 import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
+import { DatePipe } from '@angular/common';
 import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
 import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
@@ -8,20 +10,24 @@ import { DomSanitizer } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
+import type { PhotoView } from '@shared/contracts/lots';
 import type { ReviewLotView } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../core/api-error';
 import { fixed } from '../catalogue/format';
 import { AnalysisPreview } from '../selling/lot-form/analysis-preview';
-import { VALUE_FIELDS } from '../selling/lot-form/analysis-step';
 import { CautionsList } from '../selling/ui/cautions-list';
 import { FindingsList } from '../selling/ui/findings-list';
 import { STATUS_LABELS } from '../selling/ui/status-label';
 import { ReviewApi } from './review-api';
 
-/** One submitted lot: the report PDF beside the entered values and the engine's findings; approve or return. */
+/**
+ * One submitted lot: the report PDF at a readable width beside each entered value and the value read
+ * from the PDF (mismatches flagged, a tick per value), the photos, findings and cautions; approving or
+ * returning asks for confirmation; the history says who did what, when.
+ */
 @Component({
   selector: 'app-review-lot-page',
-  imports: [RouterLink, ReactiveFormsModule, MatButton, MatIcon, MatFormField, MatLabel, MatInput, AnalysisPreview, FindingsList, CautionsList],
+  imports: [RouterLink, ReactiveFormsModule, MatButton, MatIcon, MatFormField, MatLabel, MatInput, MatCheckbox, AnalysisPreview, FindingsList, CautionsList, DatePipe],
   templateUrl: './review-lot-page.html',
   styleUrl: './review-lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -35,11 +41,16 @@ export class ReviewLotPage implements OnInit {
   protected readonly view = signal<ReviewLotView | null>(null);
   protected readonly error = signal('');
   protected readonly busy = signal(false);
+  /** Which decision waits for confirmation. */
+  protected readonly confirming = signal<'approve' | 'return' | null>(null);
+  /** Values the admin has checked against the PDF, by field. */
+  protected readonly ticked = signal<ReadonlySet<string>>(new Set());
+  protected readonly mismatches = computed(() => this.view()?.comparison.filter((r) => r.status === 'mismatch') ?? []);
+  protected readonly untickedCount = computed(() => (this.view()?.comparison.length ?? 0) - this.ticked().size);
   protected readonly reason = new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.minLength(5)] });
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly positions = CORE_POSITION_LABELS;
   protected readonly fixed = fixed;
-  protected readonly fields = VALUE_FIELDS;
   protected readonly cautionInput = computed(() => {
     const l = this.view()?.lot;
     if (!l?.lot || !l.quantity) return null;
@@ -55,21 +66,34 @@ export class ReviewLotPage implements OnInit {
     void this.run(() => firstValueFrom(this.api.lot(Number(this.id()))));
   }
 
-  protected approve(): Promise<void> {
-    return this.run(() => firstValueFrom(this.api.approve(Number(this.id()))));
-  }
-
-  protected returnToGrower(): Promise<void> {
-    if (this.reason.invalid) {
+  /** Opens the confirmation; nothing is sent until the admin confirms. */
+  protected ask(decision: 'approve' | 'return'): void {
+    if (decision === 'return' && this.reason.invalid) {
       this.reason.markAsTouched();
-      return Promise.resolve();
+      return;
     }
-    return this.run(() => firstValueFrom(this.api.returnToGrower(Number(this.id()), this.reason.value)));
+    this.confirming.set(decision);
   }
 
-  protected value(field: string): string {
-    const v = this.view()?.lot.analysis?.values[field];
-    return v === undefined ? '—' : String(v);
+  protected async confirm(): Promise<void> {
+    const decision = this.confirming();
+    this.confirming.set(null);
+    const id = Number(this.id());
+    if (decision === 'approve') await this.run(() => firstValueFrom(this.api.approve(id)));
+    if (decision === 'return') await this.run(() => firstValueFrom(this.api.returnToGrower(id, this.reason.value)));
+  }
+
+  protected toggle(field: string): void {
+    this.ticked.update((set) => {
+      const next = new Set(set);
+      if (next.has(field)) next.delete(field);
+      else next.add(field);
+      return next;
+    });
+  }
+
+  protected photoUrl(photo: PhotoView): string {
+    return photo.variants.find((v) => v.width === 800)?.url ?? photo.variants[0]?.url ?? '';
   }
 
   private async run(work: () => Promise<ReviewLotView>): Promise<void> {

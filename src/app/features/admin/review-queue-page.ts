@@ -6,15 +6,17 @@ import { catchError, map, of } from 'rxjs';
 import type { ReviewQueueRow } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../core/api-error';
 import { ReviewApi } from './review-api';
+import { AdminTabs } from './admin-tabs';
 
 type QueueState = { status: 'loading' } | { status: 'ok'; items: ReviewQueueRow[] } | { status: 'error'; message: string };
 
 /** Lots waiting for an admin to check their lab report, oldest first. */
 @Component({
   selector: 'app-review-queue-page',
-  imports: [RouterLink, MatIcon],
+  imports: [RouterLink, MatIcon, AdminTabs],
   template: `
     <div class="bp-page">
+      <app-admin-tabs />
       <h1>Review desk</h1>
       <p class="lead">Lots waiting for a check of the lab report against the values the grower entered, oldest first.</p>
       @switch (state().status) {

@@ -1,3 +1,4 @@
+import { PayoutHistory } from './payout-history';
 import { ChangeDetectionStrategy, Component, inject, input, OnInit, signal } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
@@ -13,7 +14,7 @@ import { STATUS_LABELS } from '../ui/status-label';
 /** The grower's lots: status, stock left, views and orders, with withdraw, relist and copy. */
 @Component({
   selector: 'app-selling-dashboard',
-  imports: [RouterLink, MatButton, MatIcon],
+  imports: [RouterLink, MatButton, MatIcon, PayoutHistory],
   templateUrl: './selling-dashboard.html',
   styleUrl: './selling-dashboard.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
