@@ -48,8 +48,9 @@ describe('rfq', () => {
   });
 
   // Decision: UGA Georgia Forages glossary (S3) groups legume/grass mixtures with legumes.
+  // Worked legume value, domain brief §3: CP 20, NDF 40, EE 2.5, ash 10, NDFD 45 → RFQ 149.5.
   it('uses the legume equations for mixed hay', () => {
-    expect(computeRfq({ ...legume, forageClass: 'mixed' })).toEqual(computeRfq(legume));
+    expect(computeRfq({ ...legume, forageClass: 'mixed' })?.rfq).toBeCloseTo(149.5, 1);
   });
 
   // Source: domain brief §3 — "NFC must come out ≥ 0 — reject otherwise" (common practice).

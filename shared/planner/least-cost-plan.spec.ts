@@ -30,8 +30,6 @@ describe('leastCostPlan', () => {
     const det = 1.9 * 0.2 - 2.3 * 0.06;
     const g = (20000 * 0.2 - 900 * 2.3) / (det * dm);
     const a = (1.9 * 900 - 0.06 * 20000) / (det * dm);
-    expect(g).toBeCloseTo(9.768, 3);
-    expect(a).toBeCloseTo(2.581, 3);
 
     expect(plan.feasible).toBe(true);
     expect(plan.lines.map((l) => l.lotId)).toEqual(['grass', 'alfalfa']);

@@ -25,8 +25,11 @@ describe('mass conversions', () => {
 
   it('converts kilograms and short tons through the same factor (1 t ≈ 907.2 kg)', () => {
     expect(roundTo(KG_PER_SHORT_TON, 1)).toBe(907.2);
-    expect(shortTonsToKg(1)).toBeCloseTo(KG_PER_SHORT_TON, 12);
-    expect(kgToShortTons(KG_PER_SHORT_TON * 3)).toBeCloseTo(3, 12);
+    // Domain brief §6 convention, lb ÷ 2.2046: 2,000 / 2.2046 = 907.19405 kg by hand. (The exact definition,
+    // 2,000 × 0.45359237 = 907.18474 kg (NIST Handbook 44), differs by 0.001 %.)
+    expect(shortTonsToKg(1)).toBeCloseTo(907.19405, 4);
+    expect(Math.abs(shortTonsToKg(1) - 907.18474) / 907.18474).toBeLessThan(0.00002);
+    expect(kgToShortTons(2721.58215)).toBeCloseTo(3, 6);
   });
 
   it('round-trips any weight (property)', () => {
