@@ -28,7 +28,7 @@ else
 fi
 
 node --import tsx server/db/migrate-cli.ts
-node --import tsx server/db/seed/seed-cli.ts
+node --import tsx scripts/seed/seed-cli.ts
 start_fakes
 
 log "building the app"

@@ -53,7 +53,7 @@ node_modules/.bin/ng build --configuration production
 
 log "preparing the end-to-end database"
 DATABASE_URL="${E2E_DATABASE_URL:?E2E_DATABASE_URL is required}" node --import tsx server/db/migrate-cli.ts
-DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node --import tsx server/db/seed/seed-cli.ts
+DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node --import tsx scripts/seed/seed-cli.ts
 
 log "end-to-end tests (Playwright, Chromium)"
 DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node_modules/.bin/playwright test

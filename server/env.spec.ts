@@ -25,7 +25,7 @@ describe('readEnv in production', () => {
 
   it('the demo seed refuses to run in production (its accounts have published passwords)', async () => {
     const root = join(__dirname, '..');
-    const run = promisify(execFile)(process.execPath, ['--import', 'tsx', 'server/db/seed/seed-cli.ts'], {
+    const run = promisify(execFile)(process.execPath, ['--import', 'tsx', 'scripts/seed/seed-cli.ts'], {
       cwd: root,
       env: { ...process.env, ...own, NODE_ENV: 'production', DATABASE_URL: 'postgres://nobody@127.0.0.1:1/none' },
     });

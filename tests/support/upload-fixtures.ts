@@ -1,5 +1,5 @@
 import sharp from 'sharp';
-import { simplePdf } from '../../server/db/seed/simple-pdf';
+import { simplePdf } from './simple-pdf';
 
 /*
  * Upload fixtures made in memory (no binary files in the repository): used by the API tests and the

@@ -4,7 +4,7 @@ import { auditEvents, orders } from '../../db/schema';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
 import { deliveredOrder, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
-import { simplePdf } from '../../db/seed/simple-pdf';
+import { simplePdf } from '../../../tests/support/simple-pdf';
 
 const DAY = 86_400_000;
 // The listing (tests/support/fixtures createLot): alfalfa, DM 88, CP 20, ADF 30, NDF 40 on DM.

@@ -3,7 +3,7 @@ import { auditEvents } from '../../db/schema';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { addLotApprovedListener } from './lot-approved';
-import { simplePdf } from '../../db/seed/simple-pdf';
+import { simplePdf } from '../../../tests/support/simple-pdf';
 
 describe('review API', () => {
   let t: TestApi;

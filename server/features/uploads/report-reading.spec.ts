@@ -1,7 +1,7 @@
 import { PDFDocument, StandardFonts } from 'pdf-lib';
 import { compareWithReading } from '@shared/lab-report/compare-reading';
 import { analysisColumns } from '../lots/analysis-record';
-import { demoReportPdf } from '../../db/seed/seed';
+import { demoReportPdf } from '../../../scripts/seed/seed';
 import { makeJpeg } from '../../../tests/support/upload-fixtures';
 import { readingSummary, readLabReportPdf } from './report-reading';
 

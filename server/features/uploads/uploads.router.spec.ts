@@ -7,7 +7,7 @@ import { photos, storedFiles } from '../../db/schema';
 import { csrfAgent, startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, makePdf, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { PDF_MAX_BYTES, PHOTO_MAX_BYTES } from './upload-limits';
-import { simplePdf } from '../../db/seed/simple-pdf';
+import { simplePdf } from '../../../tests/support/simple-pdf';
 
 describe('uploads API', () => {
   let t: TestApi;

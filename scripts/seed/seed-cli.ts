@@ -1,6 +1,6 @@
-import { createLocalStorage } from '../../adapters/storage/file-storage';
-import { readEnv } from '../../env';
-import { createDb } from '../client';
+import { createLocalStorage } from '../../server/adapters/storage/file-storage';
+import { readEnv } from '../../server/env';
+import { createDb } from '../../server/db/client';
 import { seedDemo } from './seed';
 
 const env = readEnv();

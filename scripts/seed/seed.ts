@@ -1,16 +1,16 @@
 import { createHash, randomUUID } from 'node:crypto';
 import { sql } from 'drizzle-orm';
 import { evaluateSampling } from '@shared/forage';
-import type { FileStorage } from '../../adapters/storage/file-storage';
-import { hashPassword } from '../../features/auth/password';
-import { analysisColumns } from '../../features/lots/analysis-record';
-import { locateZip } from '../../features/geo/geo';
-import { renderPhotoVariants } from '../../features/photos/photo-variants';
-import { readLabReportPdf } from '../../features/uploads/report-reading';
-import type { Db } from '../client';
-import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../schema';
+import type { FileStorage } from '../../server/adapters/storage/file-storage';
+import { hashPassword } from '../../server/features/auth/password';
+import { analysisColumns } from '../../server/features/lots/analysis-record';
+import { locateZip } from '../../server/features/geo/geo';
+import { renderPhotoVariants } from '../../server/features/photos/photo-variants';
+import { readLabReportPdf } from '../../server/features/uploads/report-reading';
+import type { Db } from '../../server/db/client';
+import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../../server/db/schema';
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
-import { simplePdf } from './simple-pdf';
+import { simplePdf } from '../../tests/support/simple-pdf';
 import { DEMO_BUYERS, DEMO_FARMS, DEMO_LABS, DEMO_LOTS, DEMO_PASSWORDS, FORAGE_PROFILES, type DemoLotPlan } from './demo-scenario';
 import { balesToTons } from '@shared/units';
 
