@@ -164,7 +164,7 @@ function startBaseline(): Promise<ChildProcess> {
 /** The production build, as `npm run serve:ssr` starts it, on the bench database. */
 async function startApp(): Promise<ChildProcess> {
   const child = spawn(process.execPath, [join(root, 'dist/baleproof/server/server.mjs')], {
-    env: { ...process.env, NODE_ENV: 'production', PORT: String(appPort), DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn', PUBLIC_URL: `http://127.0.0.1:${appPort}` },
+    env: { ...process.env, NODE_ENV: 'production', SESSION_SECRET: 'bench-only-session-secret-0123456789', ADMIN_PASSWORD: 'bench-only-admin-pass', STRIPE_WEBHOOK_SECRET: 'whsec_bench_only', PORT: String(appPort), DATABASE_URL: databaseUrl, LOG_LEVEL: 'warn', PUBLIC_URL: `http://127.0.0.1:${appPort}` },
     stdio: 'inherit',
   });
   const deadline = Date.now() + 60_000;
