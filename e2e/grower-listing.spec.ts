@@ -15,7 +15,8 @@ async function signIn(page: Page, account: { email: string; password: string }):
   await page.getByLabel('E-mail').fill(account.email);
   await page.getByLabel('Password').fill(account.password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/hay/);
+  // Each role lands on its own home (grower: lots, admin: review desk).
+  await expect(page).toHaveURL(/\/(selling|admin)/);
 }
 
 async function signOut(page: Page): Promise<void> {

@@ -2,9 +2,9 @@ import { expect, test } from '@playwright/test';
 
 // Demo accounts from the seed (README lists them).
 const accounts = [
-  { role: 'grower', email: 'grower@demo.baleproof.example', password: 'demo-grower-pass', nav: 'My lots' },
-  { role: 'buyer', email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass', nav: 'Herd planner' },
-  { role: 'admin', email: 'admin@baleproof.example', password: 'admin-demo-pass', nav: 'Review desk' },
+  { role: 'grower', email: 'grower@demo.baleproof.example', password: 'demo-grower-pass', nav: 'My lots', home: /\/selling$/ },
+  { role: 'buyer', email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass', nav: 'Herd planner', home: /\/orders$/ },
+  { role: 'admin', email: 'admin@baleproof.example', password: 'admin-demo-pass', nav: 'Review desk', home: /\/admin$/ },
 ];
 
 test.describe('signing in', () => {
@@ -14,7 +14,8 @@ test.describe('signing in', () => {
       await page.getByLabel('E-mail').fill(account.email);
       await page.getByLabel('Password').fill(account.password);
       await page.getByRole('button', { name: 'Sign in' }).click();
-      await expect(page).toHaveURL(/\/hay/);
+      // Each role lands on its own home: buyers on their orders, growers on their lots, admins on the review desk.
+      await expect(page).toHaveURL(account.home);
       await expect(page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: account.nav })).toBeVisible();
       await page.getByRole('button', { name: /Account menu/ }).click();
       await page.getByRole('menuitem', { name: 'Sign out' }).click();

@@ -6,6 +6,8 @@ export const routes: Routes = [
   { path: 'hay', loadChildren: () => import('./features/catalogue/catalogue.routes').then((m) => m.CATALOGUE_ROUTES) },
   { path: 'planner', title: 'Herd planner — Baleproof', loadComponent: () => import('./features/planner/planner-page').then((m) => m.PlannerPage) },
   { path: 'cart', title: 'Your cart — Baleproof', loadComponent: () => import('./features/orders/cart-page').then((m) => m.CartPage) },
+  { path: 'orders', canMatch: [roleGuard('buyer', 'grower', 'admin')], title: 'Orders — Baleproof', loadComponent: () => import('./features/orders/orders-list-page').then((m) => m.OrdersListPage) },
+  { path: 'orders/:id', canMatch: [roleGuard('buyer', 'grower', 'admin')], title: 'Order — Baleproof', loadComponent: () => import('./features/orders/order-page').then((m) => m.OrderPage) },
   { path: 'selling', canMatch: [roleGuard('grower')], loadChildren: () => import('./features/selling/selling.routes').then((m) => m.SELLING_ROUTES) },
   { path: 'admin', canMatch: [roleGuard('admin')], loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES) },
   { path: 'sign-in', title: 'Sign in — Baleproof', loadComponent: () => import('./features/account/sign-in-page').then((m) => m.SignInPage) },

@@ -12,7 +12,13 @@ export function navLinksFor(role: UserRole | null): NavLink[] {
   // Planning needs no account, so visitors see the planner too; the cart is for buyers and visitors.
   if (role === 'buyer' || role === null) links.push({ path: '/planner', label: 'Herd planner', icon: 'calculate' });
   if (role === 'buyer' || role === null) links.push({ path: '/cart', label: 'Cart', icon: 'shopping_cart' });
+  if (role === 'buyer' || role === 'grower') links.push({ path: '/orders', label: role === 'buyer' ? 'My orders' : 'Orders', icon: 'local_shipping' });
   if (role === 'grower') links.push({ path: '/selling', label: 'My lots', icon: 'inventory_2' });
   if (role === 'admin') links.push({ path: '/admin', label: 'Review desk', icon: 'fact_check' });
   return links;
+}
+
+/** Where each role lands after signing in: buyers on their orders, growers on their lots, admins on the review desk. */
+export function homeFor(role: UserRole): string {
+  return role === 'buyer' ? '/orders' : role === 'grower' ? '/selling' : '/admin';
 }

@@ -7,6 +7,7 @@ import { Router, RouterLink } from '@angular/router';
 import { apiErrorMessage } from '../../core/api-error';
 import { Session } from '../../core/session';
 import { safeReturnPath } from './return-path';
+import { homeFor } from '../../core/layout/nav-links';
 
 @Component({
   selector: 'app-sign-in-page',
@@ -36,8 +37,8 @@ export class SignInPage {
     this.busy.set(true);
     this.error.set('');
     try {
-      await this.session.signIn(this.form.getRawValue());
-      await this.router.navigateByUrl(safeReturnPath(this.returnTo()));
+      const user = await this.session.signIn(this.form.getRawValue());
+      await this.router.navigateByUrl(this.returnTo() ? safeReturnPath(this.returnTo()) : homeFor(user.role));
     } catch (e) {
       this.error.set(apiErrorMessage(e));
     } finally {

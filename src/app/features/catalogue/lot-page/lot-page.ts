@@ -10,10 +10,12 @@ import { dollars, fixed } from '../format';
 import { LotsApi } from '../lots-api';
 import { LotGallery } from './lot-gallery';
 import { LotAnalysisPanel } from './lot-analysis-panel';
+import { BuyPanel } from '../../orders/buy-panel';
+import { Session } from '../../../core/session';
 
 @Component({
   selector: 'app-lot-page',
-  imports: [RouterLink, MatIcon, LotGallery, LotAnalysisPanel],
+  imports: [RouterLink, MatIcon, LotGallery, LotAnalysisPanel, BuyPanel],
   templateUrl: './lot-page.html',
   styleUrl: './lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -21,6 +23,7 @@ import { LotAnalysisPanel } from './lot-analysis-panel';
 export class LotPage {
   private readonly api = inject(LotsApi);
   private readonly responseInit = inject(RESPONSE_INIT, { optional: true });
+  protected readonly session = inject(Session);
   /** Route parameter `:id`. */
   readonly id = input.required<string>();
 

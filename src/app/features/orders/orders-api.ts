@@ -1,0 +1,63 @@
+import { HttpClient, HttpParams } from '@angular/common/http';
+import { inject, Injectable } from '@angular/core';
+import { Observable } from 'rxjs';
+import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
+
+/** The orders feature's only door to the API. */
+@Injectable({ providedIn: 'root' })
+export class OrdersApi {
+  private readonly http = inject(HttpClient);
+
+  quote(query: { lotId: number; bales: number; method: string; deliveryZip?: string }): Observable<OrderQuote> {
+    const params = new HttpParams({ fromObject: Object.fromEntries(Object.entries(query).filter(([, v]) => v !== undefined && v !== '')) as Record<string, string> });
+    return this.http.get<OrderQuote>('/api/orders/quote', { params });
+  }
+  openDays(lotId: number): Observable<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number }> {
+    return this.http.get<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number }>(`/api/orders/lots/${lotId}/open-days`);
+  }
+  place(order: CreateOrder): Observable<CreatedOrder> {
+    return this.http.post<CreatedOrder>('/api/orders', order);
+  }
+  get(id: number): Observable<OrderView> {
+    return this.http.get<OrderView>(`/api/orders/${id}`);
+  }
+  mine(): Observable<{ items: OrderSummary[] }> {
+    return this.http.get<{ items: OrderSummary[] }>('/api/orders/mine');
+  }
+  incoming(): Observable<{ items: OrderSummary[] }> {
+    return this.http.get<{ items: OrderSummary[] }>('/api/orders/incoming');
+  }
+  cancel(id: number): Observable<OrderView> {
+    return this.http.post<OrderView>(`/api/orders/${id}/cancel`, {});
+  }
+  askForDate(id: number, window: WindowRequest): Observable<OrderView> {
+    return this.http.put<OrderView>(`/api/orders/${id}/window`, window);
+  }
+  offerDate(id: number, window: WindowRequest): Observable<OrderView> {
+    return this.http.post<OrderView>(`/api/orders/${id}/offer-window`, window);
+  }
+  confirmDate(id: number): Observable<OrderView> {
+    return this.http.post<OrderView>(`/api/orders/${id}/confirm-date`, {});
+  }
+  handOver(id: number, weighedTons: number | null, ticket: File | null): Observable<OrderView> {
+    const form = new FormData();
+    if (weighedTons !== null) form.append('weighedTons', String(weighedTons));
+    if (ticket) form.append('ticket', ticket);
+    return this.http.post<OrderView>(`/api/orders/${id}/hand-over`, form);
+  }
+  accept(id: number): Observable<OrderView> {
+    return this.http.post<OrderView>(`/api/orders/${id}/accept`, {});
+  }
+  reportProblem(id: number, reason: string): Observable<OrderView> {
+    return this.http.post<OrderView>(`/api/orders/${id}/report-problem`, { reason });
+  }
+  calendar(from: string, days = 7): Observable<{ days: CalendarDay[] }> {
+    return this.http.get<{ days: CalendarDay[] }>('/api/delivery-calendar', { params: { from, days } });
+  }
+  settings(): Observable<DeliverySettings> {
+    return this.http.get<DeliverySettings>('/api/delivery-calendar/settings');
+  }
+  saveSettings(settings: DeliverySettings): Observable<DeliverySettings> {
+    return this.http.put<DeliverySettings>('/api/delivery-calendar/settings', settings);
+  }
+}
