@@ -133,8 +133,6 @@ export const HandOverSchema = z
   })
   .strict();
 
-export const ReportProblemSchema = z.object({ reason: z.string().trim().min(10, 'Say what is wrong in a sentence or two.').max(2000) }).strict();
-
 export const DeliverySettingsSchema = z
   .object({
     deliveryWeekdays: z.array(z.number().int().min(0).max(6)).max(7).refine((d) => new Set(d).size === d.length, 'Each day once.'),

@@ -2,11 +2,12 @@ import { randomUUID } from 'node:crypto';
 import { and, eq, gte, inArray, lt, lte, sql } from 'drizzle-orm';
 import type { CalendarDay, DeliverySettings, OrderView, WindowRequest } from '@shared/contracts/orders';
 import { checkDeliveryTransition, type DeliveryEvent } from '@shared/lifecycle/delivery-lifecycle';
-import { ACCEPTANCE_DAYS, ORDER_HOLDS_STOCK } from '@shared/lifecycle/order-lifecycle';
+import { ORDER_HOLDS_STOCK } from '@shared/lifecycle/order-lifecycle';
 import type { Actor } from '@shared/lifecycle/state-machine';
 import { scaleTicketRefundCents } from '@shared/pricing/order-total';
 import type { ApiDeps } from '../../api-deps';
-import { deliveries, farms, lots, orders, qualityClaims, storedFiles, users } from '../../db/schema';
+import { deliveries, farms, lots, orders, storedFiles, users } from '../../db/schema';
+import { SettingsService } from '../settings/settings.service';
 import { conflict, forbidden, HttpError, notFound } from '../../middleware/http-error';
 import { sniffPhoto } from '../uploads/file-sniff';
 import { sha256 } from '../uploads/photo-upload';
@@ -65,6 +66,7 @@ export class DeliveriesService {
     const key = ticket ? `scale-tickets/${orderId}/${randomUUID()}` : null;
     const sniffed = ticket ? await sniffPhoto(ticket.buffer, ticket.originalname) : null;
     const files = ticket && key ? [{ key, data: ticket.buffer }] : [];
+    const { acceptanceDays } = await new SettingsService(this.deps.db, this.deps.clock).current();
     await writeThenRecord(this.deps.storage, files, () =>
       this.deps.db.transaction(async (tx) => {
         const { order, delivery } = await this.lockBoth(tx, orderId);
@@ -85,7 +87,7 @@ export class DeliveriesService {
         await applyOrderEvent(tx, order, 'deliver', { actor: part === 'admin' ? 'admin' : 'grower', actorId: user.id }, now, {
           deliveredAt: now,
           weighedTons: input.weighedTons ?? null,
-          acceptBy: new Date(now.getTime() + ACCEPTANCE_DAYS * 86_400_000),
+          acceptBy: new Date(now.getTime() + acceptanceDays * 86_400_000),
         }, input.weighedTons ? `Scale ticket: ${input.weighedTons} t` : '');
       }),
     );
@@ -109,25 +111,13 @@ export class DeliveriesService {
     return this.orders.get(user, orderId);
   }
 
-  /** The buyer reports a problem within the acceptance period; an admin settles the claim. */
-  async reportProblem(user: Express.User, orderId: number, reason: string): Promise<OrderView> {
-    const { part } = await readableOrder(this.deps.db, orderId, user);
-    await this.deps.db.transaction(async (tx) => {
-      const order = (await lockOrder(tx, orderId))!;
-      if (order.acceptBy && order.acceptBy < this.now()) throw conflict('acceptance_over', `Problems can be reported within ${ACCEPTANCE_DAYS} days of delivery; that time has passed.`);
-      await applyOrderEvent(tx, order, 'report_problem', { actor: part, actorId: user.id }, this.now(), {}, reason);
-      await tx.insert(qualityClaims).values({ orderId, openedBy: user.id, reason, createdAt: this.now() });
-    });
-    return this.orders.get(user, orderId);
-  }
-
   /** Loads delivered with no answer from the buyer complete when the acceptance period ends (run on a timer). */
   async completeUnanswered(): Promise<number> {
     const due = await this.deps.db.select({ id: orders.id }).from(orders).where(and(eq(orders.status, 'delivered'), lte(orders.acceptBy, this.now())));
     for (const { id } of due) {
       await this.deps.db.transaction(async (tx) => {
         const order = await lockOrder(tx, id);
-        if (order?.status === 'delivered') await applyOrderEvent(tx, order, 'accept', { actor: 'system', actorId: null }, this.now(), {}, `No problem reported within ${ACCEPTANCE_DAYS} days.`);
+        if (order?.status === 'delivered') await applyOrderEvent(tx, order, 'accept', { actor: 'system', actorId: null }, this.now(), {}, 'No problem reported within the acceptance period.');
       });
       await this.orders.notify(id, ['receipt']);
     }

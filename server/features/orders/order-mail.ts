@@ -46,7 +46,7 @@ const INTRO: Record<OrderMailKind, (f: OrderMailFacts) => { subject: string; lea
   new_order: (f) => ({ subject: `New order ${f.orderId}: ${f.bales} bales of ${f.lotTitle}`, lead: 'A buyer has paid for hay from your lot. Please confirm the date or offer another one.' }),
   date_confirmed: (f) => ({ subject: `Date confirmed for order ${f.orderId}`, lead: `The grower confirmed the ${when(f)}.` }),
   date_changed: (f) => ({ subject: `Another date offered for order ${f.orderId}`, lead: `The grower offered another date: ${when(f)}. Please agree to it or ask for another.` }),
-  delivered: (f) => ({ subject: `Order ${f.orderId} handed over`, lead: 'The grower marked your hay delivered or picked up. Please accept the load, or report a problem within 3 days.' }),
+  delivered: (f) => ({ subject: `Order ${f.orderId} handed over`, lead: 'The grower marked your hay delivered or picked up. Please accept the load, or report a problem within the period shown on the order.' }),
   receipt: (f) => ({ subject: `Receipt for order ${f.orderId}`, lead: 'Your order is complete. This is your receipt.' }),
 };
 

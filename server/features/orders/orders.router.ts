@@ -7,7 +7,6 @@ import {
   HandOverSchema,
   OrderQuoteSchema,
   ProposeWindowSchema,
-  ReportProblemSchema,
 } from '@shared/contracts/orders';
 import type { ApiDeps } from '../../api-deps';
 import { HttpError } from '../../middleware/http-error';
@@ -80,9 +79,6 @@ export function ordersRouter({ orders, deliveries }: OrderFeature): Router {
   });
   router.post('/:id/accept', requireRole('buyer'), async (req, res) => {
     res.json(await deliveries.accept(req.user!, IdParams.parse(req.params).id));
-  });
-  router.post('/:id/report-problem', requireRole('buyer'), async (req, res) => {
-    res.json(await deliveries.reportProblem(req.user!, IdParams.parse(req.params).id, ReportProblemSchema.parse(req.body).reason));
   });
   return router;
 }

@@ -1,6 +1,6 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import { Observable } from 'rxjs';
+import { Observable, switchMap } from 'rxjs';
 import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
 
 /** The orders feature's only door to the API. */
@@ -49,7 +49,8 @@ export class OrdersApi {
     return this.http.post<OrderView>(`/api/orders/${id}/accept`, {});
   }
   reportProblem(id: number, reason: string): Observable<OrderView> {
-    return this.http.post<OrderView>(`/api/orders/${id}/report-problem`, { reason });
+    // A problem is a quality claim, settled by an admin (the claims feature).
+    return this.http.post(`/api/claims`, { orderId: id, reason }).pipe(switchMap(() => this.get(id)));
   }
   calendar(from: string, days = 7): Observable<{ days: CalendarDay[] }> {
     return this.http.get<{ days: CalendarDay[] }>('/api/delivery-calendar', { params: { from, days } });
