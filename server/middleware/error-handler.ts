@@ -38,7 +38,24 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
       return body(400, 'constraint_violation', 'The request breaks a data rule.', { constraint: pgError.constraint });
     }
     if (pgError?.code === '23505') return body(409, 'duplicate', 'That already exists.', { constraint: pgError.constraint });
+    if (databaseUnreachable(err)) {
+      (req as { log?: Logger }).log?.error({ err }, 'database unreachable') ?? logger.error({ err }, 'database unreachable');
+      res.setHeader('Retry-After', '30');
+      return body(503, 'database_unavailable', 'Baleproof cannot reach its database right now. Please try again in a minute.');
+    }
     (req as { log?: Logger }).log?.error({ err }, 'unhandled error') ?? logger.error({ err }, 'unhandled error');
     return body(500, 'internal', 'Something went wrong on our side. Please try again.');
   };
+}
+
+/** Socket errors and PostgreSQL's "cannot connect now" / shutdown / connection-exception codes, on the error or its causes. */
+const UNREACHABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'ENOTFOUND', 'EHOSTUNREACH', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
+
+function databaseUnreachable(err: unknown): boolean {
+  for (let e = err as { code?: unknown; cause?: unknown; message?: unknown; errors?: unknown[] } | undefined, depth = 0; e && depth < 5; e = e.cause as typeof e, depth++) {
+    if (typeof e.code === 'string' && UNREACHABLE_CODES.has(e.code)) return true;
+    if (Array.isArray(e.errors) && e.errors.some((inner) => databaseUnreachable(inner))) return true;
+    if (typeof e.message === 'string' && /Connection terminated|timeout exceeded when trying to connect/i.test(e.message)) return true;
+  }
+  return false;
 }
