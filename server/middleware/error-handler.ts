@@ -37,6 +37,10 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     if (pgError?.code === '23514' || pgError?.code === '23503' || pgError?.code === '22P02') {
       return body(400, 'constraint_violation', 'The request breaks a data rule.', { constraint: pgError.constraint });
     }
+    // Values PostgreSQL cannot hold (a NUL byte; a number beyond its column) are bad input too.
+    if (pgError?.code === '22021' || pgError?.code === '22P05') return body(400, 'invalid_text', 'The request holds characters that cannot be stored (such as a NUL byte).');
+    if (pgError?.code === '22003') return body(400, 'number_out_of_range', 'A number in the request is too large.');
+    if (pgError?.code === '22001') return body(400, 'text_too_long', 'A text in the request is too long.');
     if (pgError?.code === '23505') return body(409, 'duplicate', 'That already exists.', { constraint: pgError.constraint });
     if (databaseUnreachable(err)) {
       (req as { log?: Logger }).log?.error({ err }, 'database unreachable') ?? logger.error({ err }, 'database unreachable');

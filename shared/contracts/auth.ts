@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLineText } from './text';
 
 export const USER_ROLES = ['buyer', 'grower', 'admin'] as const;
 export type UserRole = (typeof USER_ROLES)[number];
@@ -14,8 +15,13 @@ const email = z
 export const SignUpSchema = z
   .object({
     email,
-    password: z.string().min(10, 'Use at least 10 characters.').max(200, 'Use at most 200 characters.'),
-    displayName: z.string().trim().min(1, 'Enter your name.').max(100, 'Use at most 100 characters.'),
+    password: z
+      .string()
+      .min(10, 'Use at least 10 characters.')
+      .max(200, 'Use at most 200 characters.')
+      // Spaces are allowed in a pass phrase, but a password must not be spaces alone.
+      .refine((p) => p.trim().length >= 10, 'Use at least 10 characters besides spaces.'),
+    displayName: singleLineText('Name', 100, { min: 1, minMessage: 'Enter your name.' }),
     role: z.enum(['buyer', 'grower'], { message: 'Choose buyer or grower.' }),
   })
   .strict();

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLineText } from './text';
 import type { ForageEvaluation, SamplingEvaluation } from '../forage';
 
 export const FORAGE_TYPES = [
@@ -57,7 +58,7 @@ const flag = z.enum(['true', 'false']).transform((v) => v === 'true');
  */
 export const LotSearchSchema = z
   .object({
-    q: z.string().trim().max(100).optional(),
+    q: singleLineText('Search words', 100).optional(),
     rfvMin: num('Minimum RFV', 0, 400).optional(),
     rfvMax: num('Maximum RFV', 0, 400).optional(),
     rfqMin: num('Minimum RFQ', 0, 400).optional(),

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { singleLineText } from './text';
 import { LotSearchSchema } from './lots';
 
 /** Parts of a catalogue URL that are not part of what the buyer is looking for. */
@@ -10,7 +11,7 @@ const NOT_SAVED = ['page', 'pageSize'] as const;
  */
 export const SavedSearchCreateSchema = z
   .object({
-    name: z.string().trim().min(1, 'Give the search a name.').max(80, 'Keep the name under 80 characters.'),
+    name: singleLineText('Search name', 80, { min: 1, minMessage: 'Give the search a name.' }),
     query: z
       .record(z.string(), z.string().max(100))
       .transform((q) => Object.fromEntries(Object.entries(q).filter(([k, v]) => v !== '' && !(NOT_SAVED as readonly string[]).includes(k)))),

@@ -5,14 +5,17 @@ import type { ReadingComparison, ReportReading } from './report-reading';
 import { FORAGE_TYPE_LABELS } from './labels';
 import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetail, type LotStatus, type PhotoView } from './lots';
 import { lbToShortTons, shortTonsToLb } from '../units/mass';
+import { multiLineText, singleLineText } from './text';
 
 /*
  * Contracts of the grower's side: farm profile, the guided lot form (one schema per step), the
  * dashboard and the admin review desk. Money is integer cents; tons are US short tons (2,000 lb) as fed.
  */
 
-const text = (label: string, max: number) => z.string({ error: `${label} is required.` }).trim().max(max, `${label}: use at most ${max} characters.`);
-const required = (label: string, max: number) => text(label, max).min(1, `${label} is required.`);
+/** One line of text (names, titles); `prose` may span lines. Both refuse control and bidi characters. */
+const text = (label: string, max: number) => singleLineText(label, max);
+const required = (label: string, max: number) => singleLineText(label, max, { min: 1 });
+const prose = (label: string, max: number) => multiLineText(label, max);
 const isoDate = (label: string) => z.iso.date({ error: `${label} must be a date (YYYY-MM-DD).` });
 const number = (label: string, min: number, max: number, unit = '') =>
   z
@@ -30,9 +33,9 @@ export const FarmProfileInputSchema = z
     addressLine: required('Address', 200),
     zip: z.string().regex(/^\d{5}$/, 'ZIP code must be 5 digits.'),
     deliveryRadiusMi: whole('Delivery radius', 0, 3000),
-    loadingFacilities: text('Loading facilities', 500).default(''),
-    pickupHours: text('Pickup hours', 300).default(''),
-    description: text('Description', 2000).default(''),
+    loadingFacilities: prose('Loading facilities', 500).default(''),
+    pickupHours: prose('Pickup hours', 300).default(''),
+    description: prose('Description', 2000).default(''),
   })
   .strict();
 export type FarmProfileInput = z.infer<typeof FarmProfileInputSchema>;
@@ -84,7 +87,7 @@ export const LotStepSchema = z
     harvestEndedOn: isoDate('Harvest end'),
     storage: z.enum(['barn', 'tarped', 'outside'], { message: 'Choose how the hay is stored.' }),
     moistureAtBalingPct: number('Moisture at baling', 0, 60, '%').nullable().default(null),
-    description: text('Description', 2000).default(''),
+    description: prose('Description', 2000).default(''),
   })
   .strict()
   .refine((s) => s.harvestEndedOn >= s.harvestStartedOn, { message: 'Harvest end must not be before the harvest start.', path: ['harvestEndedOn'] });
@@ -185,7 +188,7 @@ export const PriceStepSchema = z
     priceCentsPerTon: cents('Price per ton').nullable().default(null),
     priceCentsPerBale: cents('Price per bale').nullable().default(null),
     minOrderTons: number('Minimum order', 0, 10_000, ' tons').default(0),
-    deliveryTerms: text('Delivery terms', 1000).default(''),
+    deliveryTerms: prose('Delivery terms', 1000).default(''),
     /** Null when the grower does not deliver. */
     freightCentsPerLoadedMile: whole('Freight per loaded mile', 0, 10_000_00).nullable().default(null),
     pickupAllowed: z.boolean().default(true),
@@ -215,7 +218,7 @@ export const PhotoOrderSchema = z
   .refine((o) => o.order.includes(o.coverId), { message: 'The cover must be one of the photos.', path: ['coverId'] });
 export type PhotoOrder = z.infer<typeof PhotoOrderSchema>;
 
-export const ReturnLotSchema = z.object({ reason: required('Reason', 2000).min(5, 'Give the grower a reason they can act on.') }).strict();
+export const ReturnLotSchema = z.object({ reason: multiLineText('Reason', 2000, { min: 5, minMessage: 'Give the grower a reason they can act on.' }) }).strict();
 export type ReturnLot = z.infer<typeof ReturnLotSchema>;
 
 // ---------------------------------------------------------------- views
