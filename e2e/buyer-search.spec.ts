@@ -59,7 +59,7 @@ test.describe('buyers find and choose hay', () => {
     expect(await cards.allTextContents()).toEqual(byPrice.slice(0, 12).map((t) => ` ${t} `.trim()).map((t) => expect.stringContaining(t)));
     await expect(page.getByText(`${byPrice.length} lots`)).toBeVisible();
 
-    await page.getByRole('button', { name: 'Next page' }).click();
+    await page.getByRole('button', { name: 'Later lots ›' }).click();
     await expect(page).toHaveURL(/page=2/);
     await expect(cards.first()).toHaveText(byPrice[12]!);
     await expect(page.getByText(`${byPrice.length} lots`)).toBeVisible();
@@ -112,7 +112,7 @@ test.describe('buyers find and choose hay', () => {
     expect(html).toContain(first!);
   });
 
-  test('a visitor plans a herd, gets the cheapest delivered mix and puts it in the cart', async ({ page }) => {
+  test('a visitor plans a herd, gets the cheapest delivered mix and puts it on the hay list', async ({ page }) => {
     await page.goto('/hay');
     await page.getByRole('link', { name: /herd planner/i }).first().click();
     await expect(page.getByRole('heading', { level: 1, name: 'Herd planner' })).toBeVisible();
@@ -130,20 +130,20 @@ test.describe('buyers find and choose hay', () => {
     const planned = await tableLines(planTable, { tons: 0, bales: 1, hay: 3, freight: 4 });
     expect(planned.length).toBeGreaterThan(0);
     const planTotal = (await planTable.getByRole('row', { name: /Total delivered/ }).getByRole('cell').last().textContent())!.trim();
-    await page.getByRole('button', { name: 'Put this plan in my cart' }).click();
-    await page.getByRole('link', { name: 'Open your cart' }).click();
+    await page.getByRole('button', { name: 'Put this plan on my hay list' }).click();
+    await page.getByRole('link', { name: 'Open your hay list' }).click();
 
-    await expect(page.getByRole('heading', { level: 1, name: 'Your cart' })).toBeVisible();
-    // Line by line, the cart holds exactly the planned mix, and the same delivered total.
-    const cartTable = page.getByRole('table', { name: 'Lots in your cart' });
+    await expect(page.getByRole('heading', { level: 1, name: 'Your hay list' })).toBeVisible();
+    // Line by line, the hay list holds exactly the planned mix, and the same delivered total.
+    const cartTable = page.getByRole('table', { name: 'Lots on your hay list' });
     await expect(cartTable.locator('tbody').getByRole('row')).toHaveCount(planned.length);
     expect(await tableLines(cartTable, { tons: 0, bales: 1, hay: 2, freight: 3 })).toEqual(planned);
     await expect(cartTable.getByRole('row', { name: /Total/ }).getByRole('cell').last()).toHaveText(planTotal);
     await expect(page.getByText('Checkout is not open yet.')).toBeVisible();
-    // The cart survives a reload (kept in the browser).
+    // The hay list survives a reload (kept in the browser).
     await page.reload();
     await expect(page.getByRole('row', { name: /Total/ })).toBeVisible();
-    expect(await tableLines(page.getByRole('table', { name: 'Lots in your cart' }), { tons: 0, bales: 1, hay: 2, freight: 3 })).toEqual(planned);
+    expect(await tableLines(page.getByRole('table', { name: 'Lots on your hay list' }), { tons: 0, bales: 1, hay: 2, freight: 3 })).toEqual(planned);
   });
 });
 

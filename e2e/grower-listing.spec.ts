@@ -145,7 +145,7 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await expect(page.getByText('Cautions buyers will see')).toBeVisible();
   await page.getByRole('button', { name: 'Submit for review' }).click();
   await expect(page).toHaveURL(/\/selling\?submitted=/);
-  await expect(page.getByRole('listitem').filter({ hasText: title }).getByText('Waiting for review')).toBeVisible();
+  await expect(page.getByRole('listitem').filter({ hasText: title }).getByText('With the reviewer')).toBeVisible();
   await signOut(page);
 
   // The admin checks the report against the values and approves.

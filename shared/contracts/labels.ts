@@ -36,3 +36,28 @@ export const CORE_POSITION_LABELS = {
   'bale-side': 'Side of square bale',
   grab: 'Grab sample (by hand)',
 } as const;
+
+/**
+ * What each lot state is called, everywhere (grower, buyer, reviewer). Our own words for what the state means,
+ * not shop words: a paused lot is hidden by its grower, not discounted.
+ */
+export const LOT_STATUS_LABELS = {
+  draft: 'Draft',
+  in_review: 'With the reviewer',
+  returned: 'Needs changes',
+  listed: 'Listed',
+  withdrawn: 'Paused',
+  sold_out: 'Sold out',
+} as const satisfies Record<'draft' | 'in_review' | 'returned' | 'listed' | 'withdrawn' | 'sold_out', string>;
+
+/** One line per state saying what it means for the grower. */
+export const LOT_STATUS_MEANINGS: Record<keyof typeof LOT_STATUS_LABELS, string> = {
+  draft: 'Only you can see it. Finish the steps and send it to the reviewer.',
+  in_review: 'A reviewer is checking the lab report against your values.',
+  returned: 'The reviewer sent it back with a reason. Change it and send it again.',
+  listed: 'Buyers can find it and order from it.',
+  withdrawn: 'Hidden from buyers until you list it again.',
+  sold_out: 'No bales left to sell.',
+};
+
+export const ROLE_LABELS = { buyer: 'Buyer', grower: 'Grower', admin: 'Reviewer' } as const;

@@ -19,6 +19,11 @@ export const SavedSearchCreateSchema = z
   })
   .strict()
   .superRefine((input, ctx) => {
+    // A search with no filter would alert on every lot ever listed: that is a mistake, not a wish.
+    if (!Object.keys(input.query).some((k) => k !== 'sort')) {
+      ctx.addIssue({ code: 'custom', path: ['query'], message: 'Choose at least one filter before saving the search.' });
+      return;
+    }
     const parsed = LotSearchSchema.safeParse(input.query);
     if (parsed.success) return;
     for (const issue of parsed.error.issues) ctx.addIssue({ code: 'custom', path: ['query', ...issue.path.map(String)], message: issue.message });

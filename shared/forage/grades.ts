@@ -142,18 +142,23 @@ export function usdaAlfalfaGrade(inputs: AlfalfaGradeInputs): UsdaGrade {
   return { name: limiting.name, basis: limiting.criterion, table: 'usda-ams-2003-alfalfa', criteria };
 }
 
+const GRASS_CP_BANDS: Band<(typeof USDA_GRASS_GRADES)[number]>[] = [
+  { grade: 'Premium', limit: 13, inclusive: false },
+  { grade: 'Good', limit: 9, inclusive: true },
+  { grade: 'Fair', limit: 5, inclusive: true },
+];
+
+const AFGC_RFV_BANDS: Band<(typeof AFGC_GRADES)[number]>[] = [
+  { grade: 'Prime', limit: 151, inclusive: false },
+  { grade: 'Grade 1', limit: 125, inclusive: true },
+  { grade: 'Grade 2', limit: 103, inclusive: true },
+  { grade: 'Grade 3', limit: 87, inclusive: true },
+  { grade: 'Grade 4', limit: 75, inclusive: true }, // from memory
+];
+
 /** USDA AMS grass grade from crude protein (% DM). */
 export function usdaGrassGrade(crudeProteinPct: number): UsdaGrade {
-  const name = band<(typeof USDA_GRASS_GRADES)[number]>(
-    crudeProteinPct,
-    'higher-is-better',
-    [
-      { grade: 'Premium', limit: 13, inclusive: false },
-      { grade: 'Good', limit: 9, inclusive: true },
-      { grade: 'Fair', limit: 5, inclusive: true },
-    ],
-    'Low',
-  );
+  const name = band<(typeof USDA_GRASS_GRADES)[number]>(crudeProteinPct, 'higher-is-better', GRASS_CP_BANDS, 'Low');
   return {
     name,
     basis: 'crudeProtein',
@@ -164,18 +169,7 @@ export function usdaGrassGrade(crudeProteinPct: number): UsdaGrade {
 
 /** AFGC legume grade from RFV. */
 export function afgcLegumeGrade(rfv: number): AfgcGrade {
-  const name = band<(typeof AFGC_GRADES)[number]>(
-    rfv,
-    'higher-is-better',
-    [
-      { grade: 'Prime', limit: 151, inclusive: false },
-      { grade: 'Grade 1', limit: 125, inclusive: true },
-      { grade: 'Grade 2', limit: 103, inclusive: true },
-      { grade: 'Grade 3', limit: 87, inclusive: true },
-      { grade: 'Grade 4', limit: 75, inclusive: true }, // from memory
-    ],
-    'Grade 5', // from memory
-  );
+  const name = band<(typeof AFGC_GRADES)[number]>(rfv, 'higher-is-better', AFGC_RFV_BANDS, 'Grade 5'); // Grade 5 from memory
   return { name, basis: 'rfv' };
 }
 
@@ -205,4 +199,31 @@ export function usdaGradeRule(grade: UsdaGrade): string {
 /** The AFGC grading rule in words. */
 export function afgcGradeRule(grade: AfgcGrade): string {
   return `AFGC legume grades follow RFV alone (Prime above 151, Grade 1 125–151, Grade 2 103–124, Grade 3 87–102, Grade 4 75–86, Grade 5 below 75); this hay is ${grade.name}.`;
+}
+
+/**
+ * The limits of one graded measure, for drawing a value against its bands: grades best first, each with the
+ * limit a value must reach for it (the last grade has none: it takes whatever reaches no limit).
+ */
+export interface GradeBandTable {
+  criterion: UsdaCriterion;
+  direction: 'higher-is-better' | 'lower-is-better';
+  bands: { grade: string; limit: number | null }[];
+}
+
+/** Band limits of every measure the lot's USDA table grades on (the same numbers the grading uses). */
+export function usdaBandTables(forageClass: ForageClass): GradeBandTable[] {
+  if (forageClass === 'grass') {
+    return [{ criterion: 'crudeProtein', direction: 'higher-is-better', bands: [...GRASS_CP_BANDS.map((b) => ({ grade: b.grade, limit: b.limit })), { grade: 'Low', limit: null }] }];
+  }
+  return ALFALFA_CRITERIA.map((criterion) => ({
+    criterion,
+    direction: ALFALFA_BANDS[criterion].direction,
+    bands: [...ALFALFA_BANDS[criterion].bands.map((b) => ({ grade: b.grade, limit: b.limit })), { grade: 'Utility', limit: null }],
+  }));
+}
+
+/** AFGC legume RFV limits, best first (Grade 5 takes the rest). */
+export function afgcBandTable(): GradeBandTable['bands'] {
+  return [...AFGC_RFV_BANDS.map((b) => ({ grade: b.grade, limit: b.limit })), { grade: 'Grade 5', limit: null }];
 }

@@ -1,4 +1,4 @@
-import { lotCautions, SAFE_BALING_MOISTURE_PCT } from './lot-cautions';
+import { growerCautions, lotCautions, SAFE_BALING_MOISTURE_PCT } from './lot-cautions';
 
 const base = { forageClass: 'grass' as const, baleType: 'small_square_2_string' as const, moistureAtBalingPct: 15, storage: 'barn' as const, nscFlag: null };
 const codes = (input: Parameters<typeof lotCautions>[0]) => lotCautions(input).map((c) => c.code);
@@ -55,5 +55,24 @@ describe('lotCautions — botulism in wet or wrapped bales', () => {
     expect(alfalfa.message).toMatch(/veterinarian/);
     const grass = lotCautions({ ...base, moistureAtBalingPct: 45 }).find((c) => c.code === 'botulism')!;
     expect(grass.message).not.toMatch(/legume/);
+  });
+});
+
+describe('growerCautions', () => {
+  const wet = { ...base, forageClass: 'legume' as const, moistureAtBalingPct: 24, storage: 'outside' as const, nscFlag: 'above-upper-limit' as const };
+
+  it('covers the same cautions as the buyers see, in the same order', () => {
+    expect(growerCautions(wet).map((c) => c.code)).toEqual(lotCautions(wet).map((c) => c.code));
+  });
+
+  // Stack temperature thresholds: 150 °F check often, 175 °F call the fire department (Penn State / Purdue extension; common practice).
+  it('tells the grower to watch the stack temperature and when to call the fire service', () => {
+    const heat = growerCautions(wet).find((c) => c.code === 'storage-moisture')!;
+    expect(heat.message).toMatch(/150 °F/);
+    expect(heat.message).toMatch(/175 °F: call the fire service/);
+  });
+
+  it('speaks to the grower, not to a buyer deciding what to feed', () => {
+    for (const c of growerCautions(wet)) expect(c.message).not.toMatch(/before feeding it to such horses|inspect flakes before feeding/);
   });
 });

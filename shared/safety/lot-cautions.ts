@@ -110,3 +110,55 @@ export function lotCautions(lot: CautionInput): Caution[] {
   });
   return out;
 }
+
+/**
+ * The same cautions written for the grower listing the lot: what it means for their stack and what buyers
+ * will be told. Same codes and order as `lotCautions`, so both sides talk about the same thing.
+ */
+export function growerCautions(lot: CautionInput): Caution[] {
+  const safe = SAFE_BALING_MOISTURE_PCT[lot.baleType];
+  const forGrower: Record<Caution['code'], (c: Caution) => Caution> = {
+    'storage-moisture': (c) => ({
+      ...c,
+      title: 'Your stack may heat',
+      message:
+        `You baled at ${lot.moistureAtBalingPct}% moisture, above the ${safe}% usually advised for this bale type. Probe the stack ` +
+        'with a hay thermometer for the next weeks (150 °F: check twice a day and open the stack; 175 °F: call the fire service, ' +
+        'do not move the bales yourself) and follow local fire guidance. Buyers are told the moisture at baling.',
+    }),
+    'blister-beetles': (c) => ({
+      ...c,
+      title: 'Buyers of alfalfa ask about blister beetles',
+      message:
+        'Buyers are told that blister beetles can be baled into alfalfa. Say in the description how the hay was cut (with or without ' +
+        'a conditioner or crimper) and whether you scouted for beetles before cutting; your extension office can advise on timing.',
+    }),
+    'high-nsc': (c) => ({
+      ...c,
+      title: 'Sugar and starch above the usual limit for metabolic horses',
+      message:
+        'Buyers with horses prone to laminitis are told this lot is above the 10–12% NSC often advised and to ask their ' +
+        'veterinarian. It still suits many horses; say so plainly in the description rather than leave buyers to guess.',
+    }),
+    botulism: (c) => ({
+      ...c,
+      title: 'Wet or wrapped bales can carry botulism',
+      message:
+        'Bales this wet ferment like baleage. Buyers are told about botulism and to ask their veterinarian; keep wrap whole, ' +
+        'set aside torn or off-smelling bales, and say in the description how the bales were made and stored.',
+    }),
+    'outside-storage': (c) => ({
+      ...c,
+      title: 'Stored outside',
+      message: 'Buyers are told the hay is uncovered. Covering the stack or moving it under a roof keeps dry matter and protects outer layers from mould.',
+    }),
+    'mould-dust': (c) => ({
+      ...c,
+      title: 'Mould and dust',
+      message:
+        'A lab report does not show mould or dust, so buyers inspect each bale on delivery. List only hay you would feed ' +
+        'to a horse yourself; bales that are mouldy or dusty can be refused.',
+    }),
+  };
+  return lotCautions(lot).map((c) => forGrower[c.code](c));
+}

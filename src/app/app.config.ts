@@ -4,12 +4,14 @@ import { provideClientHydration, withEventReplay } from '@angular/platform-brows
 import { provideRouter, withComponentInputBinding, withInMemoryScrolling } from '@angular/router';
 import { MatIconRegistry } from '@angular/material/icon';
 import { routes } from './app.routes';
+import { provideReaderLocale } from './core/locale';
 import { Session } from './core/session';
 import { forwardCookiesOnServer } from './core/ssr-cookie-interceptor';
 
 export const appConfig: ApplicationConfig = {
   providers: [
     provideBrowserGlobalErrorListeners(),
+    provideReaderLocale,
     provideRouter(routes, withComponentInputBinding(), withInMemoryScrolling({ scrollPositionRestoration: 'enabled' })),
     provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer])),
     provideClientHydration(withEventReplay()),

@@ -5,7 +5,7 @@ export const routes: Routes = [
   { path: '', title: 'Baleproof — lab-tested hay', loadComponent: () => import('./features/home/home-page').then((m) => m.HomePage) },
   { path: 'hay', loadChildren: () => import('./features/catalogue/catalogue.routes').then((m) => m.CATALOGUE_ROUTES) },
   { path: 'planner', title: 'Herd planner — Baleproof', loadComponent: () => import('./features/planner/planner-page').then((m) => m.PlannerPage) },
-  { path: 'cart', title: 'Your cart — Baleproof', loadComponent: () => import('./features/orders/cart-page').then((m) => m.CartPage) },
+  { path: 'cart', title: 'Your hay list — Baleproof', loadComponent: () => import('./features/orders/cart-page').then((m) => m.CartPage) },
   { path: 'orders', canMatch: [roleGuard('buyer', 'grower', 'admin')], title: 'Orders — Baleproof', loadComponent: () => import('./features/orders/orders-list-page').then((m) => m.OrdersListPage) },
   { path: 'orders/:id', canMatch: [roleGuard('buyer', 'grower', 'admin')], title: 'Order — Baleproof', loadComponent: () => import('./features/orders/order-page').then((m) => m.OrderPage) },
   { path: 'selling', canMatch: [roleGuard('grower')], loadChildren: () => import('./features/selling/selling.routes').then((m) => m.SELLING_ROUTES) },

@@ -43,10 +43,20 @@ describe('saved searches', () => {
     expect(await paths({ radiusMi: '50' })).toEqual(['query.zip']);
   });
 
+  it('refuses to save a search without any filter (it would alert on every lot)', async () => {
+    const { agent } = await signedInBuyer();
+    for (const query of [{}, { sort: 'price' }, { page: '2', cpMin: '' }]) {
+      const res = await agent.post('/saved-searches', { name: 'Everything', query });
+      expect(res.status).toBe(400);
+      expect(res.body.error.details.map((d: { path: string }) => d.path)).toEqual(['query']);
+    }
+    expect((await agent.get('/saved-searches')).body.items).toEqual([]);
+  });
+
   it('keeps each buyer’s searches private, and needs a signed-in buyer', async () => {
     const owner = await signedInBuyer();
     const other = await signedInBuyer();
-    const created = await owner.agent.post('/saved-searches', { name: 'Mine', query: {} });
+    const created = await owner.agent.post('/saved-searches', { name: 'Mine', query: { forageType: 'teff' } });
     expect((await other.agent.get('/saved-searches')).body.items).toEqual([]);
     expect((await other.agent.delete(`/saved-searches/${created.body.id}`)).status).toBe(404);
     expect((await t.agent().get('/saved-searches')).status).toBe(401);

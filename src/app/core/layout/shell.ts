@@ -1,15 +1,15 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
-import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatIcon } from '@angular/material/icon';
 import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
-import { MatToolbar } from '@angular/material/toolbar';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
+import { ROLE_LABELS } from '@shared/contracts/labels';
+import { BrandMark } from '../../shared/ui/brand-mark';
 import { Session } from '../session';
 import { navLinksFor } from './nav-links';
 
 @Component({
   selector: 'app-shell',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatToolbar, MatButton, MatIconButton, MatIcon, MatMenu, MatMenuItem, MatMenuTrigger],
+  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatIcon, MatMenu, MatMenuItem, MatMenuTrigger, BrandMark],
   templateUrl: './shell.html',
   styleUrl: './shell.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -18,6 +18,18 @@ export class Shell {
   private readonly router = inject(Router);
   protected readonly session = inject(Session);
   protected readonly links = computed(() => navLinksFor(this.session.role()));
+  protected readonly initials = computed(() =>
+    (this.session.user()?.displayName ?? '')
+      .split(/\s+/)
+      .filter(Boolean)
+      .slice(0, 2)
+      .map((w) => w[0]!.toUpperCase())
+      .join(''),
+  );
+  protected readonly roleName = computed(() => {
+    const role = this.session.role();
+    return role ? ROLE_LABELS[role] : '';
+  });
   protected readonly year = new Date().getFullYear();
 
   protected async signOut(): Promise<void> {

@@ -1,16 +1,18 @@
+import { CurrencyPipe, DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
-import { MatButton } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { LotSummary } from '@shared/contracts/lots';
 import { USDA_GRADE_RULE_SHORT } from '@shared/forage/grades';
-import { dollars, fixed } from '../format';
+import { usdaScaleFor } from '@shared/forage/grade-scale';
+import { GradeMark } from '../../../shared/ui/grade-mark';
+import { cuttingLabel, distanceLabel } from '../format';
 import { CompareSelection } from '../lot-compare/compare-selection';
 
-/** One lot in the catalogue grid: photo, the key measured figures, price per ton as-fed and of DM. */
+/** One lot in the catalogue, drawn as a lab sample tag: lot number, grade on its scale, the assay, both prices. */
 @Component({
   selector: 'app-lot-card',
-  imports: [RouterLink, MatButton],
+  imports: [RouterLink, DecimalPipe, CurrencyPipe, GradeMark],
   templateUrl: './lot-card.html',
   styleUrl: './lot-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -23,12 +25,13 @@ export class LotCard {
   protected readonly gradeRule = USDA_GRADE_RULE_SHORT;
   protected readonly forage = computed(() => FORAGE_TYPE_LABELS[this.lot().forageType]);
   protected readonly bale = computed(() => BALE_TYPE_LABELS[this.lot().baleType]);
+  protected readonly cuttingLabel = computed(() => cuttingLabel(this.lot().cutting));
+  protected readonly gradeScale = computed(() => usdaScaleFor(this.lot().forageClass));
+  protected readonly distance = computed(() => distanceLabel(this.lot().distanceMi));
   protected readonly srcset = computed(() => {
     const cover = this.lot().cover;
     if (!cover) return null;
     const webp = cover.variants.filter((v) => v.format === 'webp');
     return { src: webp[0]?.url ?? '', srcset: webp.map((v) => `${v.url} ${v.width}w`).join(', '), alt: cover.altText };
   });
-  protected readonly dollars = dollars;
-  protected readonly fixed = fixed;
 }

@@ -12,14 +12,14 @@ import { errorOf, requestState, valueOf, type RequestState } from '../../../core
 import { CompareApi } from './compare-api';
 import { compareSections } from './compare-rows';
 import { CompareSelection } from './compare-selection';
-import { NutrientChart, type ChartSeries } from './nutrient-chart';
+import { NutrientStrips, type StripRow } from './nutrient-strips';
 
 type CompareState = { status: 'idle' } | RequestState<LotComparison>;
 
 /** Up to four lots side by side: nutrients on a DM basis and what each costs per unit delivered. */
 @Component({
   selector: 'app-lot-compare-page',
-  imports: [FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar, NutrientChart],
+  imports: [FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar, NutrientStrips],
   templateUrl: './lot-compare-page.html',
   styleUrl: './lot-compare-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -54,13 +54,22 @@ export class LotComparePage {
   protected readonly result = computed(() => valueOf(this.state()));
   protected readonly error = computed(() => errorOf(this.state()));
   protected readonly sections = computed(() => compareSections(this.result()?.items ?? []));
-  protected readonly chartLabels = ['Crude protein', 'ADF', 'NDF', 'NSC', 'TDN'];
-  protected readonly chartSeries = computed<ChartSeries[]>(() =>
-    (this.result()?.items ?? []).map((l) => ({
-      label: l.title,
-      values: [l.nutrients.crudeProteinPct, l.nutrients.adfPct, l.nutrients.ndfPct, l.nutrients.nscPct, l.nutrients.tdnPct],
-    })),
-  );
+  protected readonly chartLots = computed(() => (this.result()?.items ?? []).map((l) => l.title));
+  /** For horses: more protein, energy and feed value is better; more fibre and more sugar + starch is worse. */
+  protected readonly chartRows = computed<StripRow[]>(() => {
+    const items = this.result()?.items ?? [];
+    const row = (label: string, unit: string, better: 'higher' | 'lower', pick: (n: (typeof items)[number]['nutrients']) => number | null): StripRow => ({
+      label, unit, better, values: items.map((l) => pick(l.nutrients)),
+    });
+    return [
+      row('Crude protein', '% of DM', 'higher', (n) => n.crudeProteinPct),
+      row('TDN', '% of DM', 'higher', (n) => n.tdnPct),
+      row('RFV', 'index', 'higher', (n) => n.rfv),
+      row('ADF', '% of DM', 'lower', (n) => n.adfPct),
+      row('NDF', '% of DM', 'lower', (n) => n.ndfPct),
+      row('NSC (sugar + starch)', '% of DM', 'lower', (n) => n.nscPct),
+    ];
+  });
   protected readonly atFarmNotes = computed(() => {
     const notes = (this.result()?.items ?? []).filter((l) => l.pricing.note).map((l) => `${l.title}: ${l.pricing.note}`);
     return [...new Set(notes)];

@@ -4,6 +4,11 @@ import type { LotAnalysisView, LotDetail } from '@shared/contracts/lots';
 import { afgcGradeRule, type ForageEvaluation, type Nutrients, usdaGradeRule } from '@shared/forage';
 import { lotCautions } from '@shared/safety/lot-cautions';
 import { fixed } from '../format';
+import { FeedValueScale } from './figures/feed-value-scale';
+import { GradeBands } from './figures/grade-bands';
+import { NscGauge } from './figures/nsc-gauge';
+import { GradeMark } from '../../../shared/ui/grade-mark';
+import { usdaScaleFor } from '@shared/forage/grade-scale';
 import { DE_METHOD_LABELS, FIGURE_MEANINGS, NSC_FLAG_TEXT, NSC_METHOD_LABELS, TDN_METHOD_LABELS } from './figure-notes';
 
 const NUTRIENT_ROWS: [keyof Nutrients, string][] = [
@@ -23,6 +28,7 @@ const NUTRIENT_ROWS: [keyof Nutrients, string][] = [
 /** The lab analysis on dry-matter and as-fed bases, the computed indices, grades, findings and cautions. */
 @Component({
   selector: 'app-lot-analysis-panel',
+  imports: [NscGauge, FeedValueScale, GradeBands, GradeMark],
   templateUrl: './lot-analysis-panel.html',
   styleUrl: './lot-analysis-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -31,6 +37,8 @@ export class LotAnalysisPanel {
   readonly analysis = input.required<LotAnalysisView>();
   readonly evaluation = input.required<ForageEvaluation>();
   readonly lot = input.required<LotDetail>();
+
+  protected readonly usdaScale = computed(() => usdaScaleFor(this.lot().forageClass));
 
   protected readonly rows = computed(() => {
     const { dm, asFed } = this.evaluation();

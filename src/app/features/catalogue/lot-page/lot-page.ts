@@ -1,12 +1,13 @@
+import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, RESPONSE_INIT } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { switchMap, tap } from 'rxjs';
-import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
+import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, LOT_STATUS_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
 import type { LotDetail } from '@shared/contracts/lots';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
-import { dollars, fixed } from '../format';
+import { cuttingLabel, dollars, fixed } from '../format';
 import { LotsApi } from '../lots-api';
 import { LotGallery } from './lot-gallery';
 import { LotAnalysisPanel } from './lot-analysis-panel';
@@ -15,7 +16,7 @@ import { Session } from '../../../core/session';
 
 @Component({
   selector: 'app-lot-page',
-  imports: [RouterLink, MatIcon, LotGallery, LotAnalysisPanel, BuyPanel],
+  imports: [RouterLink, MatIcon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel],
   templateUrl: './lot-page.html',
   styleUrl: './lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,6 +49,8 @@ export class LotPage {
   protected readonly labels = { forage: FORAGE_TYPE_LABELS, bale: BALE_TYPE_LABELS, storage: STORAGE_LABELS, core: CORE_POSITION_LABELS };
   protected readonly dollars = dollars;
   protected readonly fixed = fixed;
+  protected readonly cutting = cuttingLabel;
+  protected readonly statusLabels = LOT_STATUS_LABELS;
 }
 
 /** 400 (not a lot id) and 404 both mean there is no such lot to show. */

@@ -1,15 +1,14 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, effect, inject } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
-import { MatPaginator, PageEvent } from '@angular/material/paginator';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
-import { switchMap } from 'rxjs';
+import { debounceTime, switchMap } from 'rxjs';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { LotSearchResult } from '@shared/contracts/lots';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
@@ -17,13 +16,14 @@ import { LotCard } from '../lot-card/lot-card';
 import { CompareSelection } from '../lot-compare/compare-selection';
 import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { LotsApi } from '../lots-api';
-import { FILTER_KEYS, FILTER_LABELS, queryFromForm, SORT_OPTIONS } from './search-query';
+import { Pager, type PagerChange } from '../../../shared/ui/pager';
+import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, queryFromForm, SORT_OPTIONS } from './search-query';
 
 
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
   selector: 'app-lot-search-page',
-  imports: [ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, MatPaginator, MatProgressBar],
+  imports: [ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar],
   templateUrl: './lot-search-page.html',
   styleUrl: './lot-search-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -44,12 +44,21 @@ export class LotSearchPage {
 
   protected readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
 
-  protected readonly state = toSignal(this.route.queryParams.pipe(switchMap((params) => requestState(this.api.search(params)))), {
+  /** What the API is asked (a distance sort without a ZIP is dropped, with a note). */
+  protected readonly apiQuery = computed(() => apiQueryFor(this.params()));
+  protected readonly state = toSignal(this.route.queryParams.pipe(switchMap((params) => requestState(this.api.search(apiQueryFor(params).query)))), {
     initialValue: { status: 'loading' } as RequestState<LotSearchResult>,
   });
   protected readonly result = computed(() => valueOf(this.state()));
-  protected readonly error = computed(() => errorOf(this.state()));
-  protected readonly sort = computed(() => this.params()['sort'] ?? 'newest');
+  /** The API's message without its field prefix ("cpMin: …"), under our own lead-in. */
+  protected readonly error = computed(() => errorOf(this.state())?.replace(/^[a-zA-Z]+: /, '') ?? null);
+  /** On phones the filters fold away (closed until asked for); on wide screens they are always shown. */
+  protected readonly filtersOpen = signal(false);
+  protected readonly sortNotice = signal<string | null>(null);
+  protected readonly filterCount = computed(() => FILTER_KEYS.filter((k) => this.params()[k] !== undefined && k !== 'radiusMi').length);
+  /** The query last sent from the form, so the URL echo does not overwrite what is being typed. */
+  private lastApplied = '';
+  protected readonly sort = computed(() => this.apiQuery().query['sort'] ?? 'newest');
   /** The comparison link carries the ZIP so delivered prices use the same place. */
   protected readonly compareParams = computed(() => ({ ids: this.compare.ids().join(','), zip: this.params()['zip'] }));
   /** Filters in the URL, each removable on its own from the empty state. */
@@ -60,13 +69,16 @@ export class LotSearchPage {
       value: key.endsWith('Only') ? '' : this.params()[key],
     })),
   );
-  protected readonly hasFilters = computed(() => FILTER_KEYS.some((k) => this.params()[k] !== undefined));
+  protected readonly hasFilters = computed(() => hasAnyFilter(this.params()));
 
   constructor() {
     afterNextRender(() => this.compare.restore());
+    // Filters apply as they change, once typing pauses.
+    this.filters.valueChanges.pipe(debounceTime(450), takeUntilDestroyed()).subscribe(() => this.applyFilters());
     // Keep the form showing what the URL says (also after back/forward).
     effect(() => {
       const p = this.params();
+      if (JSON.stringify(pickFilters(p)) === this.lastApplied) return;
       this.filters.reset(
         Object.fromEntries(FILTER_KEYS.map((k) => [k, k.endsWith('Only') ? p[k] === 'true' : (p[k] ?? '')])),
         { emitEvent: false },
@@ -75,7 +87,23 @@ export class LotSearchPage {
   }
 
   protected applyFilters(): void {
-    this.navigate({ ...queryFromForm(this.filters.getRawValue()), sort: this.params()['sort'], pageSize: this.params()['pageSize'], page: undefined });
+    const query = queryFromForm(this.filters.getRawValue());
+    // A ZIP being typed is not a ZIP yet: leave distance out until it has five digits.
+    if (query['zip'] !== undefined && !/^\d{5}$/.test(query['zip'])) {
+      query['zip'] = this.params()['zip'];
+      query['radiusMi'] = this.params()['radiusMi'];
+    }
+    const sort = query['zip'] === undefined && this.params()['sort'] === 'distance' ? undefined : this.params()['sort'];
+    if (JSON.stringify(pickFilters(query)) === JSON.stringify(pickFilters(this.params()))) return;
+    this.lastApplied = JSON.stringify(pickFilters(query));
+    // Refining a search replaces the history entry, so Back returns to where the search started.
+    this.navigate({ ...query, sort, pageSize: this.params()['pageSize'], page: undefined }, this.hasFilters());
+  }
+
+  /** The form's submit (Enter, or "Show hay" on a phone): apply now and fold the panel to show the lots. */
+  protected showLots(): void {
+    this.applyFilters();
+    this.filtersOpen.set(false);
   }
 
   protected removeFilter(key: string): void {
@@ -85,18 +113,32 @@ export class LotSearchPage {
   }
 
   protected clearFilters(): void {
-    this.navigate({ sort: this.params()['sort'] });
+    // "Nearest" cannot outlive the ZIP it measures from.
+    const sort = this.params()['sort'] === 'distance' ? undefined : this.params()['sort'];
+    this.lastApplied = JSON.stringify({});
+    this.sortNotice.set(null);
+    this.navigate({ sort });
   }
 
   protected changeSort(sort: string): void {
+    if (sort === 'distance' && !this.params()['zip']) {
+      this.sortNotice.set('Give your ZIP code under “Price, quantity and distance” to sort by distance.');
+      this.filtersOpen.set(true);
+      return;
+    }
+    this.sortNotice.set(null);
     this.navigate({ ...this.params(), sort: sort === 'newest' ? undefined : sort, page: undefined });
   }
 
-  protected changePage(event: PageEvent): void {
-    this.navigate({ ...this.params(), page: event.pageIndex > 0 ? String(event.pageIndex + 1) : undefined, pageSize: String(event.pageSize) });
+  protected changePage(event: PagerChange): void {
+    this.navigate({ ...this.params(), page: event.page > 1 ? String(event.page) : undefined, pageSize: String(event.pageSize) });
   }
 
-  private navigate(queryParams: Record<string, string | undefined>): void {
-    void this.router.navigate([], { relativeTo: this.route, queryParams });
+  private navigate(queryParams: Record<string, string | undefined>, replaceUrl = false): void {
+    void this.router.navigate([], { relativeTo: this.route, queryParams, replaceUrl });
   }
+}
+
+function pickFilters(q: Record<string, string | undefined>): Record<string, string> {
+  return Object.fromEntries(FILTER_KEYS.filter((k) => q[k] !== undefined && q[k] !== '').map((k) => [k, String(q[k])]));
 }

@@ -1,4 +1,4 @@
-import { queryFromForm } from './search-query';
+import { apiQueryFor, describeQuery, hasAnyFilter, queryFromForm } from './search-query';
 
 describe('queryFromForm', () => {
   it('drops empty fields and unticked boxes so shared links stay short', () => {
@@ -9,5 +9,31 @@ describe('queryFromForm', () => {
       compliantOnly: 'true',
       verifiedOnly: undefined,
     });
+  });
+});
+
+describe('apiQueryFor', () => {
+  it('drops "nearest" when no ZIP is given and says why, instead of sending a query the API refuses', () => {
+    const out = apiQueryFor({ sort: 'distance', rfvMin: '150' });
+    expect(out.query).toEqual({ rfvMin: '150' });
+    expect(out.notice).toMatch(/ZIP/);
+  });
+  it('keeps "nearest" with a ZIP', () => {
+    expect(apiQueryFor({ sort: 'distance', zip: '66502' })).toEqual({ query: { sort: 'distance', zip: '66502' }, notice: null });
+  });
+});
+
+describe('hasAnyFilter', () => {
+  it('does not count a sort or a page as a filter', () => {
+    expect(hasAnyFilter({ sort: 'price', page: '2' })).toBe(false);
+    expect(hasAnyFilter({ sort: 'price', cpMin: '18' })).toBe(true);
+  });
+});
+
+describe('describeQuery', () => {
+  it('says what a saved search holds in words', () => {
+    expect(describeQuery({ rfvMin: '150', cpMin: '18', forageType: 'alfalfa', zip: '66502', radiusMi: '50', sort: 'price' }, { alfalfa: 'Alfalfa' })).toBe(
+      'RFV from 150 · CP from 18% · Forage: Alfalfa · within 50 mi of 66502 · sorted by price per ton',
+    );
   });
 });

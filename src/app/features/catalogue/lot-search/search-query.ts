@@ -65,3 +65,49 @@ export function queryFromForm(values: Record<string, string | boolean>): Record<
   }
   return out;
 }
+
+/** Whether the query holds any filter (a sort or a page alone does not narrow the search). */
+export function hasAnyFilter(query: Record<string, string | undefined>): boolean {
+  return FILTER_KEYS.some((k) => query[k] !== undefined && query[k] !== '');
+}
+
+/**
+ * The query to send to the API. "Nearest" needs a ZIP; without one (a cleared form, an old link) the lots
+ * come back newest first and `notice` says why, instead of the API's validation error.
+ */
+export function apiQueryFor(params: Record<string, string | undefined>): { query: Record<string, string>; notice: string | null } {
+  const query = Object.fromEntries(Object.entries(params).filter(([, v]) => v !== undefined && v !== '')) as Record<string, string>;
+  if (query['sort'] === 'distance' && !query['zip']) {
+    delete query['sort'];
+    return { query, notice: 'Give your ZIP code to sort by distance; until then the newest lots come first.' };
+  }
+  if (query['radiusMi'] && !query['zip']) {
+    delete query['radiusMi'];
+    return { query, notice: 'Give your ZIP code to limit the distance.' };
+  }
+  return { query, notice: null };
+}
+
+const UNITS: Partial<Record<(typeof FILTER_KEYS)[number], string>> = {
+  cpMin: '%', cpMax: '%', adfMax: '%', ndfMax: '%', nscMax: '%',
+};
+
+/**
+ * A saved search in words, e.g. "RFV from 150 · Forage: Alfalfa · within 50 mi of 66502 · sorted by price per ton".
+ * `names` turns coded values (forage, bale type) into their labels.
+ */
+export function describeQuery(query: Record<string, string>, names: Record<string, string> = {}): string {
+  const parts: string[] = [];
+  for (const key of FILTER_KEYS) {
+    const v = query[key];
+    if (v === undefined || v === '' || key === 'radiusMi') continue;
+    if (key === 'zip') parts.push(query['radiusMi'] ? `within ${query['radiusMi']} mi of ${v}` : `near ${v}`);
+    else if (key === 'compliantOnly' || key === 'verifiedOnly') parts.push(FILTER_LABELS[key].toLowerCase());
+    else if (key === 'q') parts.push(`“${v}”`);
+    else if (key === 'forageType' || key === 'baleType') parts.push(`${FILTER_LABELS[key]}: ${names[v] ?? v}`);
+    else parts.push(`${FILTER_LABELS[key]} ${v}${UNITS[key] ?? ''}`);
+  }
+  const sort = SORT_OPTIONS.find((s) => s.value === query['sort'] && s.value !== 'newest');
+  if (sort) parts.push(`sorted by ${sort.label.replace(' (needs ZIP)', '').toLowerCase()}`);
+  return parts.length > 0 ? parts.join(' · ') : 'every lot';
+}

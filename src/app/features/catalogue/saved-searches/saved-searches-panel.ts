@@ -6,7 +6,9 @@ import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
+import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { SavedSearchView } from '@shared/contracts/saved-searches';
+import { describeQuery, hasAnyFilter } from '../lot-search/search-query';
 import { apiErrorMessage } from '../../../core/api-error';
 import { Session } from '../../../core/session';
 import { SavedSearchesApi } from './saved-searches-api';
@@ -31,6 +33,8 @@ export class SavedSearchesPanel {
   protected readonly message = signal<string | null>(null);
   protected readonly busy = signal(false);
   protected readonly isBuyer = computed(() => this.session.role() === 'buyer');
+  /** An empty search would alert on every lot: saving waits for a filter. */
+  protected readonly canSave = computed(() => hasAnyFilter(this.query()));
   protected readonly returnTo = computed(() => {
     const search = new URLSearchParams(this.query()).toString();
     return search ? `/hay?${search}` : '/hay';
@@ -40,7 +44,12 @@ export class SavedSearchesPanel {
     afterNextRender(() => void this.load());
   }
 
+  protected describe(query: Record<string, string>): string {
+    return describeQuery(query, { ...FORAGE_TYPE_LABELS, ...BALE_TYPE_LABELS });
+  }
+
   protected async saveSearch(): Promise<void> {
+    if (!this.canSave()) return;
     const name = this.name().trim() || 'My hay search';
     this.busy.set(true);
     try {

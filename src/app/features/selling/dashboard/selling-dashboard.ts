@@ -10,6 +10,7 @@ import { apiErrorMessage } from '../../../core/api-error';
 import { dollars, fixed } from '../../catalogue/format';
 import { SellingApi } from '../selling-api';
 import { STATUS_LABELS } from '../ui/status-label';
+import { draftProgress } from '../lot-form/form-steps';
 
 /** The grower's lots: status, stock left, views and orders, with withdraw, relist and copy. */
 @Component({
@@ -29,6 +30,10 @@ export class SellingDashboard implements OnInit {
   protected readonly farm = signal<FarmProfile | null | undefined>(undefined);
   protected readonly error = signal('');
   protected readonly busyId = signal<number | null>(null);
+  /** Pausing asks first, then offers an undo. */
+  protected readonly confirmingId = signal<number | null>(null);
+  protected readonly paused = signal<{ id: number; title: string } | null>(null);
+  protected readonly progress = draftProgress;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly bales = BALE_TYPE_LABELS;
   protected readonly dollars = dollars;
@@ -63,6 +68,19 @@ export class SellingDashboard implements OnInit {
     } finally {
       this.busyId.set(null);
     }
+  }
+
+  protected async pause(lot: SellerLotRow): Promise<void> {
+    this.confirmingId.set(null);
+    await this.act(lot, 'withdraw');
+    if (!this.error()) this.paused.set({ id: lot.id, title: lot.title });
+  }
+
+  protected async undoPause(p: { id: number; title: string }): Promise<void> {
+    const lot = this.lots()?.find((l) => l.id === p.id);
+    if (!lot) return;
+    await this.act(lot, 'relist');
+    if (!this.error()) this.paused.set(null);
   }
 
   protected thumb(lot: SellerLotRow): string | null {

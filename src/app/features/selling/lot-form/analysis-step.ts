@@ -64,7 +64,8 @@ export class AnalysisStep {
   private readonly fb = inject(FormBuilder).nonNullable;
   protected readonly form = this.fb.group({
     labName: ['', Validators.required],
-    labCertified: [true],
+    // Ticked only by the grower who knows it: an unticked box is the honest default.
+    labCertified: [false],
     reportNumber: [''],
     reportDate: ['', Validators.required],
     method: ['nirs' as 'nirs' | 'wet_chemistry'],

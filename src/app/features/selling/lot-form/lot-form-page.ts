@@ -1,15 +1,14 @@
-import { BreakpointObserver } from '@angular/cdk/layout';
 import { ChangeDetectionStrategy, Component, computed, inject, input, OnInit, signal, viewChild } from '@angular/core';
-import { toSignal } from '@angular/core/rxjs-interop';
 import { MatIcon } from '@angular/material/icon';
 import { MatStep, MatStepper } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
-import { firstValueFrom, map } from 'rxjs';
+import { firstValueFrom } from 'rxjs';
 import type { EditableLot } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 import { STATUS_LABELS } from '../ui/status-label';
 import { AnalysisStep } from './analysis-step';
+import { LOT_FORM_STEPS } from './form-steps';
 import { LotStep } from './lot-step';
 import { PhotosStep } from './photos-step';
 import { PriceStep } from './price-step';
@@ -39,7 +38,9 @@ export class LotFormPage implements OnInit {
   protected readonly loadError = signal('');
   protected readonly loaded = signal(false);
   protected readonly statusLabels = STATUS_LABELS;
-  protected readonly narrow = toSignal(inject(BreakpointObserver).observe('(max-width: 720px)').pipe(map((s) => s.matches)), { initialValue: false });
+  protected readonly steps = LOT_FORM_STEPS;
+  /** The open step (the stepper's own header is replaced by the step list above it). */
+  protected readonly current = signal(0);
   protected readonly draftStep = computed(() => this.lot()?.draftStep ?? 0);
   protected readonly startIndex = signal(0);
 
@@ -58,6 +59,7 @@ export class LotFormPage implements OnInit {
       this.lot.set(lot);
       // Resume at the first step not yet saved (the review step once all are).
       this.startIndex.set(Math.min(lot.draftStep, 6));
+      this.current.set(Math.min(lot.draftStep, 6));
     } catch (e) {
       this.loadError.set(apiErrorMessage(e, 'This lot could not be loaded.'));
     }
@@ -82,5 +84,16 @@ export class LotFormPage implements OnInit {
 
   protected done(step: number): boolean {
     return this.draftStep() >= step;
+  }
+
+  /** A step can be opened once every step before it is saved. */
+  protected reachable(index: number): boolean {
+    return index <= this.draftStep();
+  }
+
+  protected goTo(index: number): void {
+    const stepper = this.stepper();
+    if (!stepper || !this.reachable(index)) return;
+    stepper.selectedIndex = index;
   }
 }

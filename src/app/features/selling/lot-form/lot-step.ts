@@ -41,7 +41,8 @@ import { numberOrNull, StepSave } from './step-save';
         <mat-form-field appearance="outline" class="wide"><mat-label>Title</mat-label><input matInput formControlName="title" [placeholder]="suggestedTitle()" /><mat-hint>Leave empty for “{{ suggestedTitle() }}”</mat-hint></mat-form-field>
         <mat-form-field appearance="outline" class="wide"><mat-label>Description for buyers</mat-label><textarea matInput rows="3" formControlName="description"></textarea></mat-form-field>
       </div>
-      <app-cautions-list [lot]="cautionInput()" />
+      <h3>What to watch as the grower</h3>
+      <app-cautions-list [lot]="cautionInput()" audience="grower" />
       @if (saving.error()) { <div class="bp-error-box" role="alert">{{ saving.error() }}</div> }
       <div class="actions">
         <button mat-flat-button type="submit" [disabled]="saving.busy()">Save and continue</button>

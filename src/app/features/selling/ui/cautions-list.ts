@@ -1,7 +1,7 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
-import { lotCautions, type CautionInput } from '@shared/safety/lot-cautions';
+import { growerCautions, lotCautions, type CautionInput } from '@shared/safety/lot-cautions';
 
-/** Storage and feeding cautions for a lot; each defers to a veterinarian or local guidance. */
+/** Storage and feeding cautions for a lot, written for its buyers or for its grower; each defers to a professional or local guidance. */
 @Component({
   selector: 'app-cautions-list',
   template: `
@@ -15,5 +15,6 @@ import { lotCautions, type CautionInput } from '@shared/safety/lot-cautions';
 })
 export class CautionsList {
   readonly lot = input.required<CautionInput>();
-  protected readonly cautions = computed(() => lotCautions(this.lot()));
+  readonly audience = input<'buyer' | 'grower'>('buyer');
+  protected readonly cautions = computed(() => (this.audience() === 'grower' ? growerCautions(this.lot()) : lotCautions(this.lot())));
 }

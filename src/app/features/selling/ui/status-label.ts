@@ -1,11 +1,5 @@
 import type { LotStatus } from '@shared/contracts/selling';
+import { LOT_STATUS_LABELS } from '@shared/contracts/labels';
 
-/** How each lot state is named to its grower. */
-export const STATUS_LABELS: Record<LotStatus, string> = {
-  draft: 'Draft',
-  in_review: 'Waiting for review',
-  returned: 'Needs changes',
-  listed: 'On sale',
-  withdrawn: 'Off sale',
-  sold_out: 'Sold out',
-};
+/** How each lot state is named (one home: shared/contracts/labels.ts). */
+export const STATUS_LABELS: Record<LotStatus, string> = LOT_STATUS_LABELS;

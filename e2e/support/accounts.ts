@@ -1,0 +1,21 @@
+import { expect, type Page } from '@playwright/test';
+
+// Demo accounts from the seed (README lists them).
+export const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
+export const BUYER = { email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass' };
+export const ADMIN = { email: 'admin@baleproof.example', password: 'admin-demo-pass' };
+
+export async function signInAs(page: Page, account: { email: string; password: string }): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('E-mail').fill(account.email);
+  await page.getByLabel('Password').fill(account.password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+  await expect(page).toHaveURL(/\/hay/);
+}
+
+/** Ids of the first listed lots, from the API. */
+export async function listedLotIds(page: Page, count: number): Promise<number[]> {
+  const res = await page.request.get(`/api/lots?pageSize=${count}`);
+  expect(res.ok()).toBe(true);
+  return ((await res.json()) as { items: { id: number }[] }).items.map((i) => i.id);
+}
