@@ -21,6 +21,7 @@ import { lotCompareRouter } from './features/lots/lot-compare.router';
 import { plannerRouter } from './features/planner/planner.router';
 import { savedSearchesRouter } from './features/saved-searches/saved-searches.router';
 import { createOrderFeature, deliveryCalendarRouter, ordersRouter, paymentWebhookRouter } from './features/orders/orders.router';
+import { messagesRouter } from './features/messages/messages.router';
 import { createCsrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 
@@ -95,6 +96,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/saved-searches', savedSearchesRouter(db));
   api.use('/orders', ordersRouter(orderFeature));
   api.use('/delivery-calendar', deliveryCalendarRouter(orderFeature));
+  api.use('/messages', messagesRouter(deps));
 
   api.use(apiNotFound);
   api.use(errorHandler(logger));

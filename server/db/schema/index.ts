@@ -17,3 +17,4 @@ export * from './audit-events';
 export * from './saved-searches';
 export * from './platform-settings';
 export * from './lot-search';
+export * from './messages';

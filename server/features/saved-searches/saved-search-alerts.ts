@@ -1,8 +1,9 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { LotSearchSchema, type LotSummary } from '@shared/contracts/lots';
-import { formatCents } from '@shared/units/money';
 import type { ApiDeps } from '../../api-deps';
 import { savedSearches, users } from '../../db/schema';
+import { lotMail } from '../../adapters/mail/lot-mail';
+import { LOT_MAIL_CAUTION, lotMailFacts } from '../lots/lot-mail-facts';
 import { LotsService } from '../lots/lots.service';
 
 export interface AlertOutcome {
@@ -35,7 +36,7 @@ export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'jobs' | 'en
     const { items } = await lotsService.search(query.data, { lotIds: [lotId] });
     const lot = items[0];
     if (!lot) continue;
-    await jobs.enqueueMail({ to: email, ...alertMail(displayName, search.name, search.query, lot, env.PUBLIC_URL) });
+    await jobs.enqueueMail({ ...alertMail(displayName, search.name, search.query, lot, env.PUBLIC_URL), to: email });
     await db.update(savedSearches).set({ lastAlertedAt: deps.clock.now() }).where(eq(savedSearches.id, search.id));
     alerted.push(search.id);
   }
@@ -43,30 +44,14 @@ export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'jobs' | 'en
 }
 
 function alertMail(name: string, searchName: string, query: Record<string, string>, lot: LotSummary, publicUrl: string) {
-  const lotUrl = `${publicUrl}/hay/${lot.id}`;
   const searchUrl = `${publicUrl}/hay?${new URLSearchParams(query).toString()}`;
-  const figures = [
-    `RFV ${Math.round(lot.rfv)}`,
-    `crude protein ${lot.crudeProteinPct.toFixed(1)} % of DM`,
-    lot.nscPct === null ? null : `NSC ${lot.nscPct.toFixed(1)} % of DM`,
-    `${formatCents(lot.priceCentsPerTon, { showCents: false })}/ton as-fed`,
-    lot.distanceMi === null ? null : `${Math.round(lot.distanceMi)} mi away`,
-  ].filter((f): f is string => f !== null);
-  return {
+  return lotMail({
+    to: '',
     subject: `New hay for “${searchName}”: ${lot.title}`,
-    text: [
-      `Hello ${name},`,
-      '',
-      `A newly listed lot matches your saved search “${searchName}”:`,
-      '',
-      `${lot.title} — ${lot.farmName}, ${lot.city}, ${lot.state}`,
-      figures.join(' · '),
-      '',
-      `See the lot and its lab report: ${lotUrl}`,
-      `Your search: ${searchUrl}`,
-      '',
-      'Lab figures describe the sample, not every bale; look the hay over before feeding, and confirm rations with your veterinarian or an equine nutritionist.',
-      'To stop these e-mails, delete the saved search on the catalogue page.',
-    ].join('\n'),
-  };
+    greeting: `Hello ${name},`,
+    lead: [`A newly listed lot matches your saved search “${searchName}”.`, `Your search: ${searchUrl}`],
+    lot: { title: lot.title, facts: lotMailFacts(lot) },
+    action: { label: 'See the lot and its lab report', url: `${publicUrl}/hay/${lot.id}` },
+    footer: `${LOT_MAIL_CAUTION} To stop these e-mails, delete the saved search on the catalogue page.`,
+  });
 }

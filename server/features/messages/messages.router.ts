@@ -1,0 +1,49 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { MessageCreateSchema } from '@shared/contracts/messages';
+import type { ApiDeps } from '../../api-deps';
+import { requireRole } from '../../middleware/require-role';
+import { immediateMessageNotices, type MessageNotices } from './message-notices';
+import { MessagesService } from './messages.service';
+
+const LotParams = z.object({ lotId: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
+const ThreadParams = z.object({ id: z.coerce.number().int().positive('Conversation id must be a positive whole number.') });
+
+/** Messages between buyers and growers about lots: a buyer's thread per lot, and everyone's inbox. */
+export function messagesRouter(deps: ApiDeps, notices: MessageNotices = immediateMessageNotices(deps)): Router {
+  const service = new MessagesService(deps.db, deps.clock);
+  const router = Router();
+  router.use(requireRole('buyer', 'grower'));
+
+  router.get('/threads', async (req, res) => {
+    res.json({ items: await service.inbox(req.user!) });
+  });
+
+  router.get('/threads/:id', async (req, res) => {
+    const { id } = ThreadParams.parse(req.params);
+    res.json(await service.read(req.user!, id));
+  });
+
+  router.post('/threads/:id', async (req, res) => {
+    const { id } = ThreadParams.parse(req.params);
+    const { body } = MessageCreateSchema.parse(req.body);
+    const posted = await service.reply(req.user!, id, body);
+    await notices.posted(posted);
+    res.status(201).json(await service.read(req.user!, posted.threadId));
+  });
+
+  router.get('/lots/:lotId', async (req, res) => {
+    const { lotId } = LotParams.parse(req.params);
+    res.json({ thread: await service.threadAboutLot(req.user!, lotId) });
+  });
+
+  router.post('/lots/:lotId', async (req, res) => {
+    const { lotId } = LotParams.parse(req.params);
+    const { body } = MessageCreateSchema.parse(req.body);
+    const posted = await service.writeAboutLot(req.user!, lotId, body);
+    await notices.posted(posted);
+    res.status(201).json(await service.read(req.user!, posted.threadId));
+  });
+
+  return router;
+}
