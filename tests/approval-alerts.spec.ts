@@ -55,8 +55,9 @@ describe('approving a lot alerts matching saved searches', () => {
     // DDM = 88.9 − 0.779·29 = 66.31; DMI = 120/38 = 3.158; RFV = 66.31·3.158/1.29 = 162.3.
     const alert = await waitForMail(matching.email, title);
     expect(alert.text).toContain(title);
-    expect(alert.text).toContain('RFV 162');
-    expect(alert.text).toContain('crude protein 21.0 % of DM');
+    expect(alert.text).toContain('RFV: 162');
+    expect(alert.text).toContain('Crude protein: 21.0 % of DM');
+    expect(alert.html).toContain('162');
     expect(alert.text).toContain(`/hay/${lotId}`);
 
     // Who should hear about the lot: its grower, and the owner of every saved search (alerts on, account
