@@ -13,6 +13,8 @@ export const serverRoutes: ServerRoute[] = [
   { path: 'selling/**', renderMode: RenderMode.Client },
   { path: 'admin', renderMode: RenderMode.Client },
   { path: 'admin/**', renderMode: RenderMode.Client },
+  { path: 'messages', renderMode: RenderMode.Client },
+  { path: 'messages/**', renderMode: RenderMode.Client },
   { path: 'sign-in', renderMode: RenderMode.Server },
   { path: 'sign-up', renderMode: RenderMode.Server },
   { path: '**', renderMode: RenderMode.Server, status: 404 },

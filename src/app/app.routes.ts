@@ -10,6 +10,8 @@ export const routes: Routes = [
   { path: 'orders/:id', canMatch: [roleGuard('buyer', 'grower', 'admin')], title: 'Order — Baleproof', loadComponent: () => import('./features/orders/order-page').then((m) => m.OrderPage) },
   { path: 'selling', canMatch: [roleGuard('grower')], loadChildren: () => import('./features/selling/selling.routes').then((m) => m.SELLING_ROUTES) },
   { path: 'admin', canMatch: [roleGuard('admin')], loadChildren: () => import('./features/admin/admin.routes').then((m) => m.ADMIN_ROUTES) },
+  { path: 'messages', title: 'Messages — Baleproof', canMatch: [roleGuard('buyer', 'grower')], loadComponent: () => import('./features/messages/inbox-page').then((m) => m.InboxPage) },
+  { path: 'messages/:id', title: 'Messages — Baleproof', canMatch: [roleGuard('buyer', 'grower')], loadComponent: () => import('./features/messages/inbox-page').then((m) => m.InboxPage) },
   { path: 'sign-in', title: 'Sign in — Baleproof', loadComponent: () => import('./features/account/sign-in-page').then((m) => m.SignInPage) },
   { path: 'sign-up', title: 'Create an account — Baleproof', loadComponent: () => import('./features/account/sign-up-page').then((m) => m.SignUpPage) },
   { path: '**', title: 'Page not found — Baleproof', loadComponent: () => import('./features/not-found/not-found-page').then((m) => m.NotFoundPage) },

@@ -14,6 +14,7 @@ export function navLinksFor(role: UserRole | null): NavLink[] {
   if (role === 'buyer' || role === null) links.push({ path: '/cart', label: 'Hay list', icon: 'list_alt' });
   if (role === 'buyer' || role === 'grower') links.push({ path: '/orders', label: role === 'buyer' ? 'My orders' : 'Orders', icon: 'local_shipping' });
   if (role === 'grower') links.push({ path: '/selling', label: 'My lots', icon: 'inventory_2' });
+  if (role === 'buyer' || role === 'grower') links.push({ path: '/messages', label: 'Messages', icon: 'forum' });
   if (role === 'admin') links.push({ path: '/admin', label: 'Review desk', icon: 'fact_check' });
   return links;
 }

@@ -13,10 +13,11 @@ import { LotGallery } from './lot-gallery';
 import { LotAnalysisPanel } from './lot-analysis-panel';
 import { BuyPanel } from '../../orders/buy-panel';
 import { Session } from '../../../core/session';
+import { LotThread } from '../../messages/lot-thread';
 
 @Component({
   selector: 'app-lot-page',
-  imports: [RouterLink, MatIcon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel],
+  imports: [RouterLink, MatIcon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel, LotThread],
   templateUrl: './lot-page.html',
   styleUrl: './lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
