@@ -7,32 +7,32 @@ import { lotMailFacts } from '../lots/lot-mail-facts';
 import { LotsService } from '../lots/lots.service';
 import type { PostedMessage } from './messages.service';
 
-/**
- * Where a new message's e-mail notice goes. Today it is sent straight after the message is stored; the job
- * queue will implement the same interface by enqueueing `sendMessageNotice(messageId)` and retrying it.
- */
+/** Where a new message's e-mail notice goes (the e-mail outbox in the app; a recorder in tests if wanted). */
 export interface MessageNotices {
   posted(message: PostedMessage): Promise<void>;
 }
 
-/** Sends each notice at once; a failed send is logged and left unsent (noticeSentAt stays null) for a retry. */
-export function immediateMessageNotices(deps: Pick<ApiDeps, 'db' | 'mailer' | 'env' | 'logger' | 'clock'>): MessageNotices {
+/**
+ * Puts each notice in the e-mail outbox (the job queue retries SMTP). If even that fails, the message is
+ * kept and its notice stays pending (noticeSentAt null): the sender's message is never lost over an e-mail.
+ */
+export function outboxMessageNotices(deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' | 'logger' | 'clock'>): MessageNotices {
   return {
     async posted({ messageId }) {
       try {
-        await sendMessageNotice(deps, messageId);
+        await queueMessageNotice(deps, messageId);
       } catch (error) {
-        deps.logger.error({ err: error, messageId }, 'message notice not sent; it stays pending');
+        deps.logger.error({ err: error, messageId }, 'message notice not queued; it stays pending');
       }
     },
   };
 }
 
 /**
- * E-mails the other person in the thread about one message, with the lot's facts, once: a message whose
- * notice went out already is skipped, so a retried job never sends twice.
+ * Queues the e-mail to the other person in the thread about one message, with the lot's facts, once: a
+ * message whose notice is already queued is skipped, so running this again never sends twice.
  */
-export async function sendMessageNotice(deps: Pick<ApiDeps, 'db' | 'mailer' | 'env' | 'clock'>, messageId: number): Promise<'sent' | 'already-sent' | 'missing'> {
+export async function queueMessageNotice(deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' | 'clock'>, messageId: number): Promise<'queued' | 'already-queued' | 'missing'> {
   const { db, env } = deps;
   const [row] = await db
     .select({ message: messages, thread: messageThreads, lotTitle: lots.title })
@@ -41,7 +41,7 @@ export async function sendMessageNotice(deps: Pick<ApiDeps, 'db' | 'mailer' | 'e
     .innerJoin(lots, eq(lots.id, messageThreads.lotId))
     .where(eq(messages.id, messageId));
   if (!row) return 'missing';
-  if (row.message.noticeSentAt) return 'already-sent';
+  if (row.message.noticeSentAt) return 'already-queued';
   const { message, thread } = row;
   const toId = message.senderId === thread.buyerId ? thread.growerId : thread.buyerId;
   const [[to], [from]] = await Promise.all([
@@ -60,14 +60,14 @@ export async function sendMessageNotice(deps: Pick<ApiDeps, 'db' | 'mailer' | 'e
     action: { label: 'Read and answer', url: `${env.PUBLIC_URL}/messages/${thread.id}` },
     footer: 'You get this e-mail because someone wrote to you about a lot on Baleproof. Answer on Baleproof, not by replying to this e-mail.',
   });
-  // Claim the notice first so two workers cannot both send it; release the claim if sending fails.
+  // Claim the notice first so two runs cannot both queue it; release the claim if queueing fails.
   const claimed = await db.update(messages).set({ noticeSentAt: deps.clock.now() }).where(and(eq(messages.id, messageId), isNull(messages.noticeSentAt))).returning({ id: messages.id });
-  if (claimed.length === 0) return 'already-sent';
+  if (claimed.length === 0) return 'already-queued';
   try {
-    await deps.mailer.send(mail);
+    await deps.jobs.enqueueMail(mail);
   } catch (error) {
     await db.update(messages).set({ noticeSentAt: null }).where(eq(messages.id, messageId));
     throw error;
   }
-  return 'sent';
+  return 'queued';
 }

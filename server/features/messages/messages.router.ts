@@ -3,14 +3,14 @@ import { z } from 'zod';
 import { MessageCreateSchema } from '@shared/contracts/messages';
 import type { ApiDeps } from '../../api-deps';
 import { requireRole } from '../../middleware/require-role';
-import { immediateMessageNotices, type MessageNotices } from './message-notices';
+import { outboxMessageNotices, type MessageNotices } from './message-notices';
 import { MessagesService } from './messages.service';
 
 const LotParams = z.object({ lotId: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
 const ThreadParams = z.object({ id: z.coerce.number().int().positive('Conversation id must be a positive whole number.') });
 
 /** Messages between buyers and growers about lots: a buyer's thread per lot, and everyone's inbox. */
-export function messagesRouter(deps: ApiDeps, notices: MessageNotices = immediateMessageNotices(deps)): Router {
+export function messagesRouter(deps: ApiDeps, notices: MessageNotices = outboxMessageNotices(deps)): Router {
   const service = new MessagesService(deps.db, deps.clock);
   const router = Router();
   router.use(requireRole('buyer', 'grower'));
