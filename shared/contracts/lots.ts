@@ -148,6 +148,8 @@ export interface LotSummary {
   labCertified: boolean;
   analysisVerified: boolean;
   distanceMi: number | null;
+  /** Where to draw the lot on a map: the farm's place rounded to 0.1° (about 7 mi), never the barn itself. */
+  mapPoint: { lat: number; lon: number };
   cover: PhotoView | null;
   publishedAt: string | null;
 }
@@ -163,7 +165,7 @@ export interface LotSearchResult {
   page: number;
   pageSize: number;
   /** Set when a ZIP was given: where distances are measured from. */
-  origin: { zip: string; city: string; state: string } | null;
+  origin: { zip: string; city: string; state: string; lat: number; lon: number } | null;
 }
 
 /** Everything the lot page shows. Nutrients are stored and returned on a dry-matter basis. */

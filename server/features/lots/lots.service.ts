@@ -107,6 +107,8 @@ export class LotsService {
         samplingCompliant: s.samplingCompliant,
         labCertified: labAnalyses.labCertified,
         analysisVerified: sql<boolean>`${labAnalyses.verification} = 'verified'`,
+        mapLat: sql<number>`round(${s.latitude}::numeric, 1)::float8`,
+        mapLon: sql<number>`round(${s.longitude}::numeric, 1)::float8`,
         publishedAt: lots.publishedAt,
       })
       .from(s)
@@ -124,8 +126,9 @@ export class LotsService {
     const { total, totalCapped } =
       rows.length > 0 && rows.length < query.pageSize ? { total: offset + rows.length, totalCapped: false } : await this.cappedCount(where);
     const covers = await this.coversFor(rows.map((r) => r.id));
-    const items: LotSummary[] = rows.map(({ publishedAt, ...r }) => ({
+    const items: LotSummary[] = rows.map(({ publishedAt, mapLat, mapLon, ...r }) => ({
       ...r,
+      mapPoint: { lat: Number(mapLat), lon: Number(mapLon) },
       priceCentsPerDmTon: Math.round(r.priceCentsPerDmTon),
       distanceMi: r.distanceMi === null ? null : Number(r.distanceMi),
       cover: covers.get(r.id) ?? null,
@@ -137,7 +140,7 @@ export class LotsService {
       totalCapped,
       page: query.page,
       pageSize: query.pageSize,
-      origin: origin ? { zip: origin.zip, city: origin.city, state: origin.state } : null,
+      origin: origin ? { zip: origin.zip, city: origin.city, state: origin.state, lat: origin.latitude, lon: origin.longitude } : null,
     };
   }
 

@@ -48,6 +48,7 @@ function sampleLot(): LotSummary {
     labCertified: true,
     analysisVerified: true,
     distanceMi: null,
+    mapPoint: { lat: 39.2, lon: -96.6 },
     cover: null,
     publishedAt: null,
   };

@@ -28,8 +28,8 @@ const PAD = 14;
       }
     </ol>
     @for (group of groups(); track group.title) {
-      <section class="group">
-        <h3>{{ group.title }}</h3>
+      <section class="group" [attr.aria-labelledby]="'strips-' + $index">
+        <h3 [id]="'strips-' + $index">{{ group.title }}</h3>
         @for (row of group.rows; track row.label) {
           <figure class="strip">
             <figcaption><strong>{{ row.label }}</strong> <span class="unit">{{ row.unit }}</span></figcaption>

@@ -13,6 +13,7 @@ import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { LotSearchResult } from '@shared/contracts/lots';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { LotCard } from '../lot-card/lot-card';
+import { LotMap } from '../lot-map/lot-map';
 import { CompareSelection } from '../lot-compare/compare-selection';
 import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { LotsApi } from '../lots-api';
@@ -23,7 +24,7 @@ import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, queryFromForm, S
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
   selector: 'app-lot-search-page',
-  imports: [ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar],
+  imports: [ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar, LotMap],
   templateUrl: './lot-search-page.html',
   styleUrl: './lot-search-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -54,6 +55,14 @@ export class LotSearchPage {
   protected readonly error = computed(() => errorOf(this.state())?.replace(/^[a-zA-Z]+: /, '') ?? null);
   /** On phones the filters fold away (closed until asked for); on wide screens they are always shown. */
   protected readonly filtersOpen = signal(false);
+  /** The map is drawn on request (it loads the states' outlines). */
+  protected readonly showMap = signal(false);
+  protected readonly mapLots = computed(() => (this.result()?.items ?? []).map((l) => ({ id: l.id, title: l.title, lat: l.mapPoint.lat, lon: l.mapPoint.lon })));
+  protected readonly mapOrigin = computed(() => {
+    const o = this.result()?.origin;
+    return o ? { lat: o.lat, lon: o.lon, label: `${o.city}, ${o.state} ${o.zip}` } : null;
+  });
+  protected readonly mapRadius = computed(() => (this.params()['zip'] && this.params()['radiusMi'] ? Number(this.params()['radiusMi']) : null));
   protected readonly sortNotice = signal<string | null>(null);
   protected readonly filterCount = computed(() => FILTER_KEYS.filter((k) => this.params()[k] !== undefined && k !== 'radiusMi').length);
   /** The query last sent from the form, so the URL echo does not overwrite what is being typed. */
