@@ -38,6 +38,16 @@ test.describe('on a 390 px phone', () => {
     await expect(page.getByLabel('RFV from')).toBeHidden();
   });
 
+  test('the planner’s lot picker opens on screen and a lot can be tapped', async ({ page }) => {
+    await page.goto('/planner');
+    await page.getByRole('combobox', { name: 'Choose a lot' }).click();
+    const option = page.getByRole('option').nth(1);
+    await expect(option).toBeInViewport();
+    const chosen = (await option.innerText()).trim();
+    await option.tap();
+    await expect(page.getByRole('combobox', { name: 'Choose a lot' })).toContainText(chosen.split(' — ')[0]!);
+  });
+
   test('the lot form and a grower’s pages fit the screen', async ({ page }) => {
     await signInAs(page, GROWER);
     for (const path of ['/selling', '/selling/lots/new']) await expectNoSidewaysScroll(page, path);
