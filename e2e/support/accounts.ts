@@ -10,7 +10,7 @@ export async function signInAs(page: Page, account: { email: string; password: s
   await page.getByLabel('E-mail').fill(account.email);
   await page.getByLabel('Password').fill(account.password);
   await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).toHaveURL(/\/hay/);
+  await expect(page).not.toHaveURL(/\/sign-in/);
 }
 
 /** Ids of the first listed lots, from the API. */
