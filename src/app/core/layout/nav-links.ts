@@ -12,7 +12,7 @@ export function navLinksFor(role: UserRole | null): NavLink[] {
   // Planning needs no account, so visitors see the planner too; the hay list is for buyers and visitors.
   if (role === 'buyer' || role === null) links.push({ path: '/planner', label: 'Herd planner', icon: 'calculate' });
   if (role === 'buyer' || role === null) links.push({ path: '/cart', label: 'Hay list', icon: 'inventory_2' });
-  if (role === 'buyer' || role === 'grower') links.push({ path: '/orders', label: role === 'buyer' ? 'My orders' : 'Orders', icon: 'local_shipping' });
+  if (role === 'buyer' || role === 'grower') links.push({ path: '/orders', label: role === 'buyer' ? 'My orders' : 'Orders', icon: 'agriculture' });
   if (role === 'grower') links.push({ path: '/selling', label: 'My lots', icon: 'inventory_2' });
   if (role === 'buyer' || role === 'grower') links.push({ path: '/messages', label: 'Messages', icon: 'info' });
   if (role === 'admin') links.push({ path: '/admin', label: 'Review desk', icon: 'fact_check' });
