@@ -3,7 +3,7 @@ import { LOT_FORM_STEPS as SAVED_STEPS } from '@shared/contracts/selling';
 type StepKey = (typeof SAVED_STEPS)[number] | 'review';
 
 const NAMES: Record<StepKey, string> = {
-  lot: 'Field and cutting',
+  lot: 'Field and harvest',
   quantity: 'Bales and stock',
   sampling: 'Core sample',
   analysis: 'Lab report',
