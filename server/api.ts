@@ -2,11 +2,10 @@ import connectPgSimple from 'connect-pg-simple';
 import express, { type Express } from 'express';
 import session from 'express-session';
 import helmet from 'helmet';
-import passport from 'passport';
 import { pinoHttp } from 'pino-http';
 import type { ApiDeps } from './api-deps';
 import { cookiesAreSecure } from './env';
-import { authRouter, configurePassport } from './features/auth/auth.router';
+import { authRouter, createAuthenticator } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
 import { adminRouter } from './features/admin/admin.router';
@@ -73,8 +72,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use('/payments/webhook', paymentWebhookRouter(orderFeature));
   api.use(express.json({ limit: '200kb' }));
   api.use(createSessionMiddleware(deps));
-  configurePassport(db);
-  api.use(passport.session());
+  api.use(createAuthenticator(db).session());
   const csrf = createCsrf(env.SESSION_SECRET, cookiesAreSecure(env));
   api.use(csrf.requireToken);
 

@@ -1,6 +1,6 @@
 import { Router, type Request, type RequestHandler } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import passport from 'passport';
+import { Passport } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { SignInSchema, SignUpSchema, type SessionUser } from '@shared/contracts/auth';
 import type { Db } from '../../db/client';
@@ -15,9 +15,14 @@ declare global {
   }
 }
 
-/** Wires passport-local to the users table; the session stores only the user id. */
-export function configurePassport(db: Db): void {
+/**
+ * Wires passport-local to the users table; the session stores only the user id. One authenticator per API,
+ * not passport's global one: a second API in the same process (tests) would otherwise read sessions
+ * through the first API's database pool.
+ */
+export function createAuthenticator(db: Db) {
   const auth = new AuthService(db);
+  const passport = new Passport();
   passport.use(
     new LocalStrategy({ usernameField: 'email', passwordField: 'password' }, (email, password, done) => {
       auth.checkCredentials({ email, password }).then((user) => done(null, user ?? false), done);
@@ -27,6 +32,7 @@ export function configurePassport(db: Db): void {
   passport.deserializeUser((id: number, done) => {
     auth.findSessionUser(id).then((user) => done(null, user ?? false), done);
   });
+  return passport;
 }
 
 export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit: number; issueCsrfCookie: RequestHandler }): Router {
