@@ -1,6 +1,12 @@
 import { apiQueryFor, describeQuery, hasAnyFilter, queryFromForm } from './search-query';
 
 describe('queryFromForm', () => {
+  it('treats an emptied number field (null) as no filter, never the text "null" in the URL', () => {
+    const query = queryFromForm({ rfvMin: null, cpMin: 18, zip: '66502' });
+    expect(query['rfvMin']).toBeUndefined();
+    expect(query['cpMin']).toBe('18');
+  });
+
   it('drops empty fields and unticked boxes so shared links stay short', () => {
     expect(queryFromForm({ rfvMin: '150', cpMin: '', zip: ' 66502 ', compliantOnly: true, verifiedOnly: false })).toMatchObject({
       rfvMin: '150',

@@ -56,12 +56,13 @@ export const SORT_OPTIONS = [
 ];
 
 /** URL query from the form: empty fields and unticked boxes are left out so links stay short. */
-export function queryFromForm(values: Record<string, string | boolean>): Record<string, string | undefined> {
+export function queryFromForm(values: Record<string, string | number | boolean | null | undefined>): Record<string, string | undefined> {
   const out: Record<string, string | undefined> = {};
   for (const key of FILTER_KEYS) {
     const v = values[key];
     if (typeof v === 'boolean') out[key] = v ? 'true' : undefined;
-    else out[key] = v === undefined || String(v).trim() === '' ? undefined : String(v).trim();
+    // An emptied number field reads as null: it means "no filter", never the text 'null'.
+    else out[key] = v === undefined || v === null || String(v).trim() === '' ? undefined : String(v).trim();
   }
   return out;
 }
