@@ -1,6 +1,5 @@
 import { startTestApi, uniqueEmail, type TestApi } from '../../../tests/support/test-api';
-import { hashPassword } from '../auth/password';
-import { users } from '../../db/schema';
+import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 
 describe('admin routes', () => {
   let t: TestApi;
@@ -22,31 +21,24 @@ describe('admin routes', () => {
     expect(res.status).toBe(403);
     expect(res.body.error.code).toBe('forbidden');
   });
-
-  it('lists users for an admin', async () => {
-    const email = uniqueEmail('admin');
-    await t.deps.db.insert(users).values({ email, displayName: 'Admin', role: 'admin', passwordHash: await hashPassword('admin-password-1') });
-    const agent = t.agent();
-    expect((await agent.post('/auth/sign-in', { email, password: 'admin-password-1' })).status).toBe(200);
-    const res = await agent.get(`/admin/users?q=${encodeURIComponent(email)}`);
-    expect(res.status).toBe(200);
-    expect(res.body.items).toEqual([expect.objectContaining({ email, role: 'admin' })]);
-  });
 });
 
-describe('admin overview', () => {
+describe('admin users and overview', () => {
   let t: TestApi;
+  let admin: SignedInUser;
   beforeAll(async () => {
-    t = await startTestApi();
+    ({ t, admin } = await startAdminApi());
   });
   afterAll(() => t.close());
 
+  it('lists users for an admin', async () => {
+    const res = await admin.agent.get(`/admin/users?q=${encodeURIComponent(admin.email)}`);
+    expect(res.status).toBe(200);
+    expect(res.body.items).toEqual([expect.objectContaining({ email: admin.email, role: 'admin' })]);
+  });
+
   it('gives twelve Monday-started weeks ending with the current one, and the counts that wait on an admin', async () => {
-    const email = uniqueEmail('admin');
-    await t.deps.db.insert(users).values({ email, displayName: 'Admin', role: 'admin', passwordHash: await hashPassword('admin-password-1') });
-    const agent = t.agent();
-    await agent.post('/auth/sign-in', { email, password: 'admin-password-1' });
-    const res = await agent.get('/admin/overview');
+    const res = await admin.agent.get('/admin/overview');
     expect([res.status, res.body.error]).toEqual([200, undefined]);
     expect(res.body.weeks).toHaveLength(12);
     // TEST_NOW is Tuesday 15 September 2026: its ISO week starts on Monday the 14th (ISO 8601).

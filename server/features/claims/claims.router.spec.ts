@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
 import { auditEvents, orders } from '../../db/schema';
-import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+import type { TestApi } from '../../../tests/support/test-api';
+import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
 import { deliveredOrder, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
 import { simplePdf } from '../../../tests/support/simple-pdf';
@@ -12,12 +13,11 @@ const RETEST = { labName: 'Invented County Forage Lab', labCertified: true, repo
 
 describe('quality claims', () => {
   let t: TestApi;
-  let admin: Awaited<ReturnType<typeof signedInUser>>;
-  let buyer: Awaited<ReturnType<typeof signedInUser>>;
+  let admin: SignedInUser;
+  let buyer: SignedInUser;
   let buyerId: number;
   beforeAll(async () => {
-    t = await startTestApi();
-    admin = await signedInUser(t, 'admin');
+    ({ t, admin } = await startAdminApi());
     buyer = await signedInUser(t, 'buyer');
     buyerId = (await buyer.agent.get('/auth/me')).body.user.id;
   });

@@ -2,8 +2,8 @@ import { randomUUID } from 'node:crypto';
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import Stripe from 'stripe';
 import { auditEvents, payouts } from '../../db/schema';
-import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { signedInUser } from '../../../tests/support/grower-lot';
+import type { TestApi } from '../../../tests/support/test-api';
+import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { deliveredOrder, finishPayoutSetup, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
 import { PayoutsService } from './payouts.service';
 
@@ -11,10 +11,9 @@ const DAY = 86_400_000;
 
 describe('payout settlement', () => {
   let t: TestApi;
-  let admin: Awaited<ReturnType<typeof signedInUser>>;
+  let admin: SignedInUser;
   beforeAll(async () => {
-    t = await startTestApi();
-    admin = await signedInUser(t, 'admin');
+    ({ t, admin } = await startAdminApi());
   });
   afterAll(() => t.close());
 

@@ -1,6 +1,7 @@
 import { and, eq } from 'drizzle-orm';
 import { auditEvents } from '../../db/schema';
-import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+import type { TestApi } from '../../../tests/support/test-api';
+import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { addLotApprovedListener } from './lot-approved';
 import { simplePdf } from '../../../tests/support/simple-pdf';
@@ -8,12 +9,11 @@ import { simplePdf } from '../../../tests/support/simple-pdf';
 describe('review API', () => {
   let t: TestApi;
   let grower: Awaited<ReturnType<typeof signedInGrower>>;
-  let admin: Awaited<ReturnType<typeof signedInUser>>;
+  let admin: SignedInUser;
 
   beforeAll(async () => {
-    t = await startTestApi();
+    ({ t, admin } = await startAdminApi());
     grower = await signedInGrower(t);
-    admin = await signedInUser(t, 'admin');
   });
   afterAll(() => t.close());
 

@@ -1,16 +1,15 @@
 import { and, eq } from 'drizzle-orm';
 import { DEFAULT_SETTINGS } from '@shared/contracts/platform-settings';
 import { auditEvents } from '../../db/schema';
-import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { signedInUser } from '../../../tests/support/grower-lot';
+import type { TestApi } from '../../../tests/support/test-api';
+import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { SettingsService } from './settings.service';
 
 describe('platform settings (admin)', () => {
   let t: TestApi;
-  let admin: Awaited<ReturnType<typeof signedInUser>>;
+  let admin: SignedInUser;
   beforeAll(async () => {
-    t = await startTestApi();
-    admin = await signedInUser(t, 'admin');
+    ({ t, admin } = await startAdminApi());
   });
   afterAll(() => t.close());
 

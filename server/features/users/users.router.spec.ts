@@ -1,14 +1,14 @@
 import { and, eq, sql } from 'drizzle-orm';
 import { auditEvents, session } from '../../db/schema';
-import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+import type { TestApi } from '../../../tests/support/test-api';
+import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
 
 describe('users (admin)', () => {
   let t: TestApi;
-  let admin: Awaited<ReturnType<typeof signedInUser>>;
+  let admin: SignedInUser;
   beforeAll(async () => {
-    t = await startTestApi();
-    admin = await signedInUser(t, 'admin');
+    ({ t, admin } = await startAdminApi());
   });
   afterAll(() => t.close());
 
