@@ -5,6 +5,7 @@ import { farms, lots, orderEvents, orderRefunds, orders, users } from '../server
 import { hashPassword } from '../server/features/auth/password';
 import { OrdersService } from '../server/features/orders/orders.service';
 import { createGrower, createLot } from './support/fixtures';
+import { holdSettings } from './support/settings-lock';
 import { startStripeFake, startTestApi, uniqueEmail, type StripeFakeServer, type TestApi } from './support/test-api';
 
 jest.setTimeout(60_000);
@@ -37,6 +38,12 @@ describe('buying a load', () => {
     await t.close();
     await stripe.close();
   });
+  // Totals here are at the default 3 % fee: no other file may change the settings mid-test.
+  let releaseSettings: () => Promise<void>;
+  beforeEach(async () => {
+    releaseSettings = await holdSettings('read');
+  });
+  afterEach(() => releaseSettings());
 
   /** A listed lot of 60 lb bales at $300/t, picked up at the farm (no freight). */
   async function lotWith(bales: number, opts: { freight?: number } = {}) {

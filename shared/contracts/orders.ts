@@ -44,6 +44,8 @@ export interface OrderQuote {
   goodsCents: number;
   freightCents: number;
   platformFeeCents: number;
+  /** The platform fee rate in basis points (300 = 3 %), from the admin settings. */
+  platformFeeBps: number;
   totalCents: number;
   loads: number;
   /** Straight-line miles from the farm, an estimate (roads run longer). */
@@ -93,6 +95,8 @@ export interface OrderView {
   goodsCents: number;
   freightCents: number;
   platformFeeCents: number;
+  /** The fee rate the order was sold at, basis points. */
+  platformFeeBps: number;
   totalCents: number;
   refundedCents: number;
   method: 'delivery' | 'pickup';

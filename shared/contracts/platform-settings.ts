@@ -1,6 +1,4 @@
 import { z } from 'zod';
-import { ACCEPTANCE_DAYS } from '../lifecycle/order-lifecycle';
-import { PLATFORM_FEE_BPS } from '../pricing/order-total';
 
 /** Nutrients a quality claim's retest is judged on (dry-matter basis, dry matter itself as fed). */
 export const CLAIM_NUTRIENTS = ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct', 'ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct'] as const;
@@ -47,9 +45,13 @@ export const PlatformSettingsSchema = z
   .refine((s) => s.claimDays <= s.acceptanceDays, { message: 'The claim window cannot be longer than the acceptance window: once a load is accepted it can no longer be reported.', path: ['claimDays'] });
 export type PlatformSettings = z.infer<typeof PlatformSettingsSchema>;
 
+/**
+ * The settings until an admin changes them; the one home of these figures. A 3 % fee on the hay and three
+ * days to accept or report a delivered load are our own policy.
+ */
 export const DEFAULT_SETTINGS: PlatformSettings = {
-  platformFeeBps: PLATFORM_FEE_BPS,
-  acceptanceDays: ACCEPTANCE_DAYS,
-  claimDays: ACCEPTANCE_DAYS,
+  platformFeeBps: 300,
+  acceptanceDays: 3,
+  claimDays: 3,
   tolerances: Object.fromEntries(CLAIM_NUTRIENTS.map((n) => [n, DEFAULT_TOLERANCES[n].units])) as Record<ClaimNutrient, number>,
 };

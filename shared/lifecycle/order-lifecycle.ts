@@ -69,8 +69,5 @@ export function orderEventsFor(from: OrderStatus, actor: Actor): OrderEvent[] {
 /** Statuses in which the order's bales are held or sold (not available to others). */
 export const ORDER_HOLDS_STOCK: readonly OrderStatus[] = ['awaiting_payment', 'paid', 'scheduled', 'delivered', 'completed', 'claimed'];
 
-/** Days the buyer has, after delivery, to accept the load or report a problem. */
-export const ACCEPTANCE_DAYS = 3;
-
 /** Minutes stock stays reserved for a buyer who has started paying. */
 export const RESERVATION_MINUTES = 30;

@@ -1,6 +1,9 @@
-import { goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
+import { feeRateLabel, goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
 
 // $12 for a 60 lb bale = $400.0/t (domain brief §11).
+/** 3 % in basis points: the platform's default fee (our own policy; an admin setting). */
+const FEE_3_PCT = 300;
+
 const smallSquares: LotTerms = {
   pricingUnit: 'ton',
   priceCentsPerTon: 40_000,
@@ -19,14 +22,14 @@ describe('order total', () => {
   });
 
   it('charges $3.50 × 300 loaded miles = $1,050 for one 24 t load (domain brief §11 freight example)', () => {
-    const total = orderTotal(smallSquares, { bales: 800, method: 'delivery', distanceMi: 300 });
+    const total = orderTotal(smallSquares, { bales: 800, method: 'delivery', distanceMi: 300 }, FEE_3_PCT);
     expect(total.tons).toBe(24);
     expect(total.loads).toBe(1);
     expect(total.freightCents).toBe(105_000);
   });
 
   it('bills whole loads: one bale over a 24 t load is a second load (practice: freight per load)', () => {
-    const total = orderTotal({ ...smallSquares, balesAvailable: 2000 }, { bales: 801, method: 'delivery', distanceMi: 300 });
+    const total = orderTotal({ ...smallSquares, balesAvailable: 2000 }, { bales: 801, method: 'delivery', distanceMi: 300 }, FEE_3_PCT);
     expect(total.loads).toBe(2);
     expect(total.freightCents).toBe(210_000);
   });
@@ -37,22 +40,35 @@ describe('order total', () => {
   });
 
   it('adds the 3 % platform fee on the hay only, and the total is the sum in whole cents (our fee policy)', () => {
-    const total = orderTotal(smallSquares, { bales: 800, method: 'delivery', distanceMi: 300 });
+    const total = orderTotal(smallSquares, { bales: 800, method: 'delivery', distanceMi: 300 }, FEE_3_PCT);
     expect(total.platformFeeCents).toBe(28_800); // 3 % of $9,600
     expect(total.totalCents).toBe(960_000 + 105_000 + 28_800);
   });
 
+  it('charges the fee rate it is given: 2.5 % of $9,600 is $240, and 0 % charges nothing', () => {
+    expect(orderTotal(smallSquares, { bales: 800, method: 'pickup', distanceMi: null }, 250).platformFeeCents).toBe(24_000);
+    expect(orderTotal(smallSquares, { bales: 800, method: 'pickup', distanceMi: null }, 0).totalCents).toBe(960_000);
+  });
+
   it('charges no freight for pickup at the farm', () => {
-    const total = orderTotal(smallSquares, { bales: 100, method: 'pickup', distanceMi: null });
+    const total = orderTotal(smallSquares, { bales: 100, method: 'pickup', distanceMi: null }, FEE_3_PCT);
     expect(total.freightCents).toBe(0);
     expect(total.totalCents).toBe(total.goodsCents + total.platformFeeCents);
   });
 
   it('keeps every amount a whole number of cents for awkward weights (conventions: integer cents)', () => {
     for (const bales of [1, 7, 33, 333]) {
-      const t = orderTotal({ ...smallSquares, avgBaleWeightLb: 61.7, priceCentsPerTon: 23_317 }, { bales, method: 'delivery', distanceMi: 17.3 });
+      const t = orderTotal({ ...smallSquares, avgBaleWeightLb: 61.7, priceCentsPerTon: 23_317 }, { bales, method: 'delivery', distanceMi: 17.3 }, FEE_3_PCT);
       for (const v of [t.goodsCents, t.freightCents, t.platformFeeCents, t.totalCents]) expect(Number.isInteger(v)).toBe(true);
     }
+  });
+});
+
+describe('fee rate in words', () => {
+  it('reads basis points as a percentage (1 % = 100 basis points)', () => {
+    expect(feeRateLabel(300)).toBe('3 %');
+    expect(feeRateLabel(250)).toBe('2.5 %');
+    expect(feeRateLabel(0)).toBe('0 %');
   });
 });
 
@@ -79,7 +95,7 @@ describe('order problems', () => {
 
 describe('scale ticket settlement', () => {
   // 24 t paid at $400/t = $9,600 + $288 fee; the ticket shows 23.5 t.
-  const paid = { pricingUnit: 'ton' as const, priceCentsPerTon: 40_000, paidGoodsCents: 960_000, paidFeeCents: 28_800 };
+  const paid = { pricingUnit: 'ton' as const, priceCentsPerTon: 40_000, paidGoodsCents: 960_000, paidFeeCents: 28_800, feeBps: FEE_3_PCT };
 
   it('refunds the hay and fee on the missing half ton: $200 + $6 (price × tons short)', () => {
     expect(scaleTicketRefundCents({ ...paid, weighedTons: 23.5 })).toBe(20_000 + 600);
@@ -88,6 +104,10 @@ describe('scale ticket settlement', () => {
   it('never charges more when the ticket shows more tons than paid for (issue 10: never charged more than agreed)', () => {
     expect(scaleTicketRefundCents({ ...paid, weighedTons: 25 })).toBe(0);
     expect(scaleTicketRefundCents({ ...paid, weighedTons: 24 })).toBe(0);
+  });
+
+  it('refunds the fee at the rate the order was sold at: at 5 %, half a ton short gives $200 + $10', () => {
+    expect(scaleTicketRefundCents({ ...paid, paidFeeCents: 48_000, feeBps: 500, weighedTons: 23.5 })).toBe(20_000 + 1_000);
   });
 
   it('does not settle bale-priced orders on weight: they were counted', () => {

@@ -5,9 +5,6 @@ import { balesForTons, balesToTons } from '../units/bales';
 import { type Cents, roundCents } from '../units/money';
 import { DEFAULT_TONS_PER_LOAD, freightPerLoadCents } from './freight';
 
-/** The platform's fee on the hay (not on freight), in basis points: 3 % (our own policy). */
-export const PLATFORM_FEE_BPS = 300;
-
 /** The lot's terms that decide a price. */
 export interface LotTerms {
   /** 'ton': the price is per short ton as-fed and the order settles on the scale ticket; 'bale': per bale counted. */
@@ -61,8 +58,17 @@ export function goodsCents(terms: Pick<LotTerms, 'pricingUnit' | 'priceCentsPerT
   return roundCents(terms.priceCentsPerTon * balesToTons(bales, terms.avgBaleWeightLb));
 }
 
-export function platformFeeCents(goods: Cents): Cents {
-  return roundCents((goods * PLATFORM_FEE_BPS) / 10_000);
+/**
+ * The platform's fee on the hay (never on freight) at `feeBps` basis points (300 = 3 %). The rate is an
+ * admin setting read when the order is placed and stored with it, so a later change never reprices an order.
+ */
+export function platformFeeCents(goods: Cents, feeBps: number): Cents {
+  return roundCents((goods * feeBps) / 10_000);
+}
+
+/** A fee rate in words: 300 → "3 %", 250 → "2.5 %". */
+export function feeRateLabel(feeBps: number): string {
+  return `${(feeBps / 100).toLocaleString('en-US', { maximumFractionDigits: 2 })} %`;
 }
 
 /** Whole loads for an order: by weight, and by bale count when the truck has one. */
@@ -98,13 +104,13 @@ export function orderProblem(terms: LotTerms, request: OrderRequest): OrderProbl
  * The order's figures. Freight = rate per loaded mile × miles × whole loads (domain brief §11); the
  * platform fee is charged on the hay only. The last bales of a lot may be bought below the minimum.
  */
-export function orderTotal(terms: LotTerms, request: OrderRequest, truck: TruckCapacity = DEFAULT_TRUCK): OrderTotal {
+export function orderTotal(terms: LotTerms, request: OrderRequest, feeBps: number, truck: TruckCapacity = DEFAULT_TRUCK): OrderTotal {
   const tons = balesToTons(request.bales, terms.avgBaleWeightLb);
   const goods = goodsCents(terms, request.bales);
   const delivering = request.method === 'delivery' && terms.freightCentsPerLoadedMile !== null && request.distanceMi !== null;
   const loads = loadsFor(request.bales, tons, truck);
   const freight = delivering ? freightPerLoadCents(terms.freightCentsPerLoadedMile!, request.distanceMi!) * loads : 0;
-  const fee = platformFeeCents(goods);
+  const fee = platformFeeCents(goods, feeBps);
   return { bales: request.bales, tons, goodsCents: goods, loads, freightCents: freight, platformFeeCents: fee, totalCents: goods + freight + fee };
 }
 
@@ -118,11 +124,13 @@ export function scaleTicketRefundCents(input: {
   readonly priceCentsPerTon: Cents;
   readonly paidGoodsCents: Cents;
   readonly paidFeeCents: Cents;
+  /** The fee rate the order was sold at (stored on the order). */
+  readonly feeBps: number;
   readonly weighedTons: number;
 }): Cents {
   if (input.pricingUnit !== 'ton') return 0;
   if (!(input.weighedTons > 0) || !Number.isFinite(input.weighedTons)) throw new RangeError(`weighedTons must be positive; got ${input.weighedTons}`);
   const deliveredGoods = Math.min(input.paidGoodsCents, roundCents(input.priceCentsPerTon * input.weighedTons));
-  const deliveredFee = Math.min(input.paidFeeCents, platformFeeCents(deliveredGoods));
+  const deliveredFee = Math.min(input.paidFeeCents, platformFeeCents(deliveredGoods, input.feeBps));
   return input.paidGoodsCents - deliveredGoods + (input.paidFeeCents - deliveredFee);
 }

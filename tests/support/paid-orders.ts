@@ -59,6 +59,7 @@ export async function deliveredOrder(
       goodsCents: opts.goodsCents,
       freightCents: freight,
       platformFeeCents: fee,
+      platformFeeBps: 300,
       totalCents: total,
       method: 'pickup',
       paymentIntentId: intent.id,

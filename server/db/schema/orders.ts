@@ -25,6 +25,8 @@ export const orders = pgTable(
     goodsCents: integer().notNull(),
     freightCents: integer().notNull().default(0),
     platformFeeCents: integer().notNull().default(0),
+    /** The platform fee rate this order was sold at, basis points (the admin setting then); refunds use it. */
+    platformFeeBps: integer().notNull(),
     totalCents: integer().notNull(),
     /** Everything refunded to the buyer so far (scale ticket, claims). */
     refundedCents: integer().notNull().default(0),
@@ -59,6 +61,7 @@ export const orders = pgTable(
     check('orders_loads_positive', sql`${t.loads} > 0`),
     check('orders_amounts_nonnegative', sql`${t.goodsCents} >= 0 and ${t.freightCents} >= 0 and ${t.platformFeeCents} >= 0`),
     check('orders_total_sum', sql`${t.totalCents} = ${t.goodsCents} + ${t.freightCents} + ${t.platformFeeCents}`),
+    check('orders_fee_bps_range', sql`${t.platformFeeBps} between 0 and 10000`),
     check('orders_refund_range', sql`${t.refundedCents} between 0 and ${t.totalCents}`),
   ],
 );

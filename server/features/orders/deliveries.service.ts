@@ -93,7 +93,7 @@ export class DeliveriesService {
     );
     const order = (await loadOrderRecord(this.deps.db, orderId))!.order;
     if (order.weighedTons !== null) {
-      const refund = scaleTicketRefundCents({ pricingUnit: order.pricingUnit, priceCentsPerTon: order.priceCentsPerTon, paidGoodsCents: order.goodsCents, paidFeeCents: order.platformFeeCents, weighedTons: order.weighedTons });
+      const refund = scaleTicketRefundCents({ pricingUnit: order.pricingUnit, priceCentsPerTon: order.priceCentsPerTon, paidGoodsCents: order.goodsCents, paidFeeCents: order.platformFeeCents, feeBps: order.platformFeeBps, weighedTons: order.weighedTons });
       await this.orders.refundOnce(order, refund, 'scale_ticket', `order-${orderId}-scale-ticket`);
     }
     await this.orders.notify(orderId, ['delivered']);

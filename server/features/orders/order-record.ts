@@ -81,6 +81,7 @@ export async function orderView(db: Db, r: OrderRecord, part: Actor & ('buyer' |
     goodsCents: o.goodsCents,
     freightCents: o.freightCents,
     platformFeeCents: o.platformFeeCents,
+    platformFeeBps: o.platformFeeBps,
     totalCents: o.totalCents,
     refundedCents: o.refundedCents,
     method: o.method,

@@ -8,6 +8,7 @@ import type { ApiDeps } from '../../api-deps';
 import { deliveries, farms, lots, orderEvents, orderRefunds, orders, users } from '../../db/schema';
 import { conflict, HttpError, notFound } from '../../middleware/http-error';
 import { locateZip } from '../geo/geo';
+import { SettingsService } from '../settings/settings.service';
 import { windowFor } from './delivery-window';
 import { orderMail, type OrderMailKind } from './order-mail';
 import { OrderPayments } from './order-payments';
@@ -22,8 +23,10 @@ const round1 = (x: number) => Math.round(x * 10) / 10;
 /** Orders: quoting, placing (reserving stock and opening the payment page), reading, cancelling, lists. */
 export class OrdersService {
   readonly payments: OrderPayments;
+  private readonly settings: SettingsService;
   constructor(private readonly deps: Deps) {
     this.payments = new OrderPayments(deps.stripe, deps.env);
+    this.settings = new SettingsService(deps.db, deps.clock);
   }
 
   private get db() {
@@ -37,8 +40,9 @@ export class OrdersService {
     const distanceMi = input.method === 'delivery' && input.deliveryZip ? this.distance(farm, input.deliveryZip) : null;
     const request = { bales: input.bales, method: input.method, distanceMi };
     const problem = orderProblem(terms, request);
-    const total = orderTotal(terms, request, farm);
-    return { lotId: lot.id, ...total, distanceMi, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, problem: problem?.message ?? null };
+    const { platformFeeBps } = await this.settings.current();
+    const total = orderTotal(terms, request, platformFeeBps, farm);
+    return { lotId: lot.id, ...total, platformFeeBps, distanceMi, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, problem: problem?.message ?? null };
   }
 
   /**
@@ -54,7 +58,9 @@ export class OrdersService {
     if (problem?.code === 'not_enough_bales') throw conflict('not_enough_bales', problem.message);
     if (problem) throw new HttpError(400, problem.code, problem.message, [{ path: problem.code === 'below_minimum' ? 'bales' : problem.code === 'no_distance' ? 'deliveryZip' : 'method', message: problem.message }]);
     if (input.method === 'pickup' && !lot.pickupAllowed) throw new HttpError(400, 'no_pickup', 'This lot is not sold for pickup at the farm; choose delivery.');
-    const total = orderTotal(terms, request, farm);
+    // The fee rate in force now is stored with the order: a later change of the setting never reprices it.
+    const { platformFeeBps } = await this.settings.current();
+    const total = orderTotal(terms, request, platformFeeBps, farm);
     const window = input.window ? windowFor(farm, input.method, input.window, this.deps.clock.now()) : null;
     const now = this.deps.clock.now();
 
@@ -77,6 +83,7 @@ export class OrdersService {
           goodsCents: total.goodsCents,
           freightCents: total.freightCents,
           platformFeeCents: total.platformFeeCents,
+          platformFeeBps,
           totalCents: total.totalCents,
           method: input.method,
           loads: total.loads,

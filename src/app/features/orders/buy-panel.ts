@@ -6,6 +6,7 @@ import { RouterLink } from '@angular/router';
 import { debounceTime, firstValueFrom, switchMap } from 'rxjs';
 import type { LotDetail } from '@shared/contracts/lots';
 import { balesForTons, balesToTons } from '@shared/units/bales';
+import { feeRateLabel } from '@shared/pricing/order-total';
 import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { requestState, valueOf, errorOf } from '../../core/request-state';
@@ -38,6 +39,7 @@ export class BuyPanel {
   protected readonly error = signal('');
   protected readonly busy = signal(false);
   protected readonly money = formatCents;
+  protected readonly feeRate = feeRateLabel;
 
   private readonly request = computed(() => ({ lotId: this.lot().id, bales: Math.round(this.chosenBales()), method: this.method(), deliveryZip: this.method() === 'delivery' && /^\d{5}$/.test(this.zip()) ? this.zip() : undefined }));
   private readonly quoteState = toSignal(toObservable(this.request).pipe(debounceTime(250), switchMap((q) => requestState(this.api.quote(q)))), { initialValue: { status: 'loading' } as const });

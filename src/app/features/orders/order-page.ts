@@ -6,6 +6,7 @@ import { firstValueFrom, Observable, switchMap } from 'rxjs';
 import type { OrderView } from '@shared/contracts/orders';
 import { deliveryStatusLabel } from '@shared/lifecycle/delivery-lifecycle';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
+import { feeRateLabel } from '@shared/pricing/order-total';
 import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
@@ -42,6 +43,7 @@ export class OrderPage {
   protected readonly ticket = signal<File | null>(null);
   protected readonly problem = signal('');
   protected readonly money = formatCents;
+  protected readonly feeRate = feeRateLabel;
   protected readonly statusLabel = orderStatusLabel;
   protected readonly deliveryLabel = deliveryStatusLabel;
   protected readonly can = (action: string) => this.order()?.actions.includes(action) ?? false;
