@@ -2,6 +2,7 @@ import fc from 'fast-check';
 import {
   asFedToDryMatterPerTonCents,
   dollarsToCents,
+  centsToDecimalText,
   formatCents,
   pricePerBaleToPerTonCents,
   roundCents,
@@ -44,6 +45,32 @@ describe('formatCents', () => {
   it('can drop the cents, rounding to whole dollars', () => {
     expect(formatCents(105049, { showCents: false })).toBe('$1,050');
     expect(formatCents(105050, { showCents: false })).toBe('$1,051');
+  });
+
+  it('rounds fractional per-unit rates to whole cents half away from zero', () => {
+    expect(formatCents(45454.5)).toBe('$454.55');
+    expect(formatCents(0.1 + 0.2)).toBe('$0.00');
+  });
+
+  it('shows more places for small per-unit rates when asked', () => {
+    expect(formatCents(8.5, { fractionDigits: 3 })).toBe('$0.085');
+    expect(formatCents(105049, { fractionDigits: 0 })).toBe('$1,050');
+    expect(() => formatCents(1, { fractionDigits: 5 })).toThrow(RangeError);
+  });
+
+  // CLDR number conventions (from memory): Canadian French groups with a narrow no-break space,
+  // uses a decimal comma and puts the symbol after the amount; British English matches US grouping.
+  it("follows the reader's locale when one is given", () => {
+    expect(formatCents(105000, { locale: 'fr-CA' }).replace(/\s/g, ' ')).toBe('1 050,00 $ US');
+    expect(formatCents(105000, { locale: 'en-GB' })).toBe('US$1,050.00');
+  });
+});
+
+describe('centsToDecimalText', () => {
+  it('writes plain dollars with two places, no symbol or grouping, for files other programs read', () => {
+    expect(centsToDecimalText(123450)).toBe('1234.50');
+    expect(centsToDecimalText(5)).toBe('0.05');
+    expect(centsToDecimalText(-550)).toBe('-5.50');
   });
 });
 

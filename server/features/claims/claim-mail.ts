@@ -1,7 +1,6 @@
 import type { OutgoingMail } from '../../adapters/mail/mailer';
 import type { ClaimView } from '@shared/contracts/claims';
-
-const money = (cents: number) => `$${(cents / 100).toFixed(2)}`;
+import { formatCents } from '@shared/units/money';
 
 /** Both sides hear that a problem was reported. */
 export function claimOpenedMail(to: string, role: 'buyer' | 'grower', c: ClaimView, publicUrl: string): OutgoingMail {
@@ -15,7 +14,7 @@ export function claimOpenedMail(to: string, role: 'buyer' | 'grower', c: ClaimVi
 
 /** Both sides hear the decision, the refund and what it means for the grower's payout. */
 export function claimDecidedMail(to: string, role: 'buyer' | 'grower', c: ClaimView, publicUrl: string): OutgoingMail {
-  const outcome = c.refundCents === 0 ? 'no refund' : c.refundableCents === 0 ? `a full refund of ${money(c.refundCents)}` : `a partial refund of ${money(c.refundCents)}`;
+  const outcome = c.refundCents === 0 ? 'no refund' : c.refundableCents === 0 ? `a full refund of ${formatCents(c.refundCents)}` : `a partial refund of ${formatCents(c.refundCents)}`;
   const effect =
     role === 'buyer'
       ? c.refundCents > 0 ? `The refund goes back to the card you paid with; banks usually show it within 5–10 days.` : ''

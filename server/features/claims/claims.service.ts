@@ -6,6 +6,7 @@ import type { ClaimView, OpenClaim, ResolveClaim } from '@shared/contracts/claim
 import { parseAnalysisValues } from '@shared/contracts/selling';
 import { checkClaimTransition, claimStatusLabel, type ClaimEvent, type ClaimStatus } from '@shared/lifecycle/claim-lifecycle';
 import { checkOrderTransition, type OrderEvent, type OrderStatus } from '@shared/lifecycle/order-lifecycle';
+import { formatCents } from '@shared/units/money';
 import type { OutgoingMail } from '../../adapters/mail/mailer';
 import type { ApiDeps } from '../../api-deps';
 import { farms, labAnalyses, lots, orderEvents, orderRefunds, orders, payoutAdjustments, payoutLines, payouts, qualityClaims, storedFiles, users } from '../../db/schema';
@@ -118,7 +119,7 @@ export class ClaimsService {
       const [order] = await tx.select().from(orders).where(eq(orders.id, claim.orderId)).for('update');
       const refundable = order!.totalCents - order!.refundedCents;
       const amount = input.outcome === 'reject' ? 0 : input.outcome === 'full' ? refundable : input.refundCents;
-      if (amount > refundable) throw new HttpError(400, 'refund_too_large', `At most $${(refundable / 100).toFixed(2)} can still be refunded on this order.`);
+      if (amount > refundable) throw new HttpError(400, 'refund_too_large', `At most ${formatCents(refundable)} can still be refunded on this order.`);
       const orderEvent: OrderEvent = input.outcome === 'full' ? 'refund' : 'settle_claim';
       const orderNext = this.checkOrder(order!.status, orderEvent, 'admin');
 

@@ -1,4 +1,5 @@
 import type Stripe from 'stripe';
+import { formatCents } from '@shared/units/money';
 import type { Env } from '../../env';
 import { HttpError } from '../../middleware/http-error';
 import type { OrderRow } from './order-transition';
@@ -14,7 +15,7 @@ export class OrderPayments {
   ) {}
 
   async startCheckout(order: OrderRow, describe: { lotTitle: string; buyerEmail: string }): Promise<{ id: string; url: string }> {
-    const breakdown = `${order.bales} bales (${order.tons.toFixed(2)} t), ${order.method}; hay ${order.goodsCents / 100}, freight ${order.freightCents / 100}, fee ${order.platformFeeCents / 100} USD`;
+    const breakdown = `${order.bales} bales (${order.tons.toFixed(2)} t), ${order.method}; hay ${formatCents(order.goodsCents)}, freight ${formatCents(order.freightCents)}, fee ${formatCents(order.platformFeeCents)}`;
     const session = await this.call(() =>
       this.stripe.checkout.sessions.create(
         {

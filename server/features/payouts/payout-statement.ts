@@ -1,7 +1,6 @@
 import Papa from 'papaparse';
 import type { PayoutView } from '@shared/contracts/payouts';
-
-const dollars = (cents: number) => (cents / 100).toFixed(2);
+import { centsToDecimalText as dollars } from '@shared/units/money';
 
 /**
  * A grower's statement as CSV: one row per order paid and per deduction, under the payout that carried

@@ -1,7 +1,12 @@
-/** Display helpers for the catalogue: money from integer cents, numbers with fixed decimals. */
+import { formatCents } from '@shared/units/money';
+
+/**
+ * Display helpers for the catalogue: money from integer cents (through the shared formatter, for
+ * code that builds text; templates use the locale-aware `money` pipe), numbers with fixed decimals.
+ */
 export function dollars(cents: number | null | undefined, digits = 0): string {
   if (cents === null || cents === undefined) return '—';
-  return (cents / 100).toLocaleString('en-US', { style: 'currency', currency: 'USD', minimumFractionDigits: digits, maximumFractionDigits: digits });
+  return formatCents(cents, { fractionDigits: digits });
 }
 
 export function fixed(value: number | null | undefined, digits = 1): string {

@@ -9,14 +9,15 @@ import { firstValueFrom } from 'rxjs';
 import type { PurchasePlanResponse } from '@shared/contracts/planner';
 import type { HerdNeedsRequest } from '@shared/planner/herd-needs';
 import { apiErrorMessage } from '../../core/api-error';
-import { dollars, fixed } from '../catalogue/format';
+import { fixed } from '../catalogue/format';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CartStore } from '../orders/cart-store';
 import { PlannerApi } from './planner-api';
 
 /** The cheapest delivered mix of listed lots that meets the herd's energy and protein, and one click to the cart. */
 @Component({
   selector: 'app-purchase-plan-panel',
-  imports: [FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar],
+  imports: [MoneyPipe, FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar],
   templateUrl: './purchase-plan-panel.html',
   styleUrl: './purchase-plan-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -33,7 +34,6 @@ export class PurchasePlanPanel {
   protected readonly error = signal<string | null>(null);
   protected readonly result = signal<PurchasePlanResponse | null>(null);
   protected readonly added = signal(false);
-  protected readonly dollars = dollars;
   protected readonly fixed = fixed;
 
   protected async findPlan(): Promise<void> {

@@ -1,4 +1,4 @@
-import { CurrencyPipe, DecimalPipe } from '@angular/common';
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input } from '@angular/core';
 import { RouterLink } from '@angular/router';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
@@ -6,13 +6,14 @@ import type { LotSummary } from '@shared/contracts/lots';
 import { USDA_GRADE_RULE_SHORT } from '@shared/forage/grades';
 import { usdaScaleFor } from '@shared/forage/grade-scale';
 import { GradeMark } from '../../../shared/ui/grade-mark';
+import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { cuttingLabel, distanceLabel } from '../format';
 import { CompareSelection } from '../lot-compare/compare-selection';
 
 /** One lot in the catalogue, drawn as a lab sample tag: lot number, grade on its scale, the assay, both prices. */
 @Component({
   selector: 'app-lot-card',
-  imports: [RouterLink, DecimalPipe, CurrencyPipe, GradeMark],
+  imports: [RouterLink, DecimalPipe, MoneyPipe, GradeMark],
   templateUrl: './lot-card.html',
   styleUrl: './lot-card.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -7,7 +7,8 @@ import { switchMap, tap } from 'rxjs';
 import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, LOT_STATUS_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
 import type { LotDetail } from '@shared/contracts/lots';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
-import { cuttingLabel, dollars, fixed } from '../format';
+import { cuttingLabel, fixed } from '../format';
+import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { LotsApi } from '../lots-api';
 import { LotGallery } from './lot-gallery';
 import { LotAnalysisPanel } from './lot-analysis-panel';
@@ -17,7 +18,7 @@ import { LotThread } from '../../messages/lot-thread';
 
 @Component({
   selector: 'app-lot-page',
-  imports: [RouterLink, MatIcon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel, LotThread],
+  imports: [MoneyPipe, RouterLink, MatIcon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel, LotThread],
   templateUrl: './lot-page.html',
   styleUrl: './lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -48,7 +49,6 @@ export class LotPage {
   protected readonly errorMessage = computed(() => errorOf(this.state()) ?? '');
 
   protected readonly labels = { forage: FORAGE_TYPE_LABELS, bale: BALE_TYPE_LABELS, storage: STORAGE_LABELS, core: CORE_POSITION_LABELS };
-  protected readonly dollars = dollars;
   protected readonly fixed = fixed;
   protected readonly cutting = cuttingLabel;
   protected readonly statusLabels = LOT_STATUS_LABELS;

@@ -7,7 +7,8 @@ import { firstValueFrom } from 'rxjs';
 import { BALE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { FarmProfile, SellerLotRow } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../../core/api-error';
-import { dollars, fixed } from '../../catalogue/format';
+import { fixed } from '../../catalogue/format';
+import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { SellingApi } from '../selling-api';
 import { STATUS_LABELS } from '../ui/status-label';
 import { draftProgress } from '../lot-form/form-steps';
@@ -15,7 +16,7 @@ import { draftProgress } from '../lot-form/form-steps';
 /** The grower's lots: status, stock left, views and orders, with withdraw, relist and copy. */
 @Component({
   selector: 'app-selling-dashboard',
-  imports: [RouterLink, MatButton, MatIcon, PayoutHistory],
+  imports: [MoneyPipe, RouterLink, MatButton, MatIcon, PayoutHistory],
   templateUrl: './selling-dashboard.html',
   styleUrl: './selling-dashboard.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -36,7 +37,6 @@ export class SellingDashboard implements OnInit {
   protected readonly progress = draftProgress;
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly bales = BALE_TYPE_LABELS;
-  protected readonly dollars = dollars;
   protected readonly fixed = fixed;
 
   ngOnInit(): void {

@@ -3,7 +3,8 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, output } f
 import { MatButton } from '@angular/material/button';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { EditableLot } from '@shared/contracts/selling';
-import { dollars, fixed } from '../../catalogue/format';
+import { fixed } from '../../catalogue/format';
+import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { CautionsList } from '../ui/cautions-list';
 import { FindingsList } from '../ui/findings-list';
 import { SellingApi } from '../selling-api';
@@ -13,7 +14,7 @@ import { StepSave } from './step-save';
 /** Step 7: the listing as a whole, what still blocks it, the cautions buyers will see, and submit. */
 @Component({
   selector: 'app-review-step',
-  imports: [MatButton, DatePipe, AnalysisPreview, FindingsList, CautionsList],
+  imports: [MoneyPipe, MatButton, DatePipe, AnalysisPreview, FindingsList, CautionsList],
   template: `
     @let l = lot();
     <div class="cols">
@@ -23,9 +24,9 @@ import { StepSave } from './step-save';
           @if (l.lot; as s) { <dt>Hay</dt><dd>{{ forage[s.forageType] }}, cutting {{ s.cutting }}, harvested {{ s.harvestStartedOn | date: 'mediumDate' : 'UTC' }} – {{ s.harvestEndedOn | date: 'mediumDate' : 'UTC' }}</dd> }
           @if (l.quantity; as q) { <dt>Quantity</dt><dd>{{ q.baleCount }} × {{ bales[q.baleType] }} of {{ fixed(q.avgBaleWeightLb, 0) }} lb ≈ {{ fixed(q.totalTons, 1) }} tons</dd> }
           @if (l.price; as p) {
-            <dt>Price</dt><dd>{{ dollars(p.priceCentsPerTon ?? 0) }} per ton @if (p.priceCentsPerBale) { ({{ dollars(p.priceCentsPerBale, 2) }} per bale) }</dd>
+            <dt>Price</dt><dd>{{ p.priceCentsPerTon ?? 0 | money: 0 }} per ton @if (p.priceCentsPerBale) { ({{ p.priceCentsPerBale | money }} per bale) }</dd>
             <dt>Minimum order</dt><dd>{{ p.minOrderTons > 0 ? fixed(p.minOrderTons, 1) + ' tons' : 'None' }}</dd>
-            <dt>Delivery</dt><dd>{{ p.freightCentsPerLoadedMile === null ? 'You do not deliver' : dollars(p.freightCentsPerLoadedMile, 2) + ' per loaded mile' }}@if (p.deliveryTerms) { — {{ p.deliveryTerms }} }</dd>
+            <dt>Delivery</dt><dd>{{ p.freightCentsPerLoadedMile === null ? 'You do not deliver' : (p.freightCentsPerLoadedMile | money) + ' per loaded mile' }}@if (p.deliveryTerms) { — {{ p.deliveryTerms }} }</dd>
             <dt>Pickup</dt><dd>{{ p.pickupAllowed ? 'Buyers may collect at the farm' : 'No pickup' }}</dd>
           }
           @if (l.analysis; as a) {
@@ -76,7 +77,6 @@ export class ReviewStep {
   protected readonly saving = new StepSave();
   protected readonly forage = FORAGE_TYPE_LABELS;
   protected readonly bales = BALE_TYPE_LABELS;
-  protected readonly dollars = dollars;
   protected readonly fixed = fixed;
   protected readonly cautionInput = computed(() => {
     const l = this.lot();
