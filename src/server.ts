@@ -15,7 +15,7 @@ import { createAppDeps } from '../server/app-deps';
 import { listenForCatalogueChanges } from '../server/features/catalogue-cache/catalogue-cache';
 import { cachedPages } from '../server/features/catalogue-cache/page-cache';
 import { mediaRouter } from '../server/features/media/media.router';
-import { startOrderTimers } from '../server/features/orders/order-timers';
+import { registerOrderSweeps, scheduleOrderSweeps } from '../server/features/orders/order-sweeps';
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 
@@ -81,13 +81,17 @@ if (isEntry && cluster.isPrimary && workerCount() > 1) {
 } else if (isEntry) {
   const port = deps.env.PORT;
   const stopListening = deps.catalogueCache ? listenForCatalogueChanges(deps.env.DATABASE_URL, deps.catalogueCache, deps.logger) : async () => undefined;
-  // The job queue (e-mail outbox) creates its tables on first start and works in the background.
-  deps.jobs.start().catch((err) => deps.logger.error({ err }, 'job queue did not start; jobs wait in the database'));
+  // The job queue (e-mail outbox, order sweeps) creates its tables on first start and works in the background;
+  // the sweeps' cron schedule is stored once and ticks once a minute however many workers run.
+  registerOrderSweeps(deps);
+  deps.jobs
+    .start()
+    .then(() => scheduleOrderSweeps(deps))
+    .catch((err) => deps.logger.error({ err }, 'job queue did not start; jobs wait in the database'));
   const server = app.listen(port, '127.0.0.1', (error) => {
     if (error) throw error;
     deps.logger.info(`Baleproof listening on http://127.0.0.1:${port}`);
   });
-  startOrderTimers(deps);
   const shutdown = (signal: string) => {
     deps.logger.info({ signal }, 'shutting down');
     server.close(() => {

@@ -12,6 +12,11 @@ export interface JobKind<T extends object> {
   readonly retryDelaySeconds: number;
   /** Jobs are plain JSON in PostgreSQL; the handler only ever sees data that passed this check. */
   readonly parse: (data: unknown) => T;
+  /**
+   * pg-boss queue policy. 'stately': at most one job waiting and one running (a periodic sweep: a tick
+   * while one waits is dropped). Default 'standard'. Applies when the queue is first created.
+   */
+  readonly policy?: 'standard' | 'stately';
 }
 
 export type JobHandler<T extends object> = (data: T, attempt: { id: string; retryCount: number; retryLimit: number }) => Promise<void>;
@@ -31,6 +36,14 @@ export interface JobQueue {
   enqueue<T extends object>(kind: JobKind<T>, data: T, options?: { startAfter?: Date; singletonKey?: string }): Promise<string>;
   /** Says what to do with jobs of a kind. Register before or after `start()`. */
   register<T extends object>(kind: JobKind<T>, handler: JobHandler<T>): void;
+  /**
+   * Sends a job of this kind on a cron schedule (UTC, at most once a minute). The schedule is stored in
+   * the database, and pg-boss sends each tick once however many processes run: the server's workers
+   * take it in turn. Saving the same schedule again only updates it.
+   */
+  schedule<T extends object>(kind: JobKind<T>, cron: string, data: T): Promise<void>;
+  /** The stored schedules: which queue, on which cron. */
+  schedules(): Promise<{ name: string; cron: string }[]>;
   start(): Promise<void>;
   stop(): Promise<void>;
   /**
@@ -62,9 +75,9 @@ export function createJobQueue(options: JobQueueOptions): JobQueue {
   const boss = new PgBoss({
     db: { executeSql: (text, values) => pool.query(text, values) },
     schema: options.schema ?? 'pgboss',
-    // Maintenance (expiry, archiving) only where real workers run; tests stay quiet and fast.
+    // Maintenance (expiry, archiving) and the cron clock only where real workers run; tests stay quiet and fast.
     supervise: workers,
-    schedule: false,
+    schedule: workers,
   });
   boss.on('error', (err) => logger.error({ err }, 'job queue error'));
 
@@ -90,13 +103,21 @@ export function createJobQueue(options: JobQueueOptions): JobQueue {
     if (!ready) {
       ready = (async () => {
         await bossStarted();
-        if (await boss.getQueue(kind.name)) return;
-        await boss
-          .createQueue(kind.name, { name: kind.name, retryLimit: kind.retryLimit, retryDelay: kind.retryDelaySeconds, retryBackoff: true })
-          .catch(async (err) => {
+        // Several processes starting at once create the same queues at once; pg-boss's DDL can then
+        // deadlock in PostgreSQL (seen with two workers). The loser tries again after a short pause.
+        for (let attempt = 1; ; attempt++) {
+          if (await boss.getQueue(kind.name)) return;
+          try {
+            await boss.createQueue(kind.name, { name: kind.name, policy: kind.policy ?? 'standard', retryLimit: kind.retryLimit, retryDelay: kind.retryDelaySeconds, retryBackoff: true });
+            return;
+          } catch (err) {
             // Another process created it first.
-            if (!(await boss.getQueue(kind.name))) throw err;
-          });
+            if (await boss.getQueue(kind.name)) return;
+            const code = (err as { code?: string }).code;
+            if (attempt >= 5 || !(code === '40P01' || code === '40001' || code === '23505')) throw err;
+            await new Promise((resolve) => setTimeout(resolve, 50 + Math.random() * 200 * attempt));
+          }
+        }
       })();
       queuesReady.set(kind.name, ready);
       ready.catch(() => queuesReady.delete(kind.name));
@@ -146,6 +167,14 @@ export function createJobQueue(options: JobQueueOptions): JobQueue {
       const id = await boss.send(kind.name, kind.parse(data), { startAfter: opts.startAfter, singletonKey: opts.singletonKey });
       if (!id) throw new Error(`job not stored in queue ${kind.name}`);
       return id;
+    },
+    async schedule(kind, cron, data) {
+      await ensureQueue(kind as JobKind<object>);
+      await boss.schedule(kind.name, cron, kind.parse(data), { tz: 'UTC' });
+    },
+    async schedules() {
+      await bossStarted();
+      return (await boss.getSchedules()).map((s) => ({ name: s.name, cron: s.cron }));
     },
     register(kind, handler) {
       if (registrations.has(kind.name)) throw new Error(`a handler for ${kind.name} is already registered`);

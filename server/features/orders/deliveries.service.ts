@@ -111,17 +111,26 @@ export class DeliveriesService {
     return this.orders.get(user, orderId);
   }
 
-  /** Loads delivered with no answer from the buyer complete when the acceptance period ends (run on a timer). */
+  /**
+   * Loads delivered with no answer from the buyer complete when the acceptance period ends (a scheduled
+   * job). Safe to run twice at once: each order is completed under its row lock, and only the run that
+   * completed it sends the receipt. Returns how many this run completed.
+   */
   async completeUnanswered(): Promise<number> {
     const due = await this.deps.db.select({ id: orders.id }).from(orders).where(and(eq(orders.status, 'delivered'), lte(orders.acceptBy, this.now())));
+    let completed = 0;
     for (const { id } of due) {
-      await this.deps.db.transaction(async (tx) => {
+      const done = await this.deps.db.transaction(async (tx) => {
         const order = await lockOrder(tx, id);
-        if (order?.status === 'delivered') await applyOrderEvent(tx, order, 'accept', { actor: 'system', actorId: null }, this.now(), {}, 'No problem reported within the acceptance period.');
+        if (order?.status !== 'delivered') return false;
+        await applyOrderEvent(tx, order, 'accept', { actor: 'system', actorId: null }, this.now(), {}, 'No problem reported within the acceptance period.');
+        return true;
       });
+      if (!done) continue;
+      completed++;
       await this.orders.notify(id, ['receipt']);
     }
-    return due.length;
+    return completed;
   }
 
   async settings(user: Express.User): Promise<DeliverySettings> {

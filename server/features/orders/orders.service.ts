@@ -211,7 +211,7 @@ export class OrdersService {
   }
 
   /**
-   * Ends every hold whose time is up (run on a timer): a payment that did arrive is applied instead;
+   * Ends every hold whose time is up (a scheduled job; safe to run twice at once): a payment that did arrive is applied instead;
    * otherwise the payment page is closed and the bales go back on the lot. Returns how many holds ended.
    */
   async expireDueReservations(): Promise<number> {
