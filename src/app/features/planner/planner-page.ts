@@ -1,3 +1,4 @@
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormsModule } from '@angular/forms';
@@ -10,16 +11,16 @@ import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { catchError, map, of, switchMap } from 'rxjs';
 import { FEEDING_METHODS, type FeedingMethod, WASTE_ALLOWANCES } from '@shared/planner/feeding-methods';
 import { HerdNeedsRequestSchema, planHerdNeeds } from '@shared/planner/herd-needs';
-import { KG_PER_SHORT_TON } from '@shared/units/mass';
-import { fixed } from '../catalogue/format';
 import { fieldName, type GroupDraft, herdRequest, HORSE_CLASS_OPTIONS, newGroup } from './herd-draft';
+import { HerdResults } from './herd-results';
 import { PlannerApi } from './planner-api';
 import { PurchasePlanPanel } from './purchase-plan-panel';
+import { massIn, readerUnit } from './reader-units';
 
 /** Herd needs (NRC 2007) → hay per day, tons and bales of a chosen lot → the least-cost purchase. */
 @Component({
   selector: 'app-planner-page',
-  imports: [FormsModule, RouterLink, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, PurchasePlanPanel],
+  imports: [DecimalPipe, FormsModule, RouterLink, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, HerdResults, PurchasePlanPanel],
   templateUrl: './planner-page.html',
   styleUrl: './planner-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -31,8 +32,6 @@ export class PlannerPage {
 
   protected readonly classes = HORSE_CLASS_OPTIONS;
   protected readonly methods = FEEDING_METHODS.map((m) => ({ value: m, ...WASTE_ALLOWANCES[m] }));
-  protected readonly fixed = fixed;
-  protected readonly kgPerTon = KG_PER_SHORT_TON;
 
   protected readonly groups = signal<GroupDraft[]>([newGroup()]);
   protected readonly days = signal<number | null>(365);
@@ -66,6 +65,12 @@ export class PlannerPage {
   /** The herd without a lot, for the purchase plan (the plan chooses lots itself). */
   protected readonly herdForPurchase = computed(() => (this.checked().plan ? this.checked().request : null));
   protected readonly waste = computed(() => WASTE_ALLOWANCES[this.feedingMethod()]);
+  /** Answers come in the unit the herd was entered in. */
+  protected readonly unit = computed(() => readerUnit(this.groups()));
+
+  protected mass(kg: number): number {
+    return massIn(kg, this.unit()).value;
+  }
 
   protected updateGroup(index: number, patch: Partial<GroupDraft>): void {
     this.groups.update((list) => list.map((g, i) => (i === index ? { ...g, ...patch } : g)));
@@ -81,9 +86,5 @@ export class PlannerPage {
 
   protected chooseLot(id: number | null): void {
     void this.router.navigate([], { relativeTo: this.route, queryParams: { lot: id ?? undefined }, queryParamsHandling: 'merge' });
-  }
-
-  protected className(value: string): string {
-    return this.classes.find((c) => c.value === value)?.label ?? value;
   }
 }

@@ -1,4 +1,5 @@
-import { ChangeDetectionStrategy, Component, inject, input, signal } from '@angular/core';
+import { DecimalPipe } from '@angular/common';
+import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID, signal } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
@@ -8,16 +9,19 @@ import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import type { PurchasePlanResponse } from '@shared/contracts/planner';
 import type { HerdNeedsRequest } from '@shared/planner/herd-needs';
+import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
-import { fixed } from '../catalogue/format';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { CartStore } from '../orders/cart-store';
 import { PlannerApi } from './planner-api';
+import { supplyRows } from './purchase-rows';
+import { type ReaderUnit, tonnageIn } from './reader-units';
+import { StackedBars } from './stacked-bars';
 
 /** The cheapest delivered mix of listed lots that meets the herd's energy and protein, and one click to the cart. */
 @Component({
   selector: 'app-purchase-plan-panel',
-  imports: [MoneyPipe, FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar],
+  imports: [MoneyPipe, DecimalPipe, StackedBars, FormsModule, RouterLink, MatButton, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatProgressBar],
   templateUrl: './purchase-plan-panel.html',
   styleUrl: './purchase-plan-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -25,8 +29,11 @@ import { PlannerApi } from './planner-api';
 export class PurchasePlanPanel {
   private readonly api = inject(PlannerApi);
   private readonly cart = inject(CartStore);
+  private readonly locale = inject(LOCALE_ID);
 
   readonly herd = input.required<HerdNeedsRequest>();
+  /** The unit the herd was entered in: tons and masses are shown in it. */
+  readonly unit = input<ReaderUnit>('lb');
 
   protected readonly zip = signal('');
   protected readonly maxDistanceMi = signal<number | null>(300);
@@ -34,7 +41,17 @@ export class PurchasePlanPanel {
   protected readonly error = signal<string | null>(null);
   protected readonly result = signal<PurchasePlanResponse | null>(null);
   protected readonly added = signal(false);
-  protected readonly fixed = fixed;
+  protected readonly supply = computed(() => {
+    const r = this.result();
+    return r ? supplyRows(r, this.unit()) : [];
+  });
+  protected readonly costBars = computed(() => (this.result()?.lines ?? []).map((l) => ({ label: l.title, parts: [l.hayCents, l.freightCents] })));
+  /** Chart totals in whole dollars, through the one money formatter. */
+  protected readonly money = (cents: number) => formatCents(cents, { fractionDigits: 0, locale: this.locale });
+
+  protected tonnage(shortTons: number): number {
+    return tonnageIn(shortTons, this.unit()).value;
+  }
 
   protected async findPlan(): Promise<void> {
     this.busy.set(true);
