@@ -37,6 +37,40 @@ export const CreateOrderSchema = z
   .refine((o) => o.method === 'pickup' || o.deliveryAddress !== undefined, { message: 'Give the delivery address.', path: ['deliveryAddress'] });
 export type CreateOrder = z.infer<typeof CreateOrderSchema>;
 
+/** Most lots one hay list may check out at once. */
+export const HAY_LIST_MAX_LOTS = 20;
+
+/**
+ * Checking out the buyer's hay list: several lots, each its own order with its own hold and payment page.
+ * All bales are held at once or none are. Dates are agreed per order afterwards.
+ */
+export const ListCheckoutSchema = z
+  .object({
+    lines: z
+      .array(
+        z
+          .object({
+            lotId: z.number().int().positive('Choose a lot.'),
+            bales: z.number().int('Order whole bales.').positive('Order at least one bale.').max(100_000, 'That is more bales than any lot holds.'),
+          })
+          .strict(),
+      )
+      .min(1, 'The hay list is empty.')
+      .max(HAY_LIST_MAX_LOTS, `Check out at most ${HAY_LIST_MAX_LOTS} lots at once.`)
+      .refine((lines) => new Set(lines.map((l) => l.lotId)).size === lines.length, 'Each lot once on the list.'),
+    method: z.enum(['pickup', 'delivery'], { message: 'Choose delivery or pickup at the farm.' }),
+    deliveryZip: zip.optional(),
+    deliveryAddress: z.string().trim().min(5, 'Give the delivery address.').max(300, 'Use at most 300 characters.').optional(),
+  })
+  .strict()
+  .refine((o) => o.method === 'pickup' || o.deliveryZip !== undefined, { message: 'Give the delivery ZIP code so the freight can be worked out.', path: ['deliveryZip'] })
+  .refine((o) => o.method === 'pickup' || o.deliveryAddress !== undefined, { message: 'Give the delivery address.', path: ['deliveryAddress'] });
+export type ListCheckout = z.infer<typeof ListCheckoutSchema>;
+
+export interface ListCheckoutResult {
+  orders: (CreatedOrder & { lotId: number; lotTitle: string; farmName: string })[];
+}
+
 export interface OrderQuote {
   lotId: number;
   bales: number;
@@ -52,6 +86,8 @@ export interface OrderQuote {
   distanceMi: number | null;
   minBales: number;
   balesAvailable: number;
+  /** Bales in one full load of the grower's truck (by weight, or by count when that fills first). */
+  balesPerLoad: number;
   /** Why this order cannot be placed as asked, or null. */
   problem: string | null;
 }

@@ -1,4 +1,4 @@
-import { feeRateLabel, goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
+import { balesPerLoad, feeRateLabel, goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
 
 // $12 for a 60 lb bale = $400.0/t (domain brief §11).
 /** 3 % in basis points: the platform's default fee (our own policy; an admin setting). */
@@ -37,6 +37,13 @@ describe('order total', () => {
   it('fills a load by bale count when the trailer holds fewer bales than its weight allows (domain brief §11: light bales fill by volume)', () => {
     expect(loadsFor(600, 18, { tonsPerLoad: 24, balesPerLoad: 500 })).toBe(2);
     expect(loadsFor(600, 18, { tonsPerLoad: 24, balesPerLoad: null })).toBe(1);
+  });
+
+  it('counts a full load in bales: 24 t of 60 lb bales is 800 bales (domain brief §11: bales = tons × 2000 / lb), fewer when the trailer fills by count', () => {
+    expect(balesPerLoad({ tonsPerLoad: 24, balesPerLoad: null }, 60)).toBe(800);
+    expect(balesPerLoad({ tonsPerLoad: 24, balesPerLoad: 500 }, 60)).toBe(500);
+    // 1,200 lb rounds: 24 t holds 40 of them.
+    expect(balesPerLoad({ tonsPerLoad: 24, balesPerLoad: null }, 1200)).toBe(40);
   });
 
   it('adds the 3 % platform fee on the hay only, and the total is the sum in whole cents (our fee policy)', () => {

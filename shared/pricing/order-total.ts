@@ -2,6 +2,7 @@
  * What a buyer pays for one order: hay + freight + platform fee, all whole cents.
  */
 import { balesForTons, balesToTons } from '../units/bales';
+import { LB_PER_SHORT_TON } from '../units/mass';
 import { type Cents, roundCents } from '../units/money';
 import { DEFAULT_TONS_PER_LOAD, freightPerLoadCents } from './freight';
 
@@ -76,6 +77,12 @@ export function loadsFor(bales: number, tons: number, truck: TruckCapacity): num
   const byWeight = Math.ceil(Number((tons / truck.tonsPerLoad).toPrecision(12)));
   const byCount = truck.balesPerLoad ? Math.ceil(bales / truck.balesPerLoad) : 0;
   return Math.max(1, byWeight, byCount);
+}
+
+/** Bales in one full load: as many as the weight allows, fewer when the truck fills by count first (at least 1). */
+export function balesPerLoad(truck: TruckCapacity, avgBaleWeightLb: number): number {
+  const byWeight = Math.floor(Number(((truck.tonsPerLoad * LB_PER_SHORT_TON) / avgBaleWeightLb).toPrecision(12)));
+  return Math.max(1, truck.balesPerLoad ? Math.min(byWeight, truck.balesPerLoad) : byWeight);
 }
 
 export const DEFAULT_TRUCK: TruckCapacity = { tonsPerLoad: DEFAULT_TONS_PER_LOAD, balesPerLoad: null };

@@ -5,6 +5,7 @@ import {
   CreateOrderSchema,
   DeliverySettingsSchema,
   HandOverSchema,
+  ListCheckoutSchema,
   OrderQuoteSchema,
   ProposeWindowSchema,
 } from '@shared/contracts/orders';
@@ -47,6 +48,9 @@ export function ordersRouter({ orders, deliveries }: OrderFeature): Router {
 
   router.post('/', requireRole('buyer'), async (req, res) => {
     res.status(201).json(await orders.create(req.user!, CreateOrderSchema.parse(req.body)));
+  });
+  router.post('/from-list', requireRole('buyer'), async (req, res) => {
+    res.status(201).json(await orders.checkoutList(req.user!, ListCheckoutSchema.parse(req.body)));
   });
   router.get('/mine', requireRole('buyer'), async (req, res) => {
     res.json({ items: await orders.listForBuyer(req.user!.id) });

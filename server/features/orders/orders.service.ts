@@ -1,9 +1,9 @@
 import { and, desc, eq, inArray, lte, sql } from 'drizzle-orm';
-import type { CreatedOrder, CreateOrder, OrderQuote, OrderQuoteRequest, OrderSummary, OrderView } from '@shared/contracts/orders';
+import type { CreatedOrder, CreateOrder, ListCheckout, ListCheckoutResult, OrderQuote, OrderQuoteRequest, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
 import { RESERVATION_MINUTES } from '@shared/lifecycle/order-lifecycle';
 import type { Actor } from '@shared/lifecycle/state-machine';
 import { haversineMiles } from '@shared/pricing/distance';
-import { minimumBales, orderProblem, orderTotal, type LotTerms } from '@shared/pricing/order-total';
+import { balesPerLoad, minimumBales, orderProblem, orderTotal, type LotTerms, type OrderTotal } from '@shared/pricing/order-total';
 import type { ApiDeps } from '../../api-deps';
 import { deliveries, farms, lots, orderEvents, orderRefunds, orders, users } from '../../db/schema';
 import { conflict, HttpError, notFound } from '../../middleware/http-error';
@@ -42,7 +42,7 @@ export class OrdersService {
     const problem = orderProblem(terms, request);
     const { platformFeeBps } = await this.settings.current();
     const total = orderTotal(terms, request, platformFeeBps, farm);
-    return { lotId: lot.id, ...total, platformFeeBps, distanceMi, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, problem: problem?.message ?? null };
+    return { lotId: lot.id, ...total, platformFeeBps, distanceMi, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, balesPerLoad: balesPerLoad(farm, lot.avgBaleWeightLb), problem: problem?.message ?? null };
   }
 
   /**
@@ -50,70 +50,109 @@ export class OrdersService {
    * page is opened. Bales that are gone answer 409; a payment provider that fails releases them again.
    */
   async create(user: Express.User, input: CreateOrder): Promise<CreatedOrder> {
-    const { lot, farm } = await this.listedLot(input.lotId);
-    const terms = lotTerms(lot);
-    const distanceMi = input.method === 'delivery' && input.deliveryZip ? this.distance(farm, input.deliveryZip) : null;
-    const request = { bales: input.bales, method: input.method, distanceMi };
-    const problem = orderProblem(terms, request);
-    if (problem?.code === 'not_enough_bales') throw conflict('not_enough_bales', problem.message);
-    if (problem) throw new HttpError(400, problem.code, problem.message, [{ path: problem.code === 'below_minimum' ? 'bales' : problem.code === 'no_distance' ? 'deliveryZip' : 'method', message: problem.message }]);
-    if (input.method === 'pickup' && !lot.pickupAllowed) throw new HttpError(400, 'no_pickup', 'This lot is not sold for pickup at the farm; choose delivery.');
-    // The fee rate in force now is stored with the order: a later change of the setting never reprices it.
-    const { platformFeeBps } = await this.settings.current();
-    const total = orderTotal(terms, request, platformFeeBps, farm);
-    const window = input.window ? windowFor(farm, input.method, input.window, this.deps.clock.now()) : null;
-    const now = this.deps.clock.now();
+    const [placed] = await this.place(user, [{ lotId: input.lotId, bales: input.bales, window: input.window }], input, false);
+    const { lotId: _lotId, lotTitle: _title, farmName: _farm, ...created } = placed!;
+    return created;
+  }
 
-    const order = await this.db.transaction(async (tx) => {
-      if (!(await reserveBales(tx, lot.id, input.bales, now))) {
-        const [left] = await tx.select({ balesAvailable: lots.balesAvailable }).from(lots).where(eq(lots.id, lot.id));
+  /**
+   * Checks out a hay list: one order per lot, each with its own hold, payment page and idempotency key.
+   * Every hold is taken in one transaction, so a lot that has run short answers 409 naming it and nothing
+   * else is held. Dates are agreed per order once paid.
+   */
+  async checkoutList(user: Express.User, input: ListCheckout): Promise<ListCheckoutResult> {
+    return { orders: await this.place(user, input.lines, input, true) };
+  }
+
+  private async place(user: Express.User, lines: readonly { lotId: number; bales: number; window?: WindowRequest | undefined }[], how: Pick<CreateOrder, 'method' | 'deliveryZip' | 'deliveryAddress'>, nameLots: boolean) {
+    // The fee rate in force now is stored with each order: a later change of the setting never reprices it.
+    const { platformFeeBps } = await this.settings.current();
+    const now = this.deps.clock.now();
+    const drafts: Draft[] = [];
+    for (const [i, line] of lines.entries()) {
+      const { lot, farm } = await this.listedLot(line.lotId);
+      const named = (message: string) => (nameLots ? `“${lot.title}” (lot ${lot.id}): ${message}` : message);
+      const path = (field: string) => (nameLots ? `lines.${i}.${field}` : field);
+      const terms = lotTerms(lot);
+      const distanceMi = how.method === 'delivery' && how.deliveryZip ? this.distance(farm, how.deliveryZip) : null;
+      const request = { bales: line.bales, method: how.method, distanceMi };
+      const problem = orderProblem(terms, request);
+      if (problem?.code === 'not_enough_bales') throw new HttpError(409, 'not_enough_bales', named(problem.message), [{ path: path('bales'), message: problem.message, lotId: lot.id }]);
+      if (problem) throw new HttpError(400, problem.code, named(problem.message), [{ path: problem.code === 'below_minimum' ? path('bales') : problem.code === 'no_distance' ? 'deliveryZip' : 'method', message: problem.message, lotId: lot.id }]);
+      if (how.method === 'pickup' && !lot.pickupAllowed) throw new HttpError(400, 'no_pickup', named('This lot is not sold for pickup at the farm; choose delivery.'), [{ path: 'method', message: 'Not sold for pickup.', lotId: lot.id }]);
+      const total = orderTotal(terms, request, platformFeeBps, farm);
+      const window = line.window ? windowFor(farm, how.method, line.window, now) : null;
+      drafts.push({ lot, farm, total, distanceMi, window, path: path('bales') });
+    }
+
+    const placed = await this.db.transaction(async (tx) => {
+      // Lots are taken in id order, so two lists holding the same lots never wait on each other in a circle.
+      for (const d of [...drafts].sort((x, y) => x.lot.id - y.lot.id)) {
+        if (await reserveBales(tx, d.lot.id, d.total.bales, now)) continue;
+        const [left] = await tx.select({ balesAvailable: lots.balesAvailable }).from(lots).where(eq(lots.id, d.lot.id));
         const n = left?.balesAvailable ?? 0;
-        throw conflict('not_enough_bales', n === 0 ? 'Those bales are no longer available: this lot has none left.' : `Those bales are no longer available: only ${n} are left.`);
+        const message = n === 0 ? `Those bales of “${d.lot.title}” are no longer available: this lot has none left.` : `Those bales of “${d.lot.title}” are no longer available: only ${n} are left.`;
+        throw new HttpError(409, 'not_enough_bales', nameLots ? `${message} Nothing was held; change the list and try again.` : message, [{ path: d.path, message, lotId: d.lot.id, balesAvailable: n }]);
       }
-      const [row] = await tx
-        .insert(orders)
-        .values({
-          buyerId: user.id,
-          lotId: lot.id,
-          farmId: farm.id,
-          bales: total.bales,
-          tons: total.tons,
-          pricingUnit: lot.pricingUnit,
-          priceCentsPerTon: lot.priceCentsPerTon,
-          goodsCents: total.goodsCents,
-          freightCents: total.freightCents,
-          platformFeeCents: total.platformFeeCents,
-          platformFeeBps,
-          totalCents: total.totalCents,
-          method: input.method,
-          loads: total.loads,
-          deliveryZip: input.method === 'delivery' ? (input.deliveryZip ?? null) : null,
-          deliveryAddress: input.method === 'delivery' ? (input.deliveryAddress ?? null) : null,
-          distanceMi,
-          reservedUntil: new Date(now.getTime() + RESERVATION_MINUTES * 60_000),
-          createdAt: now,
-          updatedAt: now,
-        })
-        .returning();
-      await tx.insert(orderEvents).values({ orderId: row!.id, event: 'place', status: 'awaiting_payment', actor: 'buyer', actorId: user.id, note: `${total.bales} bales reserved`, createdAt: now });
-      if (window) await tx.insert(deliveries).values({ orderId: row!.id, method: input.method, status: 'proposed', windowStart: window.start, windowEnd: window.end, updatedAt: now });
-      return row!;
+      const rows = [];
+      for (const d of drafts) {
+        const [row] = await tx
+          .insert(orders)
+          .values({
+            buyerId: user.id,
+            lotId: d.lot.id,
+            farmId: d.farm.id,
+            bales: d.total.bales,
+            tons: d.total.tons,
+            pricingUnit: d.lot.pricingUnit,
+            priceCentsPerTon: d.lot.priceCentsPerTon,
+            goodsCents: d.total.goodsCents,
+            freightCents: d.total.freightCents,
+            platformFeeCents: d.total.platformFeeCents,
+            platformFeeBps,
+            totalCents: d.total.totalCents,
+            method: how.method,
+            loads: d.total.loads,
+            deliveryZip: how.method === 'delivery' ? (how.deliveryZip ?? null) : null,
+            deliveryAddress: how.method === 'delivery' ? (how.deliveryAddress ?? null) : null,
+            distanceMi: d.distanceMi,
+            reservedUntil: new Date(now.getTime() + RESERVATION_MINUTES * 60_000),
+            createdAt: now,
+            updatedAt: now,
+          })
+          .returning();
+        await tx.insert(orderEvents).values({ orderId: row!.id, event: 'place', status: 'awaiting_payment', actor: 'buyer', actorId: user.id, note: `${d.total.bales} bales reserved`, createdAt: now });
+        if (d.window) await tx.insert(deliveries).values({ orderId: row!.id, method: how.method, status: 'proposed', windowStart: d.window.start, windowEnd: d.window.end, updatedAt: now });
+        rows.push({ row: row!, lotTitle: d.lot.title, farmName: d.farm.name });
+      }
+      return rows;
     });
 
-    let session: { id: string; url: string };
-    try {
-      session = await this.payments.startCheckout(order, { lotTitle: lot.title, buyerEmail: user.email });
-    } catch (err) {
-      await this.db.transaction(async (tx) => {
-        const locked = await lockOrder(tx, order.id);
-        if (locked?.status !== 'awaiting_payment') return;
-        await applyOrderEvent(tx, locked, 'cancel', { actor: 'admin', actorId: null }, this.deps.clock.now(), { cancelReason: 'payment_provider_unreachable', reservedUntil: null }, 'The payment page could not be opened.');
-        await releaseBales(tx, locked.lotId, locked.bales, this.deps.clock.now());
-      });
-      throw err;
+    const opened = [];
+    for (const { row, lotTitle, farmName } of placed) {
+      try {
+        const session = await this.payments.startCheckout(row, { lotTitle, buyerEmail: user.email });
+        await this.db.update(orders).set({ checkoutSessionId: session.id, paymentUrl: session.url }).where(eq(orders.id, row.id));
+        opened.push({ id: row.id, status: 'awaiting_payment' as const, totalCents: row.totalCents, paymentUrl: session.url, lotId: row.lotId, lotTitle, farmName });
+      } catch (err) {
+        // All or nothing: without a payment page for every order, every hold of this checkout is let go.
+        for (const p of placed) await this.abandon(p.row.id);
+        throw err;
+      }
     }
-    await this.db.update(orders).set({ checkoutSessionId: session.id, paymentUrl: session.url }).where(eq(orders.id, order.id));
-    return { id: order.id, status: 'awaiting_payment', totalCents: order.totalCents, paymentUrl: session.url };
+    return opened;
+  }
+
+  /** Ends an unpaid order whose payment page could not be opened (or whose list could not be): bales go back. */
+  private async abandon(orderId: number): Promise<void> {
+    const order = (await loadOrderRecord(this.db, orderId))?.order;
+    if (order?.checkoutSessionId) await this.payments.close(order.checkoutSessionId).catch(() => null);
+    await this.db.transaction(async (tx) => {
+      const locked = await lockOrder(tx, orderId);
+      if (locked?.status !== 'awaiting_payment') return;
+      await applyOrderEvent(tx, locked, 'cancel', { actor: 'admin', actorId: null }, this.deps.clock.now(), { cancelReason: 'payment_provider_unreachable', reservedUntil: null }, 'The payment page could not be opened.');
+      await releaseBales(tx, locked.lotId, locked.bales, this.deps.clock.now());
+    });
   }
 
   /** The order for its buyer, its grower or an admin; an unpaid order is first checked with the provider. */
@@ -312,6 +351,17 @@ export class OrdersService {
     const place = locateZip(zip);
     return round1(haversineMiles({ lat: farm.latitude, lon: farm.longitude }, { lat: place.latitude, lon: place.longitude }));
   }
+}
+
+/** One order checked and priced, before its bales are held. */
+interface Draft {
+  lot: typeof lots.$inferSelect;
+  farm: typeof farms.$inferSelect;
+  total: OrderTotal;
+  distanceMi: number | null;
+  window: { start: Date; end: Date } | null;
+  /** Where in the request a problem with it points. */
+  path: string;
 }
 
 export function lotTerms(lot: typeof lots.$inferSelect): LotTerms {
