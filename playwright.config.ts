@@ -29,6 +29,9 @@ export default defineConfig({
     command: `node ${process.env['E2E_DIST'] ?? 'dist/baleproof'}/server/server.mjs`,
     url: `http://127.0.0.1:${port}/api/health`,
     reuseExistingServer: false,
+    // The server's warnings and errors show beside the failing journey.
+    stdout: 'pipe',
+    stderr: 'pipe',
     timeout: 60_000,
     env: {
       PORT: String(port),

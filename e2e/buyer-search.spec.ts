@@ -1,4 +1,4 @@
-import { expect, test, type APIRequestContext, type Locator } from '@playwright/test';
+import { expect, test, type APIRequestContext, type Locator } from './support/test';
 import type { ComparedLot } from '@shared/contracts/compare';
 
 /** Titles the API lists for a catalogue query (the oracle for what the page should show). */
@@ -103,7 +103,7 @@ test.describe('buyers find and choose hay', () => {
       const lbProtein = l.pricing.tons * 2000 * (l.nutrients.dryMatterPct / 100) * (l.nutrients.crudeProteinPct / 100);
       expect(Math.abs(l.pricing.perLbCrudeProteinCents! - l.pricing.totalCents / lbProtein)).toBeLessThanOrEqual(1);
     }
-    await expect(page.locator('app-nutrient-chart canvas')).toBeVisible();
+    await expect(page.getByRole('region', { name: 'More is better' }).getByRole('img', { name: /^Crude protein/ })).toBeVisible();
     await expect(page.getByRole('complementary', { name: 'Caution' })).toContainText('veterinarian or an equine nutritionist');
 
     // The comparison is server-rendered too.

@@ -1,24 +1,13 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, freshPage, test } from './support/test';
 import type { SellerLotRow } from '@shared/contracts/selling';
 import { makeJpeg } from '../tests/support/upload-fixtures';
 import { waitForMail } from './support/mail-catcher';
-
-// Demo accounts from the seed (README lists them).
-const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
-const BUYER = { email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass' };
-
-async function signIn(page: Page, account: { email: string; password: string }): Promise<void> {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(account.email);
-  await page.getByLabel('Password').fill(account.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await expect(page).not.toHaveURL(/\/sign-in/);
-}
+import { BUYER, GROWER, signInAs as signIn } from './support/accounts';
 
 test.describe.configure({ timeout: 300_000 });
 
 test('a buyer buys a load on the lot page and pays on the payment page; the grower confirms the date and hands it over with a scale ticket; the buyer accepts', async ({ browser }) => {
-  const growerPage = await (await browser.newContext()).newPage();
+  const growerPage = await freshPage(browser);
   await signIn(growerPage, GROWER);
   const lots = (await (await growerPage.request.get('/api/selling/lots')).json()) as { items?: SellerLotRow[] } | SellerLotRow[];
   const rows = Array.isArray(lots) ? lots : (lots.items ?? []);
@@ -34,7 +23,7 @@ test('a buyer buys a load on the lot page and pays on the payment page; the grow
   expect(lotId, 'the demo grower has a listed lot sold for pickup').not.toBeNull();
 
   // The buyer chooses a load on the lot page: the figures show before paying.
-  const buyerPage = await (await browser.newContext()).newPage();
+  const buyerPage = await freshPage(browser);
   await signIn(buyerPage, BUYER);
   await buyerPage.goto(`/hay/${lotId}`);
   const panel = buyerPage.getByRole('region', { name: 'Buy a load' });

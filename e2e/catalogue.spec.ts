@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 
 test.describe('catalogue', () => {
   test('the server-rendered HTML of the catalogue already lists demo lots', async ({ request }) => {

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { listedLotIds } from './support/accounts';
 
 test.describe('figures people would rather see than read', () => {
@@ -27,7 +27,8 @@ test.describe('figures people would rather see than read', () => {
     expect(html).toContain('advised limit 10–12%');
     expect(html).toContain('Against the USDA grade bands');
     await page.goto(`/hay/${id}`);
-    await expect(page.getByRole('img', { name: /^RFV \d+/ })).toBeVisible();
+    await expect(page.getByRole('img', { name: /^RFV \d+, RFQ \d+ on a scale/ })).toBeVisible();
+    await expect(page.getByRole('img', { name: /^RFV [\d.]+: / })).toBeVisible();
     await expect(page.getByText('Against the USDA grade bands')).toBeVisible();
   });
 

@@ -1,23 +1,10 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { makeJpeg, makeNoisyJpeg, makePdf } from '../tests/support/upload-fixtures';
 import { waitForMail } from './support/mail-catcher';
-
-// Demo accounts from the seed (README lists them).
-const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
-const ADMIN = { email: 'admin@baleproof.example', password: 'admin-demo-pass' };
-const BUYER = { email: 'buyer@demo.baleproof.example', password: 'demo-buyer-pass' };
+import { ADMIN, BUYER, GROWER, signInAs as signIn } from './support/accounts';
 
 /** The stored photo a variant URL belongs to (`/media/photos/<photo>/<width>.webp`). */
 const photoOf = (src: string | null) => /photos\/([^/]+)\//.exec(src ?? '')?.[1] ?? `no photo in ${src}`;
-
-async function signIn(page: Page, account: { email: string; password: string }): Promise<void> {
-  await page.goto('/sign-in');
-  await page.getByLabel('E-mail').fill(account.email);
-  await page.getByLabel('Password').fill(account.password);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  // Each role lands on its own home (grower: lots, admin: review desk).
-  await expect(page).toHaveURL(/\/(selling|admin)/);
-}
 
 async function signOut(page: Page): Promise<void> {
   await page.getByRole('button', { name: /Account menu/ }).click();

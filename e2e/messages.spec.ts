@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, freshPage, test } from './support/test';
 import { BUYER, GROWER, signInAs } from './support/accounts';
 
 test('a buyer asks the grower about a lot from its page; the grower reads it in the inbox and answers', async ({ browser }) => {
@@ -6,7 +6,7 @@ test('a buyer asks the grower about a lot from its page; the grower reads it in 
   const question = `Can a semi reach the barn? (${Date.now().toString(36)})`;
 
   // A listed lot of the demo grower's farm (README: grower@ runs Larkspur Bend Farm).
-  const buyerPage = await (await browser.newContext()).newPage();
+  const buyerPage = await freshPage(browser);
   const listed = await (await buyerPage.request.get('/api/lots?pageSize=100')).json();
   const lot = (listed.items as { id: number; farmName: string }[]).find((l) => l.farmName === 'Larkspur Bend Farm')!;
   await signInAs(buyerPage, BUYER);
@@ -16,7 +16,7 @@ test('a buyer asks the grower about a lot from its page; the grower reads it in 
   await ask.getByRole('button', { name: 'Send to the grower' }).click();
   await expect(ask.getByRole('list', { name: 'Messages' })).toContainText(question);
 
-  const growerPage = await (await browser.newContext()).newPage();
+  const growerPage = await freshPage(browser);
   await signInAs(growerPage, GROWER);
   await growerPage.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Messages' }).click();
   const conversation = growerPage.getByRole('list', { name: 'Conversations' }).getByRole('link').filter({ hasText: question });

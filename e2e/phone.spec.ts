@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { GROWER, listedLotIds, signInAs } from './support/accounts';
 
 // A 390 px wide phone (a common current handset width in CSS pixels — common practice).

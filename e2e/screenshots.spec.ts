@@ -1,4 +1,4 @@
-import { test } from '@playwright/test';
+import { test } from './support/test';
 
 /**
  * The two pictures in the README, taken from the running app: the catalogue at 1366 px and at 390 px.

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 
 // Demo accounts from the seed (README lists them).
 const accounts = [

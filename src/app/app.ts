@@ -1,4 +1,5 @@
-import { ChangeDetectionStrategy, Component } from '@angular/core';
+import { ApplicationRef, ChangeDetectionStrategy, Component, DOCUMENT, PLATFORM_ID, inject } from '@angular/core';
+import { isPlatformBrowser } from '@angular/common';
 import { Shell } from './core/layout/shell';
 
 @Component({
@@ -7,4 +8,16 @@ import { Shell } from './core/layout/shell';
   template: '<app-shell />',
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
-export class App {}
+export class App {
+  constructor() {
+    // Once the browser has hydrated the server's page and settled, mark the document as interactive.
+    // Input typed into a server-rendered field before then is not seen by its form; end-to-end tests
+    // (and anything else that drives the page) wait for this mark after a full page load.
+    if (isPlatformBrowser(inject(PLATFORM_ID))) {
+      const document = inject(DOCUMENT);
+      void inject(ApplicationRef)
+        .whenStable()
+        .then(() => document.documentElement.setAttribute('data-interactive', ''));
+    }
+  }
+}
