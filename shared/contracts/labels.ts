@@ -11,6 +11,9 @@ export const FORAGE_TYPE_LABELS: Record<ForageType, string> = {
   bromegrass: 'Bromegrass',
   fescue: 'Fescue',
   oat: 'Oat hay',
+  sudangrass: 'Sudangrass',
+  sorghum_sudangrass: 'Sorghum-sudangrass',
+  forage_sorghum: 'Forage sorghum',
   alfalfa_grass_mix: 'Alfalfa–grass mix',
   grass_mix: 'Grass mix',
 };

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { singleLineText } from './text';
 import type { ForageEvaluation, SamplingEvaluation } from '../forage';
+import type { VisualMouldScore } from '../forage/mould-scores';
 
 export const FORAGE_TYPES = [
   'alfalfa',
@@ -12,6 +13,9 @@ export const FORAGE_TYPES = [
   'bromegrass',
   'fescue',
   'oat',
+  'sudangrass',
+  'sorghum_sudangrass',
+  'forage_sorghum',
   'alfalfa_grass_mix',
   'grass_mix',
 ] as const;
@@ -243,6 +247,15 @@ export interface LotAnalysisView {
   calciumPct: number | null;
   phosphorusPct: number | null;
   reportedRfv: number | null;
+  /** Nitrate, % nitrate ion of dry matter; null when not tested. */
+  nitrateNo3PctDm: number | null;
+  /** Mould count, CFU per gram, as the lab reported it. */
+  mouldCfuPerG: number | null;
+  /** Mould the grower saw when bales were opened. */
+  visualMouldScore: VisualMouldScore | null;
+  aflatoxinPpb: number | null;
+  donPpm: number | null;
+  fumonisinPpm: number | null;
 }
 
 export interface LotSamplingView {

@@ -72,6 +72,9 @@ export const FORAGE_CLASS_OF: Record<ForageType, 'legume' | 'grass' | 'mixed'> =
   bromegrass: 'grass',
   fescue: 'grass',
   oat: 'grass',
+  sudangrass: 'grass',
+  sorghum_sudangrass: 'grass',
+  forage_sorghum: 'grass',
   alfalfa_grass_mix: 'mixed',
   grass_mix: 'grass',
 };

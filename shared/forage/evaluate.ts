@@ -7,6 +7,7 @@ import { horseDigestibleEnergy } from './horse-de';
 import { nonStructuralCarbohydrate, nscFlag } from './nsc';
 import { gradeForage } from './grades';
 import { consistencyFindings, methodFindings } from './analysis-findings';
+import { mouldFindings } from './mould';
 import { nitrateFindings } from './nitrate';
 
 /**
@@ -74,6 +75,7 @@ export function evaluateForage(req: ForageEvaluationRequest): ForageEvaluation {
       nscFlag: flag,
     }),
     ...nitrateFindings(req.nitrateNo3PctDm ?? null),
+    ...mouldFindings(req),
   ];
 
   return {

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { VISUAL_MOULD_SCORES } from './mould-scores';
 
 /**
  * Wire contract of the forage analysis engine: zod schemas for what the server accepts on
@@ -85,6 +86,20 @@ export const ForageEvaluationRequestSchema = z
       .min(0, { error: 'nitrateNo3PctDm cannot be negative' })
       .max(10, { error: 'nitrateNo3PctDm above 10% is not a hay result; check the unit (ppm nitrate-N × 0.000443 = % nitrate)' })
       .optional(),
+    /** Mould count from the lab, colony-forming units per gram (as the lab reports it). */
+    mouldCfuPerG: z
+      .number({ error: 'mouldCfuPerG must be a number, colony-forming units per gram' })
+      .min(0, { error: 'mouldCfuPerG cannot be negative' })
+      .max(1e10, { error: 'mouldCfuPerG above 10,000,000,000 CFU/g is not a lab result; check the unit' })
+      .optional(),
+    /** Mould the grower saw when bales were opened (see shared/forage/mould.ts). */
+    visualMouldScore: z.enum(VISUAL_MOULD_SCORES, { error: `visualMouldScore must be one of: ${VISUAL_MOULD_SCORES.join(', ')}` }).optional(),
+    /** Aflatoxin, ppb (µg/kg), as the lab reports it. */
+    aflatoxinPpb: z.number({ error: 'aflatoxinPpb must be a number, ppb' }).min(0, { error: 'aflatoxinPpb cannot be negative' }).max(10_000, { error: 'aflatoxinPpb above 10,000 ppb is not a hay result; check the unit (1 ppm = 1,000 ppb)' }).optional(),
+    /** Deoxynivalenol (DON, vomitoxin), ppm (mg/kg), as the lab reports it. */
+    donPpm: z.number({ error: 'donPpm must be a number, ppm' }).min(0, { error: 'donPpm cannot be negative' }).max(1000, { error: 'donPpm above 1,000 ppm is not a hay result; check the unit (1 ppm = 1,000 ppb)' }).optional(),
+    /** Fumonisin (B1 + B2 + B3), ppm (mg/kg), as the lab reports it. */
+    fumonisinPpm: z.number({ error: 'fumonisinPpm must be a number, ppm' }).min(0, { error: 'fumonisinPpm cannot be negative' }).max(1000, { error: 'fumonisinPpm above 1,000 ppm is not a hay result; check the unit (1 ppm = 1,000 ppb)' }).optional(),
     /** Moisture as reported by the lab, % as fed; optional cross-check of dryMatterPct. */
     moisturePct: z
       .number({ error: 'moisturePct must be a number, in percent' })

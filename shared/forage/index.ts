@@ -9,4 +9,6 @@ export * from './grades';
 export * from './analysis-findings';
 export * from './sampling-findings';
 export * from './evaluate';
+export * from './mould';
+export * from './mould-scores';
 export * from './nitrate';

@@ -64,7 +64,8 @@ export function nitrateTestAdvised(input: { forageType: string; drought?: boolea
   return NITRATE_PRONE_FORAGE_TYPES.has(input.forageType) || input.drought === true || input.heavyNitrogen === true;
 }
 
-const NITRATE_PRONE_FORAGE_TYPES = new Set(['oat', 'wheat', 'barley', 'triticale', 'rye', 'sorghum', 'sudangrass', 'sorghum_sudan']);
+// Forage-type ids as in shared/contracts FORAGE_TYPES (plain strings: the contracts import this engine).
+const NITRATE_PRONE_FORAGE_TYPES = new Set(['oat', 'wheat', 'barley', 'triticale', 'rye', 'sudangrass', 'sorghum_sudangrass', 'forage_sorghum']);
 
 /** The prompt shown to growers and buyers of hay that tends to carry nitrate. */
 export const NITRATE_TEST_PROMPT =

@@ -76,3 +76,31 @@ describe('growerCautions', () => {
     for (const c of growerCautions(wet)) expect(c.message).not.toMatch(/before feeding it to such horses|inspect flakes before feeding/);
   });
 });
+
+describe('lotCautions — sorghum-type hay and the nitrate prompt', () => {
+  // MSU Extension (Cassida 2012): "Forages in the sorghum family should never be fed to horses"; NMSU Guide B-720 on
+  // sorghum, sudangrass and sorghum-sudangrass hybrids and horses; nitrate stays in cured hay (OSU Extension, Boyles).
+  it('warns about sorghum-type hays and defers to a veterinarian (MSU Extension; NMSU B-720)', () => {
+    for (const forageType of ['sudangrass', 'sorghum_sudangrass', 'forage_sorghum'] as const) {
+      const sorghum = lotCautions({ ...base, forageType, nitrateTested: true }).find((c) => c.code === 'sorghum-type');
+      expect(sorghum?.message).toMatch(/prussic acid/);
+      expect(sorghum?.message).toMatch(/veterinarian/);
+    }
+    expect(codes({ ...base, forageType: 'timothy' })).not.toContain('sorghum-type');
+  });
+
+  // Small-grain and sorghum-type hays carry nitrate (Oklahoma State 2024; NC State Extension "Nitrates 101").
+  it('prompts for a nitrate test on oat and sorghum-type hay without a nitrate result, and not once it is tested', () => {
+    expect(codes({ ...base, forageType: 'oat' })).toContain('nitrate-test');
+    expect(codes({ ...base, forageType: 'sorghum_sudangrass' })).toContain('nitrate-test');
+    expect(codes({ ...base, forageType: 'oat', nitrateTested: true })).not.toContain('nitrate-test');
+    expect(codes({ ...base, forageType: 'alfalfa' })).not.toContain('nitrate-test');
+    expect(lotCautions({ ...base, forageType: 'oat' }).find((c) => c.code === 'nitrate-test')!.message).toMatch(/veterinarian/);
+  });
+
+  it('tells the grower of a sorghum-type lot to test for nitrate, in words written for the grower', () => {
+    const grower = growerCautions({ ...base, forageType: 'forage_sorghum' });
+    expect(grower.map((c) => c.code)).toEqual(expect.arrayContaining(['sorghum-type', 'nitrate-test']));
+    expect(grower.find((c) => c.code === 'nitrate-test')!.message).toMatch(/enter it with the lab values/);
+  });
+});

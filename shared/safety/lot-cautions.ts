@@ -1,8 +1,9 @@
-import type { BaleType } from '../contracts/lots';
+import type { BaleType, ForageType } from '../contracts/lots';
+import { NITRATE_TEST_PROMPT, nitrateTestAdvised } from '../forage/nitrate';
 
 /** A safety note shown with a lot; each ends by deferring to a professional or local guidance. */
 export interface Caution {
-  code: 'storage-moisture' | 'blister-beetles' | 'mould-dust' | 'high-nsc' | 'outside-storage' | 'botulism';
+  code: 'storage-moisture' | 'blister-beetles' | 'mould-dust' | 'high-nsc' | 'outside-storage' | 'botulism' | 'sorghum-type' | 'nitrate-test';
   title: string;
   message: string;
 }
@@ -32,7 +33,19 @@ export interface CautionInput {
   nscFlag: 'within-advised-limit' | 'above-strict-limit' | 'above-upper-limit' | null;
   /** Dry matter of the lab sample, % as fed, when known. */
   dryMatterPct?: number | null;
+  /** The lot's forage type, when known: sorghum-type and small-grain hays get their own cautions. */
+  forageType?: ForageType | null;
+  /** Whether the current analysis includes a nitrate result. */
+  nitrateTested?: boolean;
 }
+
+/**
+ * Sorghum-family hays. Extension specialists advise against feeding sorghum-family forages to horses: a poorly
+ * understood, sometimes fatal urinary and nerve disorder (cystitis–ataxia), and foal defects when mares graze them
+ * early in pregnancy (MSU Extension, Cassida 2012; NMSU Guide B-720, Turner, Marsalis & Creamer). Prussic acid
+ * (HCN) mostly escapes as stems dry and crack in curing (OSU Extension, Boyles), but nitrate stays in the hay.
+ */
+export const SORGHUM_TYPE_FORAGES: ReadonlySet<ForageType> = new Set<ForageType>(['sudangrass', 'sorghum_sudangrass', 'forage_sorghum']);
 
 /**
  * Above this moisture (% as fed) a bale ferments rather than cures: the top of Alberta Agriculture's safe
@@ -74,6 +87,25 @@ export function lotCautions(lot: CautionInput): Caution[] {
       message:
         `At about ${wettest.toFixed(0)}% moisture these bales ferment rather than cure, like baleage, which can carry botulism; horses are the most sensitive livestock to it.${bale}${forage} ` +
         'Do not feed bales that are torn, smell off or hold animal remains, and ask your veterinarian about botulism vaccination before feeding wet or wrapped hay.',
+    });
+  }
+  const sorghum = lot.forageType !== null && lot.forageType !== undefined && SORGHUM_TYPE_FORAGES.has(lot.forageType);
+  if (sorghum) {
+    out.push({
+      code: 'sorghum-type',
+      title: 'Sorghum-type hay: prussic acid and nitrate',
+      message:
+        'Sudangrass, sorghum-sudangrass and forage sorghum can hold prussic acid (cyanide) and nitrate. Most prussic acid escapes as ' +
+        'the hay cures, but nitrate does not, and extension specialists advise against feeding sorghum-family forages to horses at all: ' +
+        'they have been linked to a sometimes fatal urinary and nerve disorder, and to foal defects in pregnant mares. ' +
+        'Do not feed it to horses without your veterinarian\'s advice.',
+    });
+  }
+  if (lot.forageType && !lot.nitrateTested && nitrateTestAdvised({ forageType: lot.forageType })) {
+    out.push({
+      code: 'nitrate-test',
+      title: 'No nitrate result for a hay that can carry it',
+      message: `${NITRATE_TEST_PROMPT} Ask the grower for a nitrate result, and your veterinarian before feeding it, especially to pregnant mares.`,
     });
   }
   if (lot.forageClass !== 'grass') {
@@ -151,6 +183,21 @@ export function growerCautions(lot: CautionInput): Caution[] {
       ...c,
       title: 'Stored outside',
       message: 'Buyers are told the hay is uncovered. Covering the stack or moving it under a roof keeps dry matter and protects outer layers from mould.',
+    }),
+    'sorghum-type': (c) => ({
+      ...c,
+      title: 'Buyers are warned about sorghum-type hay',
+      message:
+        'Horse owners are told that extension specialists advise against feeding sorghum-family forages to horses, and that nitrate ' +
+        'stays in the cured hay. Test it for nitrate (and prussic acid if it was cut after drought or frost) and say in the description ' +
+        'which livestock it suits; ask your extension office about safe cutting after drought or frost.',
+    }),
+    'nitrate-test': (c) => ({
+      ...c,
+      title: 'Test this hay for nitrate',
+      message:
+        `${NITRATE_TEST_PROMPT} Buyers are told when a lot of this kind has no nitrate result; enter it with the lab values ` +
+        '(most labs run it on the same sample).',
     }),
     'mould-dust': (c) => ({
       ...c,

@@ -12,6 +12,7 @@ import {
   timestamp,
   uniqueIndex,
 } from 'drizzle-orm/pg-core';
+import { VISUAL_MOULD_SCORES } from '@shared/forage/mould-scores';
 import { analysisMethod, verificationState } from './enums';
 import { storedFiles } from './files';
 import { lots } from './lots';
@@ -52,6 +53,14 @@ export const labAnalyses = pgTable(
     reportedRfv: doublePrecision(),
     /** Nitrate, % nitrate ion of dry matter; null when not tested. */
     nitrateNo3PctDm: doublePrecision(),
+    /** Mould count, colony-forming units per gram, as the lab reports it; null when not tested. */
+    mouldCfuPerG: doublePrecision(),
+    /** Mould the grower saw when bales were opened; null when not said. */
+    visualMouldScore: text({ enum: VISUAL_MOULD_SCORES }),
+    /** Mycotoxins as the lab reports them: aflatoxin ppb, DON (vomitoxin) ppm, fumonisin ppm; null when not tested. */
+    aflatoxinPpb: doublePrecision(),
+    donPpm: doublePrecision(),
+    fumonisinPpm: doublePrecision(),
     // Computed by the forage engine (shared/forage) when saved.
     rfv: doublePrecision().notNull(),
     rfq: doublePrecision(),
@@ -86,6 +95,11 @@ export const labAnalyses = pgTable(
     pct('lab_starch_range', t.starchPct),
     pct('lab_ca_range', t.calciumPct),
     pct('lab_p_range', t.phosphorusPct),
+    check('lab_mould_count_range', sql`${t.mouldCfuPerG} is null or ${t.mouldCfuPerG} between 0 and 1e10`),
+    check('lab_visual_mould_score', sql`${t.visualMouldScore} is null or ${t.visualMouldScore} in (${sql.raw(VISUAL_MOULD_SCORES.map((v) => `'${v}'`).join(', '))})`),
+    check('lab_aflatoxin_range', sql`${t.aflatoxinPpb} is null or ${t.aflatoxinPpb} between 0 and 10000`),
+    check('lab_don_range', sql`${t.donPpm} is null or ${t.donPpm} between 0 and 1000`),
+    check('lab_fumonisin_range', sql`${t.fumonisinPpm} is null or ${t.fumonisinPpm} between 0 and 1000`),
     check('lab_nitrate_range', sql`${t.nitrateNo3PctDm} is null or ${t.nitrateNo3PctDm} between 0 and 10`),
     check('lab_rfv_range', sql`${t.rfv} > 0 and ${t.rfv} < 1000`),
   ],

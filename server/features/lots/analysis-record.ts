@@ -28,6 +28,12 @@ export function analysisColumns(request: ForageEvaluationRequest): { columns: An
       reportedRfv: request.reportedRfv ?? null,
       // Labs report nitrate on dry matter whatever basis the rest was typed in.
       nitrateNo3PctDm: request.nitrateNo3PctDm ?? null,
+      // Mould counts and mycotoxins are kept as the lab reported them.
+      mouldCfuPerG: request.mouldCfuPerG ?? null,
+      visualMouldScore: request.visualMouldScore ?? null,
+      aflatoxinPpb: request.aflatoxinPpb ?? null,
+      donPpm: request.donPpm ?? null,
+      fumonisinPpm: request.fumonisinPpm ?? null,
       rfv: evaluation.rfv,
       rfq: evaluation.rfq,
       tdnPct: evaluation.tdnPct,
@@ -61,6 +67,11 @@ export type AnalysisColumns = Required<
     | 'phosphorusPct'
     | 'reportedRfv'
     | 'nitrateNo3PctDm'
+    | 'mouldCfuPerG'
+    | 'visualMouldScore'
+    | 'aflatoxinPpb'
+    | 'donPpm'
+    | 'fumonisinPpm'
     | 'rfv'
     | 'rfq'
     | 'tdnPct'

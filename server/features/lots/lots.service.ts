@@ -241,6 +241,12 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: C
           calciumPct: analysis.calciumPct,
           phosphorusPct: analysis.phosphorusPct,
           reportedRfv: analysis.reportedRfv,
+          nitrateNo3PctDm: analysis.nitrateNo3PctDm,
+          mouldCfuPerG: analysis.mouldCfuPerG,
+          visualMouldScore: analysis.visualMouldScore,
+          aflatoxinPpb: analysis.aflatoxinPpb,
+          donPpm: analysis.donPpm,
+          fumonisinPpm: analysis.fumonisinPpm,
         }
       : null,
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,

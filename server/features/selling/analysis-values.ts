@@ -2,7 +2,7 @@ import { BASIS_DEPENDENT_FIELDS, evaluateForage, type ForageEvaluation, type For
 import type { labAnalyses } from '../../db/schema';
 
 type AnalysisRow = typeof labAnalyses.$inferSelect;
-const OPTIONAL = ['ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'reportedRfv', 'nitrateNo3PctDm'] as const;
+const OPTIONAL = ['ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'reportedRfv', 'nitrateNo3PctDm', 'mouldCfuPerG', 'aflatoxinPpb', 'donPpm', 'fumonisinPpm'] as const;
 
 /** The stored (dry-matter) analysis as an engine request on the DM basis. */
 export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationRequest['forageClass']): ForageEvaluationRequest {
@@ -18,6 +18,7 @@ export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationReque
     const value = row[field];
     if (value !== null) request[field] = value;
   }
+  if (row.visualMouldScore !== null) request.visualMouldScore = row.visualMouldScore;
   return request;
 }
 
@@ -31,6 +32,7 @@ export function enteredValuesOf(row: AnalysisRow): Record<string, number | strin
     const asEntered = row.enteredBasis === 'asFed' && dependent.has(field) ? (value * row.dryMatterPct) / 100 : value;
     out[field] = Math.round(asEntered * 1000) / 1000;
   }
+  if (row.visualMouldScore !== null) out['visualMouldScore'] = row.visualMouldScore;
   return out;
 }
 

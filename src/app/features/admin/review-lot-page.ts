@@ -15,7 +15,7 @@ import type { ReviewLotView } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../core/api-error';
 import { fixed } from '../catalogue/format';
 import { AnalysisPreview } from '../selling/lot-form/analysis-preview';
-import { CautionsList } from '../selling/ui/cautions-list';
+import { cautionInputOf, CautionsList } from '../selling/ui/cautions-list';
 import { FindingsList } from '../selling/ui/findings-list';
 import { STATUS_LABELS } from '../selling/ui/status-label';
 import { ReviewApi } from './review-api';
@@ -53,8 +53,7 @@ export class ReviewLotPage implements OnInit {
   protected readonly fixed = fixed;
   protected readonly cautionInput = computed(() => {
     const l = this.view()?.lot;
-    if (!l?.lot || !l.quantity) return null;
-    return { forageClass: l.forageClass, baleType: l.quantity.baleType, moistureAtBalingPct: l.lot.moistureAtBalingPct, storage: l.lot.storage, nscFlag: l.evaluation?.nscFlag ?? null };
+    return l ? cautionInputOf(l) : null;
   });
   protected readonly pdfUrl = computed(() => {
     const url = this.view()?.lot.analysis?.reportFile?.url;

@@ -9,8 +9,10 @@ import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { catchError, map, of, switchMap } from 'rxjs';
+import { NITRATE_TEST_PROMPT, nitrateTestAdvised } from '@shared/forage/nitrate';
 import { FEEDING_METHODS, type FeedingMethod, WASTE_ALLOWANCES } from '@shared/planner/feeding-methods';
 import { HerdNeedsRequestSchema, planHerdNeeds } from '@shared/planner/herd-needs';
+import { SORGHUM_TYPE_FORAGES } from '@shared/safety/lot-cautions';
 import { fieldName, type GroupDraft, herdRequest, HORSE_CLASS_OPTIONS, newGroup } from './herd-draft';
 import { HerdResults } from './herd-results';
 import { PlannerApi } from './planner-api';
@@ -65,6 +67,12 @@ export class PlannerPage {
   /** The herd without a lot, for the purchase plan (the plan chooses lots itself). */
   protected readonly herdForPurchase = computed(() => (this.checked().plan ? this.checked().request : null));
   protected readonly waste = computed(() => WASTE_ALLOWANCES[this.feedingMethod()]);
+  /** Small-grain and sorghum-type hays: the nitrate prompt (and the sorghum warning) beside the chosen lot. */
+  protected readonly lotHazards = computed(() => {
+    const lot = this.lot();
+    if (!lot || !nitrateTestAdvised({ forageType: lot.forageType })) return null;
+    return { nitrate: NITRATE_TEST_PROMPT, sorghum: SORGHUM_TYPE_FORAGES.has(lot.forageType) };
+  });
   /** Answers come in the unit the herd was entered in. */
   protected readonly unit = computed(() => readerUnit(this.groups()));
 

@@ -1,7 +1,8 @@
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
 import type { LotAnalysisView, LotDetail } from '@shared/contracts/lots';
-import { afgcGradeRule, type ForageEvaluation, type Nutrients, usdaGradeRule } from '@shared/forage';
+import { afgcGradeRule, type ForageEvaluation, nitrateNPpm, type Nutrients, usdaGradeRule, VISUAL_MOULD_LABELS } from '@shared/forage';
 import { lotCautions } from '@shared/safety/lot-cautions';
 import { fixed } from '../format';
 import { FeedValueScale } from './figures/feed-value-scale';
@@ -28,7 +29,7 @@ const NUTRIENT_ROWS: [keyof Nutrients, string][] = [
 /** The lab analysis on dry-matter and as-fed bases, the computed indices, grades, findings and cautions. */
 @Component({
   selector: 'app-lot-analysis-panel',
-  imports: [NscGauge, FeedValueScale, GradeBands, GradeMark],
+  imports: [DecimalPipe, NscGauge, FeedValueScale, GradeBands, GradeMark],
   templateUrl: './lot-analysis-panel.html',
   styleUrl: './lot-analysis-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -53,6 +54,8 @@ export class LotAnalysisPanel {
       storage: lot.storage,
       nscFlag: this.evaluation().nscFlag,
       dryMatterPct: this.analysis().dryMatterPct,
+      forageType: lot.forageType,
+      nitrateTested: this.analysis().nitrateNo3PctDm !== null,
     });
   });
   protected readonly usdaRule = computed(() => usdaGradeRule(this.evaluation().grades.usda));
@@ -69,4 +72,6 @@ export class LotAnalysisPanel {
   protected readonly nscFlags = NSC_FLAG_TEXT;
   protected readonly corePositions = CORE_POSITION_LABELS;
   protected readonly fixed = fixed;
+  protected readonly mouldLabels = VISUAL_MOULD_LABELS;
+  protected readonly nitrateN = nitrateNPpm;
 }

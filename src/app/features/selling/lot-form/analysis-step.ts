@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, DestroyRef, effect, inject, input, output, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, inject, input, output, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -12,7 +12,8 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { catchError, debounceTime, firstValueFrom, last, of, switchMap, tap } from 'rxjs';
 import { readAnalysisCsv } from '@shared/contracts/analysis-csv';
 import type { EditableLot } from '@shared/contracts/selling';
-import { ForageEvaluationRequestSchema, type ForageEvaluation } from '@shared/forage';
+import { ForageEvaluationRequestSchema, type ForageEvaluation, NITRATE_TEST_PROMPT, nitrateTestAdvised } from '@shared/forage';
+import { VISUAL_MOULD_LABELS, VISUAL_MOULD_SCORES, type VisualMouldScore } from '@shared/forage/mould-scores';
 import { apiErrorMessage } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 import { AnalysisPreview } from './analysis-preview';
@@ -34,9 +35,18 @@ export const VALUE_FIELDS = [
   ['phosphorusPct', 'Phosphorus', false],
   ['moisturePct', 'Moisture (checks DM)', false],
   ['reportedRfv', 'RFV printed on report', false],
-  ['nitrateNo3PctDm', 'Nitrate, % of DM (ppm nitrate-N × 0.000443)', false],
 ] as const;
-type ValueField = (typeof VALUE_FIELDS)[number][0];
+
+/** Optional safety results, each in the unit labs print it in: [control, label, unit]. */
+export const SAFETY_FIELDS = [
+  ['nitrateNo3PctDm', 'Nitrate, % of DM (ppm nitrate-N × 0.000443)', '%'],
+  ['mouldCfuPerG', 'Mould count', 'CFU/g'],
+  ['aflatoxinPpb', 'Aflatoxin', 'ppb'],
+  ['donPpm', 'DON (vomitoxin)', 'ppm'],
+  ['fumonisinPpm', 'Fumonisin', 'ppm'],
+] as const;
+type ValueField = (typeof VALUE_FIELDS)[number][0] | (typeof SAFETY_FIELDS)[number][0];
+const NUMBER_FIELDS: readonly ValueField[] = [...VALUE_FIELDS.map(([f]) => f), ...SAFETY_FIELDS.map(([f]) => f)];
 
 /** Step 4: the lab's report — who, when, how — its values with a live preview of the engine's figures, and the PDF. */
 @Component({
@@ -52,6 +62,10 @@ export class AnalysisStep {
   readonly saved = output<EditableLot>();
 
   protected readonly fields = VALUE_FIELDS;
+  protected readonly safetyFields = SAFETY_FIELDS;
+  protected readonly mouldScores = VISUAL_MOULD_SCORES.map((value) => ({ value, label: VISUAL_MOULD_LABELS[value] }));
+  /** Small-grain and sorghum-type hays get the nitrate prompt beside the nitrate field. */
+  protected readonly nitratePrompt = computed(() => (nitrateTestAdvised({ forageType: this.lot().lot?.forageType ?? '' }) ? NITRATE_TEST_PROMPT : null));
   protected readonly templateUrl = this.api.templateUrl;
   protected readonly saving = new StepSave();
   protected readonly preview = signal<ForageEvaluation | null>(null);
@@ -70,7 +84,10 @@ export class AnalysisStep {
     reportDate: ['', Validators.required],
     method: ['nirs' as 'nirs' | 'wet_chemistry'],
     basis: ['dm' as 'dm' | 'asFed'],
-    values: this.fb.group(Object.fromEntries(VALUE_FIELDS.map(([f]) => [f, '' as number | string])) as Record<ValueField, number | string>),
+    values: this.fb.group({
+      ...(Object.fromEntries(NUMBER_FIELDS.map((f) => [f, '' as number | string])) as Record<ValueField, number | string>),
+      visualMouldScore: '' as VisualMouldScore | '',
+    }),
   });
 
   constructor() {
@@ -102,18 +119,19 @@ export class AnalysisStep {
       .subscribe((evaluation) => this.preview.set(evaluation));
   }
 
-  private emptyValues(): Record<ValueField, number | string> {
-    return Object.fromEntries(VALUE_FIELDS.map(([f]) => [f, ''])) as Record<ValueField, string>;
+  private emptyValues(): Record<ValueField, number | string> & { visualMouldScore: VisualMouldScore | '' } {
+    return { ...(Object.fromEntries(NUMBER_FIELDS.map((f) => [f, ''])) as Record<ValueField, string>), visualMouldScore: '' };
   }
 
   /** The engine request for what is typed: empty optional values are left out. */
   private request(): Record<string, unknown> {
     const v = this.form.getRawValue();
     const values: Record<string, unknown> = { forageClass: this.lot().forageClass, basis: v.basis };
-    for (const [field] of VALUE_FIELDS) {
+    for (const field of NUMBER_FIELDS) {
       const n = numberOrNull(v.values[field]);
       if (n !== null) values[field] = n;
     }
+    if (v.values.visualMouldScore) values['visualMouldScore'] = v.values.visualMouldScore;
     return values;
   }
 

@@ -6,6 +6,7 @@ import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/fo
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { FORAGE_TYPE_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
+import type { ForageType } from '@shared/contracts/lots';
 import { defaultLotTitle, FORAGE_CLASS_OF, type EditableLot } from '@shared/contracts/selling';
 import { CautionsList } from '../ui/cautions-list';
 import { SellingApi } from '../selling-api';
@@ -85,6 +86,8 @@ export class LotStep {
       moistureAtBalingPct: numberOrNull(v.moistureAtBalingPct),
       storage: (v.storage ?? 'barn') as 'barn',
       nscFlag: this.lot()?.evaluation?.nscFlag ?? null,
+      forageType: (v.forageType ?? null) as ForageType | null,
+      nitrateTested: this.lot()?.analysis?.values['nitrateNo3PctDm'] !== undefined,
     };
   });
 

@@ -5,7 +5,7 @@ import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { EditableLot } from '@shared/contracts/selling';
 import { fixed } from '../../catalogue/format';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
-import { CautionsList } from '../ui/cautions-list';
+import { cautionInputOf, CautionsList } from '../ui/cautions-list';
 import { FindingsList } from '../ui/findings-list';
 import { SellingApi } from '../selling-api';
 import { AnalysisPreview } from './analysis-preview';
@@ -78,11 +78,7 @@ export class ReviewStep {
   protected readonly forage = FORAGE_TYPE_LABELS;
   protected readonly bales = BALE_TYPE_LABELS;
   protected readonly fixed = fixed;
-  protected readonly cautionInput = computed(() => {
-    const l = this.lot();
-    if (!l.lot || !l.quantity) return null;
-    return { forageClass: l.forageClass, baleType: l.quantity.baleType, moistureAtBalingPct: l.lot.moistureAtBalingPct, storage: l.lot.storage, nscFlag: l.evaluation?.nscFlag ?? null };
-  });
+  protected readonly cautionInput = computed(() => cautionInputOf(this.lot()));
 
   protected async submit(): Promise<void> {
     const lot = await this.saving.run(this.api.act(this.lot().id, 'submit'));

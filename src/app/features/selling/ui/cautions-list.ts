@@ -1,5 +1,20 @@
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import type { EditableLot } from '@shared/contracts/selling';
 import { growerCautions, lotCautions, type CautionInput } from '@shared/safety/lot-cautions';
+
+/** What the cautions need from a saved lot; null until its lot and quantity steps are saved. */
+export function cautionInputOf(l: EditableLot): CautionInput | null {
+  if (!l.lot || !l.quantity) return null;
+  return {
+    forageClass: l.forageClass,
+    baleType: l.quantity.baleType,
+    moistureAtBalingPct: l.lot.moistureAtBalingPct,
+    storage: l.lot.storage,
+    nscFlag: l.evaluation?.nscFlag ?? null,
+    forageType: l.lot.forageType,
+    nitrateTested: l.analysis?.values['nitrateNo3PctDm'] !== undefined,
+  };
+}
 
 /** Storage and feeding cautions for a lot, written for its buyers or for its grower; each defers to a professional or local guidance. */
 @Component({
