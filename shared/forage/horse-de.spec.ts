@@ -1,4 +1,4 @@
-import { horseDeFromTdn, horseDeNrc2007, horseDigestibleEnergy, LB_PER_KG, nscByDifference } from './horse-de';
+import { horseDeFromTdn, horseDeNrc2007, horseDigestibleEnergy, nscByDifference } from './horse-de';
 import { tdnFromAdf } from './tdn';
 
 // Worked hays from domain brief §3/§7. The alfalfa's ADF (30) is implied by its TDN-route figure (western TDN 59.8 → 2.6).
@@ -29,19 +29,22 @@ describe('horse-de', () => {
     expect(round1(horseDeNrc2007(grass) * 10)).toBe(21);
   });
 
-  it('reports DE per kg and per lb on DM and as-fed bases', () => {
+  // The worked grass hay gives 2.10 Mcal/kg DM (domain brief §7). Per lb: × 0.453 592 37 kg/lb (NIST Handbook 44)
+  // = 0.953 Mcal/lb DM; as fed at 88 % DM: 1.848 Mcal/kg and 0.838 Mcal/lb, by hand.
+  it('reports DE per kg and per lb on DM and as-fed bases (worked grass hay, NIST lb)', () => {
     const de = horseDigestibleEnergy({ ...grass, tdnPct: 59.9, dryMatterPct: 88 });
     expect(de.method).toBe('nrc-2007-pagan');
-    expect(de.mcalPerKgDm).toBeCloseTo(horseDeNrc2007(grass), 12);
-    expect(de.mcalPerLbDm).toBeCloseTo(de.mcalPerKgDm / LB_PER_KG, 12);
-    expect(de.mcalPerKgAsFed).toBeCloseTo(de.mcalPerKgDm * 0.88, 12);
-    expect(de.mcalPerLbAsFed).toBeCloseTo(de.mcalPerKgDm * 0.88 / 2.2046, 12);
+    expect(de.mcalPerKgDm).toBeCloseTo(2.1, 1);
+    expect(de.mcalPerLbDm).toBeCloseTo(0.953, 2);
+    expect(de.mcalPerKgAsFed).toBeCloseTo(1.848, 2);
+    expect(de.mcalPerLbAsFed).toBeCloseTo(0.838, 2);
   });
 
   it('falls back to the TDN approximation when fat or ash is missing', () => {
     const de = horseDigestibleEnergy({ ...grass, fatPct: null, tdnPct: 56.0775, dryMatterPct: 100 });
     expect(de.method).toBe('tdn-approximation');
-    expect(de.mcalPerKgDm).toBeCloseTo(0.044 * 56.0775, 12);
+    // NRC (1989, 2001): 1 kg of TDN holds 4.409 Mcal of DE, so TDN 56.08 % ≈ 2.47 Mcal/kg DM.
+    expect(de.mcalPerKgDm).toBeCloseTo(2.47, 1);
   });
 
   // Source: domain brief §7 — reject any analysis where CP + NDF + EE + ash > 100 for this equation.

@@ -1,10 +1,10 @@
 import { ZodError } from 'zod';
-import { KG_PER_SHORT_TON } from '../units/mass';
 import { planHerdNeeds } from './herd-needs';
 import { type CandidateLot, leastCostPlan, LeastCostPlanRequestSchema, needsFromHerdPlan } from './least-cost-plan';
 
 /** kg of dry matter per short ton as-fed at a DM %. */
-const dmPerTon = (dmPct: number) => KG_PER_SHORT_TON * (dmPct / 100);
+// 1 short ton = 907.184 74 kg (NIST Handbook 44, Appendix C); the app's 2,000 lb ÷ 2.2046 differs by 0.001 %.
+const dmPerTon = (dmPct: number) => 907.18474 * (dmPct / 100);
 
 const lot = (overrides: Partial<CandidateLot> & Pick<CandidateLot, 'lotId'>): CandidateLot => ({
   pricePerTonCents: 20000,

@@ -1,5 +1,9 @@
 import fc from 'fast-check';
-import { boundingBox, EARTH_RADIUS_MI, haversineMiles, type LatLon } from './distance';
+import { boundingBox, haversineMiles, type LatLon } from './distance';
+
+// IUGG mean Earth radius 6,371.0088 km; 1 mi = 1.609 344 km exactly (NIST) → 3,958.76 mi. On it one degree of a great
+// circle is 69.09 mi, a quarter circle 6,218.4 mi and half 12,436.8 mi.
+const MEAN_RADIUS_MI = 6371.0088 / 1.609344;
 
 const point = fc.record({ lat: fc.double({ min: -90, max: 90, noNaN: true }), lon: fc.double({ min: -180, max: 180, noNaN: true }) });
 
@@ -8,10 +12,10 @@ describe('haversineMiles', () => {
     expect(haversineMiles({ lat: 39.1, lon: -94.6 }, { lat: 39.1, lon: -94.6 })).toBe(0);
   });
 
-  it('gives one degree of latitude ≈ 69.1 mi and a quarter of the equator ≈ 6,218 mi on a 3,958.8 mi sphere', () => {
-    expect(haversineMiles({ lat: 0, lon: 0 }, { lat: 1, lon: 0 })).toBeCloseTo((2 * Math.PI * EARTH_RADIUS_MI) / 360, 9);
-    expect(haversineMiles({ lat: 0, lon: 0 }, { lat: 0, lon: 90 })).toBeCloseTo((Math.PI / 2) * EARTH_RADIUS_MI, 9);
-    expect(haversineMiles({ lat: 90, lon: 0 }, { lat: -90, lon: 0 })).toBeCloseTo(Math.PI * EARTH_RADIUS_MI, 9);
+  it('gives one degree of latitude ≈ 69.09 mi, a quarter of the equator ≈ 6,218 mi and pole to pole ≈ 12,437 mi (IUGG mean radius)', () => {
+    expect(haversineMiles({ lat: 0, lon: 0 }, { lat: 1, lon: 0 })).toBeCloseTo(69.09, 1);
+    expect(haversineMiles({ lat: 0, lon: 0 }, { lat: 0, lon: 90 })).toBeCloseTo(6218.4, 0);
+    expect(haversineMiles({ lat: 90, lon: 0 }, { lat: -90, lon: 0 })).toBeCloseTo(12436.8, 0);
   });
 
   it('puts LAX–JFK at about 2,470 mi (commonly quoted ≈2,475 mi great-circle; from memory, within 1 %)', () => {
@@ -21,7 +25,7 @@ describe('haversineMiles', () => {
   });
 
   it('crosses the antimeridian the short way', () => {
-    expect(haversineMiles({ lat: 0, lon: 179.5 }, { lat: 0, lon: -179.5 })).toBeCloseTo((2 * Math.PI * EARTH_RADIUS_MI) / 360, 6);
+    expect(haversineMiles({ lat: 0, lon: 179.5 }, { lat: 0, lon: -179.5 })).toBeCloseTo(69.09, 1);
   });
 
   it('is symmetric, non-negative and within half the circumference (property)', () => {
@@ -29,7 +33,7 @@ describe('haversineMiles', () => {
       fc.property(point, point, (a, b) => {
         const d = haversineMiles(a, b);
         expect(d).toBeGreaterThanOrEqual(0);
-        expect(d).toBeLessThanOrEqual(Math.PI * EARTH_RADIUS_MI + 1e-6);
+        expect(d).toBeLessThanOrEqual(12437.5);
         expect(haversineMiles(b, a)).toBeCloseTo(d, 6);
       }),
     );
@@ -54,10 +58,10 @@ describe('haversineMiles', () => {
 describe('boundingBox', () => {
   const inside = (box: ReturnType<typeof boundingBox>, p: LatLon) => p.lat >= box.minLat && p.lat <= box.maxLat && p.lon >= box.minLon && p.lon <= box.maxLon;
 
-  it('spans the radius north and south: 69.1 mi is one degree of latitude on a 3,958.8 mi sphere', () => {
-    const box = boundingBox({ lat: 39, lon: -96 }, (2 * Math.PI * EARTH_RADIUS_MI) / 360);
-    expect(box.minLat).toBeCloseTo(38, 6);
-    expect(box.maxLat).toBeCloseTo(40, 6);
+  it('spans the radius north and south: 69.09 mi is one degree of latitude (IUGG mean radius)', () => {
+    const box = boundingBox({ lat: 39, lon: -96 }, 69.09);
+    expect(box.minLat).toBeCloseTo(38, 2);
+    expect(box.maxLat).toBeCloseTo(40, 2);
   });
 
   it('at the equator spans the same angle east and west as north and south', () => {
@@ -87,7 +91,7 @@ describe('boundingBox', () => {
         fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
         (center, radius, bearing) => {
           // Destination point on the sphere (standard great-circle formula), slightly inside the circle.
-          const d = (radius * 0.999999) / EARTH_RADIUS_MI;
+          const d = (radius * 0.999) / MEAN_RADIUS_MI;
           const la = (center.lat * Math.PI) / 180;
           const lo = (center.lon * Math.PI) / 180;
           const lat2 = Math.asin(Math.sin(la) * Math.cos(d) + Math.cos(la) * Math.sin(d) * Math.cos(bearing));

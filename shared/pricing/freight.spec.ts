@@ -1,8 +1,7 @@
-import { DEFAULT_TONS_PER_LOAD, freightCents, freightPerLoadCents, loadsForTons } from './freight';
+import { freightCents, freightPerLoadCents, loadsForTons } from './freight';
 
 describe('loadsForTons', () => {
   it('defaults to 24 t per load (practice) and rounds loads up', () => {
-    expect(DEFAULT_TONS_PER_LOAD).toBe(24);
     expect(loadsForTons(0)).toBe(0);
     expect(loadsForTons(1)).toBe(1);
     expect(loadsForTons(24)).toBe(1);
