@@ -1,4 +1,4 @@
-import { centsPerTonFromBale, defaultLotTitle, deriveQuantity, PriceStepSchema, QuantityStepSchema } from './selling';
+import { defaultLotTitle, deriveQuantity, PriceStepSchema, QuantityStepSchema } from './selling';
 
 describe('deriveQuantity', () => {
   it('derives tons from bales and weight (tons = bales × lb ÷ 2000, trade convention)', () => {
@@ -17,9 +17,6 @@ describe('deriveQuantity', () => {
 });
 
 describe('price step', () => {
-  it('converts a per-bale price: $12 for a 60 lb bale is $400.00 a ton (domain brief §11)', () => {
-    expect(centsPerTonFromBale(1200, 60)).toBe(40000);
-  });
   it('needs pickup or delivery', () => {
     expect(PriceStepSchema.safeParse({ pricingUnit: 'ton', priceCentsPerTon: 20000, pickupAllowed: false }).success).toBe(false);
   });

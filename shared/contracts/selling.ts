@@ -142,7 +142,7 @@ export function deriveQuantity(q: { baleCount: number | null; avgBaleWeightLb: n
   if (totalTons !== null && avgBaleWeightLb !== null && avgBaleWeightLb > 0) {
     return { baleCount: Math.max(1, Math.round(shortTonsToLb(totalTons) / avgBaleWeightLb)), avgBaleWeightLb, totalTons };
   }
-  if (totalTons !== null && baleCount !== null && baleCount > 0) return { baleCount, avgBaleWeightLb: (totalTons * 2000) / baleCount, totalTons };
+  if (totalTons !== null && baleCount !== null && baleCount > 0) return { baleCount, avgBaleWeightLb: shortTonsToLb(totalTons) / baleCount, totalTons };
   return null;
 }
 
@@ -206,11 +206,6 @@ export const PriceStepSchema = z
     path: ['pickupAllowed'],
   });
 export type PriceStep = z.infer<typeof PriceStepSchema>;
-
-/** Per-ton price from a per-bale price: $/ton = $/bale × 2000 ÷ bale weight in lb (trade convention). */
-export function centsPerTonFromBale(centsPerBale: number, avgBaleWeightLb: number): number {
-  return Math.round((centsPerBale * 2000) / avgBaleWeightLb);
-}
 
 export const PhotoOrderSchema = z
   .object({

@@ -5,6 +5,12 @@ describe('cost per nutrient', () => {
     expect(costPerTonDryMatterCents(40000, 88)).toBeCloseTo(45454.545, 3);
   });
 
+  it('per ton of dry matter leaves the price unchanged at 100 % DM and rejects DM outside (0, 100]', () => {
+    expect(costPerTonDryMatterCents(40000, 100)).toBe(40000);
+    expect(() => costPerTonDryMatterCents(40000, 0)).toThrow(RangeError);
+    expect(() => costPerTonDryMatterCents(40000, 101)).toThrow(RangeError);
+  });
+
   it('per lb of crude protein: $200/t, 88 % DM, 18 % CP → 316.8 lb CP per ton → 63.1 ¢/lb', () => {
     expect(costPerLbCrudeProteinCents(20000, 88, 18)).toBeCloseTo(20000 / 316.8, 9);
   });

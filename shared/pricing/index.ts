@@ -3,3 +3,4 @@ export * from './delivered-price';
 export * from './distance';
 export * from './freight';
 export * from './order-total';
+export * from './price-per-ton';

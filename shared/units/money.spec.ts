@@ -1,10 +1,8 @@
 import fc from 'fast-check';
 import {
-  asFedToDryMatterPerTonCents,
   dollarsToCents,
   centsToDecimalText,
   formatCents,
-  pricePerBaleToPerTonCents,
   roundCents,
 } from './money';
 
@@ -71,27 +69,5 @@ describe('centsToDecimalText', () => {
     expect(centsToDecimalText(123450)).toBe('1234.50');
     expect(centsToDecimalText(5)).toBe('0.05');
     expect(centsToDecimalText(-550)).toBe('-5.50');
-  });
-});
-
-describe('pricePerBaleToPerTonCents', () => {
-  it('gives $400.00/t for $12 per 60 lb bale (domain brief §11 worked example)', () => {
-    expect(pricePerBaleToPerTonCents(1200, 60)).toBe(40000);
-  });
-
-  it('rejects a bale weight that is not positive', () => {
-    expect(() => pricePerBaleToPerTonCents(1200, 0)).toThrow(RangeError);
-  });
-});
-
-describe('asFedToDryMatterPerTonCents', () => {
-  it('gives $454.55/t DM for $400/t as-fed at 88 % DM (domain brief §11: $454.5/t DM)', () => {
-    expect(asFedToDryMatterPerTonCents(40000, 88)).toBe(45455);
-  });
-
-  it('leaves the price unchanged at 100 % DM and rejects DM outside (0, 100]', () => {
-    expect(asFedToDryMatterPerTonCents(40000, 100)).toBe(40000);
-    expect(() => asFedToDryMatterPerTonCents(40000, 0)).toThrow(RangeError);
-    expect(() => asFedToDryMatterPerTonCents(40000, 101)).toThrow(RangeError);
   });
 });

@@ -4,7 +4,6 @@
  * and are rounded only for display.
  */
 
-import { LB_PER_SHORT_TON } from './mass';
 import { roundTo } from './rounding';
 
 /** Integer number of US cents. A plain number, documented rather than branded, so zod output fits. */
@@ -73,34 +72,4 @@ export function centsToDecimalText(cents: Cents): string {
   const whole = roundCents(cents);
   const abs = Math.abs(whole);
   return `${whole < 0 ? '-' : ''}${Math.floor(abs / 100)}.${String(abs % 100).padStart(2, '0')}`;
-}
-
-/**
- * Price per bale → price per short ton, as-fed: $/ton = $/bale × 2000 / bale weight (lb)
- * (domain brief §11). $12 for a 60 lb bale → $400.00/ton.
- *
- * @param pricePerBaleCents cents per bale
- * @param baleWeightLb average bale weight in lb (ideally from a scale ticket), > 0
- * @returns whole cents per short ton as-fed
- */
-export function pricePerBaleToPerTonCents(pricePerBaleCents: Cents, baleWeightLb: number): Cents {
-  if (!(baleWeightLb > 0) || !Number.isFinite(baleWeightLb)) {
-    throw new RangeError(`baleWeightLb must be a positive number; got ${baleWeightLb}`);
-  }
-  return roundCents((pricePerBaleCents * LB_PER_SHORT_TON) / baleWeightLb);
-}
-
-/**
- * Price per ton as-fed → price per ton of dry matter: $/t DM = $/t AF ÷ (DM% / 100)
- * (domain brief §1, §11). $400.00/t AF at 88 % DM → $454.55/t DM.
- *
- * @param pricePerTonAsFedCents cents per short ton as-fed
- * @param dryMatterPct dry matter, percent of as-fed weight, in (0, 100]
- * @returns whole cents per short ton of dry matter
- */
-export function asFedToDryMatterPerTonCents(pricePerTonAsFedCents: Cents, dryMatterPct: number): Cents {
-  if (!(dryMatterPct > 0 && dryMatterPct <= 100)) {
-    throw new RangeError(`dryMatterPct must be in (0, 100]; got ${dryMatterPct}`);
-  }
-  return roundCents(pricePerTonAsFedCents / (dryMatterPct / 100));
 }

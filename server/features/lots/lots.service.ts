@@ -7,7 +7,8 @@ import { farms, labAnalyses, lots, lotSearch, photos, samplingRecords, type Phot
 import { farmDistanceSql, farmWithinSql, locateZip } from '../geo/geo';
 import { evaluationOf } from '../selling/analysis-values';
 import { samplingFactsOf, samplingReportOf } from './sampling-report';
-import { balesToTons } from '@shared/units';
+import { costPerTonDryMatterCents } from '@shared/pricing/cost-per-nutrient';
+import { balesToTons, roundCents } from '@shared/units';
 
 export function photoView(row: { id: number; altText: string; width: number; height: number; isCover: boolean; variants: PhotoVariant[] }): PhotoView {
   return {
@@ -94,7 +95,6 @@ export class LotsService {
         balesAvailable: lots.balesAvailable,
         tonsAvailable: s.tonsAvailable,
         priceCentsPerTon: lots.priceCentsPerTon,
-        priceCentsPerDmTon: s.priceCentsPerDmTon,
         harvestYear: s.harvestYear,
         dryMatterPct: labAnalyses.dryMatterPct,
         rfv: labAnalyses.rfv,
@@ -129,7 +129,7 @@ export class LotsService {
     const items: LotSummary[] = rows.map(({ publishedAt, mapLat, mapLon, ...r }) => ({
       ...r,
       mapPoint: { lat: Number(mapLat), lon: Number(mapLon) },
-      priceCentsPerDmTon: Math.round(r.priceCentsPerDmTon),
+      priceCentsPerDmTon: roundCents(costPerTonDryMatterCents(r.priceCentsPerTon, r.dryMatterPct)),
       distanceMi: r.distanceMi === null ? null : Number(r.distanceMi),
       cover: covers.get(r.id) ?? null,
       publishedAt: publishedAt ? publishedAt.toISOString() : null,

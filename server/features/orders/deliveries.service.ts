@@ -5,6 +5,7 @@ import { checkDeliveryTransition, type DeliveryEvent } from '@shared/lifecycle/d
 import { ORDER_HOLDS_STOCK } from '@shared/lifecycle/order-lifecycle';
 import type { Actor } from '@shared/lifecycle/state-machine';
 import { scaleTicketRefundCents } from '@shared/pricing/order-total';
+import { shortTonsToLb } from '@shared/units/mass';
 import type { ApiDeps } from '../../api-deps';
 import { deliveries, farms, lots, orders, storedFiles, users } from '../../db/schema';
 import { SettingsService } from '../settings/settings.service';
@@ -82,7 +83,7 @@ export class DeliveriesService {
         const now = this.now();
         await tx
           .update(deliveries)
-          .set({ status: to, completedAt: now, updatedAt: now, scaleTicketLb: input.weighedTons ? input.weighedTons * 2000 : null, scaleTicketFileId: fileId })
+          .set({ status: to, completedAt: now, updatedAt: now, scaleTicketLb: input.weighedTons ? shortTonsToLb(input.weighedTons) : null, scaleTicketFileId: fileId })
           .where(eq(deliveries.id, delivery.id));
         await applyOrderEvent(tx, order, 'deliver', { actor: part === 'admin' ? 'admin' : 'grower', actorId: user.id }, now, {
           deliveredAt: now,

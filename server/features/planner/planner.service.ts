@@ -5,7 +5,7 @@ import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '@shared/planner
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { farmDistanceSql, farmWithinSql, locateZip, type ZipPlace } from '../geo/geo';
-import { balesToTons } from '@shared/units';
+import { balesForTons, balesToTons } from '@shared/units';
 
 /** More candidates than this slows the whole-load search without changing realistic plans. */
 export const MAX_PLAN_CANDIDATES = 30;
@@ -89,7 +89,7 @@ export async function planPurchase(db: Db, request: PurchasePlanRequest): Promis
       title: c.title,
       farmName: c.farmName,
       tons: line.tons,
-      bales: Math.min(c.balesAvailable, Math.ceil(Number(((line.tons * 2000) / c.avgBaleWeightLb).toPrecision(12)))),
+      bales: Math.min(c.balesAvailable, balesForTons(line.tons, c.avgBaleWeightLb)),
       loads: line.loads,
       hayCents: line.hayCents,
       freightCents: line.freightCents,

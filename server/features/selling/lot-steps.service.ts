@@ -1,7 +1,6 @@
 import { and, eq, sql } from 'drizzle-orm';
 import {
   type AnalysisStep,
-  centsPerTonFromBale,
   defaultLotTitle,
   deriveQuantity,
   FORAGE_CLASS_OF,
@@ -13,6 +12,7 @@ import {
   stepIndex,
   type LotFormStep,
 } from '@shared/contracts/selling';
+import { listedPricePerTonCents } from '@shared/pricing/price-per-ton';
 import { afterReviewedChange, factsNeedingReview, statusAfterStockChange } from '@shared/lifecycle/lot-lifecycle';
 import { samplingReportOf } from '../lots/sampling-report';
 import type { Clock } from '../../clock';
@@ -77,7 +77,7 @@ export class LotStepsService {
     const firstTime = lot.draftStep < stepIndex('quantity');
     const sold = firstTime ? 0 : lot.baleCount - lot.balesAvailable;
     const balesAvailable = input.balesAvailable ?? Math.max(0, q.baleCount - sold);
-    const perTon = lot.pricingUnit === 'bale' && lot.priceCentsPerBale !== null ? centsPerTonFromBale(lot.priceCentsPerBale, q.avgBaleWeightLb) : lot.priceCentsPerTon;
+    const perTon = listedPricePerTonCents(lot, q.avgBaleWeightLb);
     const shape = { baleType: input.baleType, baleCount: q.baleCount, avgBaleWeightLb: Math.round(q.avgBaleWeightLb * 10) / 10 };
     const needsReview = !firstTime && factsNeedingReview(lot, shape).length > 0;
     const status = statusAfterStockChange(lot.status, balesAvailable);
@@ -139,7 +139,7 @@ export class LotStepsService {
 
   async savePrice(user: Express.User, lotId: number, input: PriceStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'price');
-    const perTon = input.pricingUnit === 'bale' ? centsPerTonFromBale(input.priceCentsPerBale!, lot.avgBaleWeightLb) : input.priceCentsPerTon!;
+    const perTon = listedPricePerTonCents(input, lot.avgBaleWeightLb);
     await this.db
       .update(lots)
       .set({

@@ -6,6 +6,7 @@ import { RouterLink } from '@angular/router';
 import { switchMap, tap } from 'rxjs';
 import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, LOT_STATUS_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
 import type { LotDetail } from '@shared/contracts/lots';
+import { costPerTonDryMatterCents } from '@shared/pricing/cost-per-nutrient';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { cuttingLabel, fixed } from '../format';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
@@ -47,6 +48,11 @@ export class LotPage {
     return s.status === 'error' && isMissing(s.httpStatus) ? 'missing' : s.status;
   });
   protected readonly errorMessage = computed(() => errorOf(this.state()) ?? '');
+  /** The as-fed price per ton of dry matter, as the catalogue card and compare show it. */
+  protected readonly perDmTonCents = computed(() => {
+    const lot = this.lot();
+    return lot?.analysis ? costPerTonDryMatterCents(lot.priceCentsPerTon, lot.analysis.dryMatterPct) : null;
+  });
 
   protected readonly labels = { forage: FORAGE_TYPE_LABELS, bale: BALE_TYPE_LABELS, storage: STORAGE_LABELS, core: CORE_POSITION_LABELS };
   protected readonly fixed = fixed;

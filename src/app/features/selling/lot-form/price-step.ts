@@ -6,7 +6,8 @@ import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatHint, MatLabel, MatPrefix, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
-import { centsPerTonFromBale, type EditableLot } from '@shared/contracts/selling';
+import type { EditableLot } from '@shared/contracts/selling';
+import { pricePerTonFromBaleCents } from '@shared/pricing/price-per-ton';
 import { dollars } from '../../catalogue/format';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave, toCents, toDollars } from './step-save';
@@ -61,7 +62,7 @@ export class PriceStep {
   protected readonly perTonFromBale = computed(() => {
     const cents = toCents(this.value().pricePerBale);
     const weight = this.lot().quantity?.avgBaleWeightLb;
-    return cents && weight ? dollars(centsPerTonFromBale(cents, weight), 2) : '—';
+    return cents && weight ? dollars(pricePerTonFromBaleCents(cents, weight), 2) : '—';
   });
 
   constructor() {
