@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, inject, input, OnInit, signal } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID, OnInit, signal } from '@angular/core';
 import { FormControl, ReactiveFormsModule, Validators } from '@angular/forms';
 import { DatePipe } from '@angular/common';
 import { MatButton } from '@angular/material/button';
@@ -13,7 +13,7 @@ import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
 import type { PhotoView } from '@shared/contracts/lots';
 import type { ReviewLotView } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../core/api-error';
-import { fixed } from '../catalogue/format';
+import { inLocale } from '../catalogue/format';
 import { AnalysisPreview } from '../selling/lot-form/analysis-preview';
 import { cautionInputOf, CautionsList } from '../selling/ui/cautions-list';
 import { FindingsList } from '../selling/ui/findings-list';
@@ -50,7 +50,7 @@ export class ReviewLotPage implements OnInit {
   protected readonly reason = new FormControl('', { nonNullable: true, validators: [Validators.required, Validators.minLength(5)] });
   protected readonly statusLabels = STATUS_LABELS;
   protected readonly positions = CORE_POSITION_LABELS;
-  protected readonly fixed = fixed;
+  protected readonly fixed = inLocale(inject(LOCALE_ID)).fixed;
   protected readonly cautionInput = computed(() => {
     const l = this.view()?.lot;
     return l ? cautionInputOf(l) : null;

@@ -1,3 +1,5 @@
+import { registerLocaleData } from '@angular/common';
+import localeFrCa from '@angular/common/locales/fr-CA';
 import type { ComparedLot } from '@shared/contracts/compare';
 import { compareSections } from './compare-rows';
 
@@ -10,6 +12,16 @@ describe('compareSections', () => {
     expect(protein.best).toBe(1);
     const freight = cost.rows.find((r) => r.label === 'Freight')!;
     expect(freight.values[0]).toBe('$1,050 (1 load × 300 mi × $3.50 per loaded mile)');
+  });
+
+  // Unicode CLDR: French (Canada) writes a decimal comma, groups with a no-break space and writes US dollars "$ US" after.
+  it('writes its figures in the reader\'s locale', () => {
+    registerLocaleData(localeFrCa, 'fr-CA');
+    const sections = compareSections([lot(1, 8500, 110.5), lot(2, 9000, 95.25)], 'fr-CA');
+    const protein = sections.find((s) => s.title === 'Cost')!.rows.find((r) => r.label === 'Cost per lb of crude protein')!;
+    expect(protein.values[0]).toMatch(/^1,11[\u00a0\u202f]\$[\u00a0\u202f]US$/);
+    const freight = sections.find((s) => s.title === 'Cost')!.rows.find((r) => r.label === 'Freight')!;
+    expect(freight.values[0]).toMatch(/^1[\u00a0\u202f]050[\u00a0\u202f]\$[\u00a0\u202f]US \(1 load × 300 mi × 3,50[\u00a0\u202f]\$[\u00a0\u202f]US per loaded mile\)$/);
   });
 });
 

@@ -1,6 +1,6 @@
 import type { ComparedLot } from '@shared/contracts/compare';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
-import { dollars, fixed } from '../format';
+import { inLocale } from '../format';
 
 /** One row of the comparison table: a label and a display value per lot; `best` marks the lowest cost. */
 export interface CompareRow {
@@ -15,7 +15,6 @@ export interface CompareSection {
   rows: CompareRow[];
 }
 
-const pct = (v: number | null) => (v === null ? '—' : `${fixed(v)}%`);
 
 function lowest(values: (number | null)[]): number | undefined {
   let best: number | undefined;
@@ -25,13 +24,15 @@ function lowest(values: (number | null)[]): number | undefined {
   return values.length > 1 ? best : undefined;
 }
 
-function costRow(label: string, lots: ComparedLot[], pick: (l: ComparedLot) => number | null, digits: number, hint?: string): CompareRow {
+function costRow(dollars: (cents: number, digits: number) => string, label: string, lots: ComparedLot[], pick: (l: ComparedLot) => number | null, digits: number, hint?: string): CompareRow {
   const raw = lots.map(pick);
   return { label, hint, values: raw.map((v) => (v === null ? '—' : dollars(v, digits))), best: lowest(raw) };
 }
 
 /** The table's sections, built once per comparison. Nutrients are % of dry matter. */
-export function compareSections(lots: ComparedLot[]): CompareSection[] {
+export function compareSections(lots: ComparedLot[], locale = 'en-US'): CompareSection[] {
+  const { fixed, dollars } = inLocale(locale);
+  const pct = (v: number | null) => (v === null ? '—' : `${fixed(v)}%`);
   const row = (label: string, pick: (l: ComparedLot) => string, hint?: string): CompareRow => ({ label, hint, values: lots.map(pick) });
   return [
     {
@@ -66,16 +67,16 @@ export function compareSections(lots: ComparedLot[]): CompareSection[] {
     {
       title: 'Cost',
       rows: [
-        costRow('Price per ton at the farm', lots, (l) => l.priceCentsPerTon, 0, 'as-fed'),
+        costRow(dollars, 'Price per ton at the farm', lots, (l) => l.priceCentsPerTon, 0, 'as-fed'),
         row('Freight', (l) =>
           l.pricing.basis === 'delivered'
             ? `${dollars(l.pricing.freightCents)} (${l.pricing.loads} ${l.pricing.loads === 1 ? 'load' : 'loads'} × ${fixed(l.distanceMi, 0)} mi × ${dollars(l.freightCentsPerLoadedMile, 2)} per loaded mile)`
             : 'not included',
         ),
-        costRow('Price per ton delivered', lots, (l) => (l.pricing.basis === 'delivered' ? l.pricing.perTonCents : null), 0, 'as-fed, freight spread over the tons priced'),
-        costRow('Cost per ton of dry matter', lots, (l) => l.pricing.perDmTonCents, 0),
-        costRow('Cost per lb of crude protein', lots, (l) => l.pricing.perLbCrudeProteinCents, 2),
-        costRow('Cost per Mcal of horse DE', lots, (l) => l.pricing.perMcalDeCents, 3),
+        costRow(dollars, 'Price per ton delivered', lots, (l) => (l.pricing.basis === 'delivered' ? l.pricing.perTonCents : null), 0, 'as-fed, freight spread over the tons priced'),
+        costRow(dollars, 'Cost per ton of dry matter', lots, (l) => l.pricing.perDmTonCents, 0),
+        costRow(dollars, 'Cost per lb of crude protein', lots, (l) => l.pricing.perLbCrudeProteinCents, 2),
+        costRow(dollars, 'Cost per Mcal of horse DE', lots, (l) => l.pricing.perMcalDeCents, 3),
       ],
     },
   ];

@@ -1,4 +1,4 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject, LOCALE_ID } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -29,6 +29,7 @@ export class LotComparePage {
   private readonly route = inject(ActivatedRoute);
   private readonly router = inject(Router);
   private readonly selection = inject(CompareSelection);
+  private readonly locale = inject(LOCALE_ID);
 
   protected readonly params = toSignal(this.route.queryParamMap.pipe(map((p) => ({ ids: p.get('ids') ?? '', zip: p.get('zip') ?? '', tons: p.get('tons') ?? '' }))), {
     initialValue: { ids: '', zip: '', tons: '' },
@@ -53,7 +54,7 @@ export class LotComparePage {
 
   protected readonly result = computed(() => valueOf(this.state()));
   protected readonly error = computed(() => errorOf(this.state()));
-  protected readonly sections = computed(() => compareSections(this.result()?.items ?? []));
+  protected readonly sections = computed(() => compareSections(this.result()?.items ?? [], this.locale));
   protected readonly chartLots = computed(() => (this.result()?.items ?? []).map((l) => l.title));
   /** For horses: more protein, energy and feed value is better; more fibre and more sugar + starch is worse. */
   protected readonly chartRows = computed<StripRow[]>(() => {

@@ -1,10 +1,10 @@
 import { DecimalPipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID } from '@angular/core';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
 import type { LotAnalysisView, LotDetail } from '@shared/contracts/lots';
 import { afgcGradeRule, type ForageEvaluation, nitrateNPpm, type Nutrients, usdaGradeRule, VISUAL_MOULD_LABELS } from '@shared/forage';
 import { lotCautions } from '@shared/safety/lot-cautions';
-import { fixed } from '../format';
+import { inLocale } from '../format';
 import { FeedValueScale } from './figures/feed-value-scale';
 import { GradeBands } from './figures/grade-bands';
 import { NscGauge } from './figures/nsc-gauge';
@@ -71,7 +71,7 @@ export class LotAnalysisPanel {
   protected readonly nscMethods = NSC_METHOD_LABELS;
   protected readonly nscFlags = NSC_FLAG_TEXT;
   protected readonly corePositions = CORE_POSITION_LABELS;
-  protected readonly fixed = fixed;
+  protected readonly fixed = inLocale(inject(LOCALE_ID)).fixed;
   protected readonly mouldLabels = VISUAL_MOULD_LABELS;
   protected readonly nitrateN = nitrateNPpm;
 }

@@ -1,5 +1,5 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input, RESPONSE_INIT } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID, RESPONSE_INIT } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
@@ -8,7 +8,7 @@ import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, LOT_STATUS_
 import type { LotDetail } from '@shared/contracts/lots';
 import { costPerTonDryMatterCents } from '@shared/pricing/cost-per-nutrient';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
-import { cuttingLabel, fixed } from '../format';
+import { cuttingLabel, inLocale } from '../format';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { LotsApi } from '../lots-api';
 import { LotGallery } from './lot-gallery';
@@ -55,7 +55,7 @@ export class LotPage {
   });
 
   protected readonly labels = { forage: FORAGE_TYPE_LABELS, bale: BALE_TYPE_LABELS, storage: STORAGE_LABELS, core: CORE_POSITION_LABELS };
-  protected readonly fixed = fixed;
+  protected readonly fixed = inLocale(inject(LOCALE_ID)).fixed;
   protected readonly cutting = cuttingLabel;
   protected readonly statusLabels = LOT_STATUS_LABELS;
 }

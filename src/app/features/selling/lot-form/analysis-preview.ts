@@ -1,6 +1,6 @@
-import { ChangeDetectionStrategy, Component, input } from '@angular/core';
+import { ChangeDetectionStrategy, Component, inject, input, LOCALE_ID } from '@angular/core';
 import type { ForageEvaluation } from '@shared/forage';
-import { fixed } from '../../catalogue/format';
+import { inLocale } from '../../catalogue/format';
 import { FindingsList } from '../ui/findings-list';
 import { GradeMark } from '../../../shared/ui/grade-mark';
 
@@ -38,5 +38,5 @@ import { GradeMark } from '../../../shared/ui/grade-mark';
 export class AnalysisPreview {
   readonly evaluation = input<ForageEvaluation | null>(null);
   readonly note = input('');
-  protected readonly fixed = fixed;
+  protected readonly fixed = inLocale(inject(LOCALE_ID)).fixed;
 }

@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, LOCALE_ID, output } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -8,7 +8,7 @@ import { MatInput } from '@angular/material/input';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import type { EditableLot } from '@shared/contracts/selling';
 import { pricePerTonFromBaleCents } from '@shared/pricing/price-per-ton';
-import { dollars } from '../../catalogue/format';
+import { inLocale } from '../../catalogue/format';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave, toCents, toDollars } from './step-save';
 
@@ -45,6 +45,7 @@ import { numberOrNull, StepSave, toCents, toDollars } from './step-save';
 })
 export class PriceStep {
   private readonly api = inject(SellingApi);
+  private readonly dollars = inLocale(inject(LOCALE_ID)).dollars;
   readonly lot = input.required<EditableLot>();
   readonly saved = output<EditableLot>();
 
@@ -62,7 +63,7 @@ export class PriceStep {
   protected readonly perTonFromBale = computed(() => {
     const cents = toCents(this.value().pricePerBale);
     const weight = this.lot().quantity?.avgBaleWeightLb;
-    return cents && weight ? dollars(pricePerTonFromBaleCents(cents, weight), 2) : '—';
+    return cents && weight ? this.dollars(pricePerTonFromBaleCents(cents, weight), 2) : '—';
   });
 
   constructor() {

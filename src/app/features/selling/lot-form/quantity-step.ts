@@ -1,4 +1,4 @@
-import { ChangeDetectionStrategy, Component, computed, effect, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, effect, inject, input, LOCALE_ID, output } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -7,7 +7,7 @@ import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { BALE_TYPE_LABELS } from '@shared/contracts/labels';
 import { deriveQuantity, type EditableLot } from '@shared/contracts/selling';
-import { fixed } from '../../catalogue/format';
+import { inLocale } from '../../catalogue/format';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave } from './step-save';
 
@@ -63,7 +63,7 @@ export class QuantityStep {
   readonly saved = output<EditableLot>();
 
   protected readonly baleTypes = Object.entries(BALE_TYPE_LABELS);
-  protected readonly fixed = fixed;
+  protected readonly fixed = inLocale(inject(LOCALE_ID)).fixed;
   protected readonly saving = new StepSave();
   protected readonly form = inject(FormBuilder).nonNullable.group({
     baleType: ['small_square_2_string', Validators.required],

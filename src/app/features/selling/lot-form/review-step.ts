@@ -1,9 +1,9 @@
 import { DatePipe } from '@angular/common';
-import { ChangeDetectionStrategy, Component, computed, inject, input, output } from '@angular/core';
+import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID, output } from '@angular/core';
 import { MatButton } from '@angular/material/button';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { EditableLot } from '@shared/contracts/selling';
-import { fixed } from '../../catalogue/format';
+import { inLocale } from '../../catalogue/format';
 import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { cautionInputOf, CautionsList } from '../ui/cautions-list';
 import { FindingsList } from '../ui/findings-list';
@@ -77,7 +77,7 @@ export class ReviewStep {
   protected readonly saving = new StepSave();
   protected readonly forage = FORAGE_TYPE_LABELS;
   protected readonly bales = BALE_TYPE_LABELS;
-  protected readonly fixed = fixed;
+  protected readonly fixed = inLocale(inject(LOCALE_ID)).fixed;
   protected readonly cautionInput = computed(() => cautionInputOf(this.lot()));
 
   protected async submit(): Promise<void> {
