@@ -1,4 +1,5 @@
 import type { BaleType, ForageType } from '@shared/contracts/lots';
+import type { ForageClass } from '@shared/contracts/enums';
 
 /*
  * The demo scenario. Everything here is invented for demonstration: the "Cottonwood Basin" region,
@@ -96,7 +97,7 @@ export const DEMO_LABS = ['Sandhill Forage Analytics (demo)', 'Riverbend Feed La
 /** Plausible DM-basis ranges per forage for the invented analyses (common practice, rounded). */
 export interface ForageProfile {
   forageType: ForageType;
-  forageClass: 'legume' | 'grass' | 'mixed';
+  forageClass: ForageClass;
   cp: [number, number];
   adf: [number, number];
   ndf: [number, number];

@@ -1,3 +1,4 @@
+import type { CorePosition, StorageKind } from './enums';
 import type { BaleType, ForageType } from './lots';
 
 /** Display names for the trade's own terms. */
@@ -30,7 +31,7 @@ export const BALE_TYPE_LABELS: Record<BaleType, string> = {
   round_5x6: 'Round 5×6 ft',
 };
 
-export const STORAGE_LABELS = { barn: 'In a barn', tarped: 'Stacked under tarps', outside: 'Outside, uncovered' } as const;
+export const STORAGE_LABELS = { barn: 'In a barn', tarped: 'Stacked under tarps', outside: 'Outside, uncovered' } as const satisfies Record<StorageKind, string>;
 
 export const CORE_POSITION_LABELS = {
   'butt-end-centre': 'Centre of the bale end',
@@ -38,7 +39,7 @@ export const CORE_POSITION_LABELS = {
   'round-flat-end': 'Flat end of round bale',
   'bale-side': 'Side of square bale',
   grab: 'Grab sample (by hand)',
-} as const;
+} as const satisfies Record<CorePosition, string>;
 
 /**
  * What each lot state is called, everywhere (grower, buyer, reviewer). Our own words for what the state means,

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { singleLineText } from './text';
 import type { ForageEvaluation, SamplingEvaluation } from '../forage';
 import type { VisualMouldScore } from '../forage/mould-scores';
+import type { AnalysisMethod, CorePosition, ForageClass, StorageKind, VerificationState } from './enums';
 
 export const FORAGE_TYPES = [
   'alfalfa',
@@ -130,7 +131,7 @@ export interface LotSummary {
   city: string;
   state: string;
   forageType: ForageType;
-  forageClass: 'legume' | 'grass' | 'mixed';
+  forageClass: ForageClass;
   cutting: number;
   baleType: BaleType;
   avgBaleWeightLb: number;
@@ -181,11 +182,11 @@ export interface LotDetail {
   fieldName: string;
   cutting: number;
   forageType: ForageType;
-  forageClass: 'legume' | 'grass' | 'mixed';
+  forageClass: ForageClass;
   mixDescription: string;
   harvestStartedOn: string;
   harvestEndedOn: string;
-  storage: 'barn' | 'tarped' | 'outside';
+  storage: StorageKind;
   moistureAtBalingPct: number | null;
   baleType: BaleType;
   baleCount: number;
@@ -230,9 +231,9 @@ export interface LotAnalysisView {
   labCertified: boolean;
   reportNumber: string;
   reportDate: string;
-  method: 'nirs' | 'wet_chemistry';
+  method: AnalysisMethod;
   enteredBasis: 'dm' | 'asFed';
-  verification: 'pending' | 'verified' | 'rejected';
+  verification: VerificationState;
   hasReportFile: boolean;
   dryMatterPct: number;
   crudeProteinPct: number;
@@ -264,7 +265,7 @@ export interface LotSamplingView {
   balesSampled: number;
   probeDiameterIn: number;
   probeLengthIn: number;
-  corePosition: 'butt-end-centre' | 'round-side' | 'round-flat-end' | 'bale-side' | 'grab';
+  corePosition: CorePosition;
   sampledBy: string;
   compliant: boolean;
 }

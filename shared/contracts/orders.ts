@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { DeliveryStatus } from '../lifecycle/delivery-lifecycle';
 import type { OrderEvent, OrderStatus } from '../lifecycle/order-lifecycle';
+import { DELIVERY_METHODS, type DeliveryMethod } from './enums';
 
 const zip = z.string().trim().regex(/^\d{5}$/, 'Enter a 5-digit ZIP code.');
 const isoDay = z.string().regex(/^\d{4}-\d{2}-\d{2}$/, 'Give the date as YYYY-MM-DD.');
@@ -10,7 +11,7 @@ export const OrderQuoteSchema = z
   .object({
     lotId: z.coerce.number().int().positive('Choose a lot.'),
     bales: z.coerce.number().int('Order whole bales.').positive('Order at least one bale.').max(100_000, 'That is more bales than any lot holds.'),
-    method: z.enum(['pickup', 'delivery'], { message: 'Choose delivery or pickup at the farm.' }),
+    method: z.enum(DELIVERY_METHODS, { message: 'Choose delivery or pickup at the farm.' }),
     deliveryZip: zip.optional(),
   })
   .refine((o) => o.method === 'pickup' || o.deliveryZip !== undefined, { message: 'Give the delivery ZIP code so the freight can be worked out.', path: ['deliveryZip'] });
@@ -27,7 +28,7 @@ export const CreateOrderSchema = z
   .object({
     lotId: z.number().int().positive('Choose a lot.'),
     bales: z.number().int('Order whole bales.').positive('Order at least one bale.').max(100_000, 'That is more bales than any lot holds.'),
-    method: z.enum(['pickup', 'delivery'], { message: 'Choose delivery or pickup at the farm.' }),
+    method: z.enum(DELIVERY_METHODS, { message: 'Choose delivery or pickup at the farm.' }),
     deliveryZip: zip.optional(),
     deliveryAddress: z.string().trim().min(5, 'Give the delivery address.').max(300, 'Use at most 300 characters.').optional(),
     window: WindowSchema.optional(),
@@ -58,7 +59,7 @@ export const ListCheckoutSchema = z
       .min(1, 'The hay list is empty.')
       .max(HAY_LIST_MAX_LOTS, `Check out at most ${HAY_LIST_MAX_LOTS} lots at once.`)
       .refine((lines) => new Set(lines.map((l) => l.lotId)).size === lines.length, 'Each lot once on the list.'),
-    method: z.enum(['pickup', 'delivery'], { message: 'Choose delivery or pickup at the farm.' }),
+    method: z.enum(DELIVERY_METHODS, { message: 'Choose delivery or pickup at the farm.' }),
     deliveryZip: zip.optional(),
     deliveryAddress: z.string().trim().min(5, 'Give the delivery address.').max(300, 'Use at most 300 characters.').optional(),
   })
@@ -109,7 +110,7 @@ export interface OrderTimelineEntry {
 
 export interface DeliveryView {
   id: number;
-  method: 'delivery' | 'pickup';
+  method: DeliveryMethod;
   status: DeliveryStatus;
   windowStart: string;
   windowEnd: string;
@@ -135,7 +136,7 @@ export interface OrderView {
   platformFeeBps: number;
   totalCents: number;
   refundedCents: number;
-  method: 'delivery' | 'pickup';
+  method: DeliveryMethod;
   loads: number;
   deliveryZip: string | null;
   deliveryAddress: string | null;
@@ -192,7 +193,7 @@ export interface CalendarDay {
   deliveryDay: boolean;
   capacityLoads: number;
   bookedLoads: number;
-  orders: { id: number; status: OrderStatus; deliveryStatus: DeliveryStatus; method: 'delivery' | 'pickup'; loads: number; buyerName: string; lotTitle: string; windowStart: string }[];
+  orders: { id: number; status: OrderStatus; deliveryStatus: DeliveryStatus; method: DeliveryMethod; loads: number; buyerName: string; lotTitle: string; windowStart: string }[];
 }
 
 export type { DeliveryStatus, OrderEvent, OrderStatus };

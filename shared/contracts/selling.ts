@@ -6,6 +6,7 @@ import { FORAGE_TYPE_LABELS } from './labels';
 import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetail, type LotStatus, type PhotoView } from './lots';
 import { lbToShortTons, shortTonsToLb } from '../units/mass';
 import { multiLineText, singleLineText } from './text';
+import { ANALYSIS_METHODS, CORE_POSITIONS, STORAGE_KINDS, type ForageClass, type VerificationState } from './enums';
 
 /*
  * Contracts of the grower's side: farm profile, the guided lot form (one schema per step), the
@@ -62,7 +63,7 @@ export type LotFormStep = (typeof LOT_FORM_STEPS)[number];
 export const stepIndex = (step: LotFormStep) => LOT_FORM_STEPS.indexOf(step) + 1;
 
 /** Botanical class follows the forage type (it picks the engine's equations and grade tables). */
-export const FORAGE_CLASS_OF: Record<ForageType, 'legume' | 'grass' | 'mixed'> = {
+export const FORAGE_CLASS_OF: Record<ForageType, ForageClass> = {
   alfalfa: 'legume',
   clover: 'legume',
   timothy: 'grass',
@@ -88,7 +89,7 @@ export const LotStepSchema = z
     mixDescription: text('Mix', 200).default(''),
     harvestStartedOn: isoDate('Harvest start'),
     harvestEndedOn: isoDate('Harvest end'),
-    storage: z.enum(['barn', 'tarped', 'outside'], { message: 'Choose how the hay is stored.' }),
+    storage: z.enum(STORAGE_KINDS, { message: 'Choose how the hay is stored.' }),
     moistureAtBalingPct: number('Moisture at baling', 0, 60, '%').nullable().default(null),
     description: prose('Description', 2000).default(''),
   })
@@ -146,7 +147,6 @@ export function deriveQuantity(q: { baleCount: number | null; avgBaleWeightLb: n
   return null;
 }
 
-export const CORE_POSITIONS = ['butt-end-centre', 'round-side', 'round-flat-end', 'bale-side', 'grab'] as const;
 
 /** The sampling record; bale shape, harvest dates and lot size come from the lot itself. */
 export const SamplingStepSchema = z
@@ -162,7 +162,6 @@ export const SamplingStepSchema = z
   .strict();
 export type SamplingStep = z.infer<typeof SamplingStepSchema>;
 
-export const ANALYSIS_METHODS = ['nirs', 'wet_chemistry'] as const;
 
 /** The lab's report details and the values typed from it (the forage class is taken from the lot). */
 export const AnalysisStepSchema = z
@@ -178,7 +177,7 @@ export const AnalysisStepSchema = z
 export type AnalysisStep = z.infer<typeof AnalysisStepSchema>;
 
 /** The analysis values with the lot's forage class, parsed by the engine's own contract. */
-export function parseAnalysisValues(values: Record<string, unknown>, forageClass: 'legume' | 'grass' | 'mixed') {
+export function parseAnalysisValues(values: Record<string, unknown>, forageClass: ForageClass) {
   const parsed = ForageEvaluationRequestSchema.safeParse({ ...values, forageClass });
   if (parsed.success) return parsed.data;
   // Report paths as the form sends them (`values.adfPct`), so messages land beside their fields.
@@ -234,10 +233,10 @@ export interface EditableLot {
   lot: LotStep | null;
   quantity: (QuantityStep & { baleCount: number; avgBaleWeightLb: number; totalTons: number; balesAvailable: number }) | null;
   sampling: SamplingStep | null;
-  analysis: (Omit<AnalysisStep, 'values'> & { values: Record<string, number | string>; verification: 'pending' | 'verified' | 'rejected'; reportFile: ReportFileView | null }) | null;
+  analysis: (Omit<AnalysisStep, 'values'> & { values: Record<string, number | string>; verification: VerificationState; reportFile: ReportFileView | null }) | null;
   price: PriceStep | null;
   photos: PhotoView[];
-  forageClass: 'legume' | 'grass' | 'mixed';
+  forageClass: ForageClass;
   evaluation: ForageEvaluation | null;
   samplingReport: SamplingEvaluation | null;
   /** What still blocks submission, in words; empty when the lot can be submitted. */

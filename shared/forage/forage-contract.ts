@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { VISUAL_MOULD_SCORES } from './mould-scores';
+import { CORE_POSITIONS, FORAGE_CLASSES, type CorePosition, type ForageClass } from '../contracts/enums';
 
 /**
  * Wire contract of the forage analysis engine: zod schemas for what the server accepts on
@@ -12,8 +13,8 @@ import { VISUAL_MOULD_SCORES } from './mould-scores';
  */
 
 /** Botanical class of the hay: chooses RFQ/TDN equations and the USDA grade table. */
-export const ForageClassSchema = z.enum(['legume', 'grass', 'mixed']);
-export type ForageClass = z.infer<typeof ForageClassSchema>;
+export const ForageClassSchema = z.enum(FORAGE_CLASSES);
+export type { ForageClass };
 
 /** Basis the lab values were entered on: 'dm' = 100% dry matter, 'asFed' = as sampled (with moisture). */
 export const NutrientBasisSchema = z.enum(['dm', 'asFed']);
@@ -267,8 +268,8 @@ export const ForageEvaluationSchema = z.object({
 export type ForageEvaluation = z.infer<typeof ForageEvaluationSchema>;
 
 /** Where the probe entered the bale. */
-export const CorePositionSchema = z.enum(['butt-end-centre', 'round-side', 'round-flat-end', 'bale-side', 'grab']);
-export type CorePosition = z.infer<typeof CorePositionSchema>;
+export const CorePositionSchema = z.enum(CORE_POSITIONS);
+export type { CorePosition };
 
 export const BaleShapeSchema = z.enum(['small-square', 'large-square', 'round']);
 export type BaleShape = z.infer<typeof BaleShapeSchema>;

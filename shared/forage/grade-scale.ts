@@ -1,4 +1,5 @@
 import { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES } from './forage-contract';
+import type { ForageClass } from '../contracts/enums';
 
 /** Which published grade table a grade name belongs to. */
 export type GradeScaleName = 'usda-alfalfa' | 'usda-grass' | 'afgc';
@@ -18,7 +19,7 @@ const SCALES: Record<GradeScaleName, readonly string[]> = {
 };
 
 /** The USDA table a lot is graded on: grass hay on the grass table, legumes and mixes on the alfalfa table. */
-export function usdaScaleFor(forageClass: 'legume' | 'grass' | 'mixed'): GradeScaleName {
+export function usdaScaleFor(forageClass: ForageClass): GradeScaleName {
   return forageClass === 'grass' ? 'usda-grass' : 'usda-alfalfa';
 }
 

@@ -5,6 +5,7 @@ import { balesForTons, balesToTons } from '../units/bales';
 import { LB_PER_SHORT_TON } from '../units/mass';
 import { type Cents, roundCents } from '../units/money';
 import { DEFAULT_TONS_PER_LOAD, freightPerLoadCents } from './freight';
+import type { DeliveryMethod } from '../contracts/enums';
 
 /** The lot's terms that decide a price. */
 export interface LotTerms {
@@ -27,7 +28,7 @@ export interface TruckCapacity {
 
 export interface OrderRequest {
   readonly bales: number;
-  readonly method: 'delivery' | 'pickup';
+  readonly method: DeliveryMethod;
   /** Loaded (one-way) miles from the farm, an estimate; required for delivery. */
   readonly distanceMi: number | null;
 }

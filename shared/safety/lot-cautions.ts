@@ -1,5 +1,6 @@
 import type { BaleType, ForageType } from '../contracts/lots';
 import { NITRATE_TEST_PROMPT, nitrateTestAdvised } from '../forage/nitrate';
+import type { ForageClass, StorageKind } from '../contracts/enums';
 
 /** A safety note shown with a lot; each ends by deferring to a professional or local guidance. */
 export interface Caution {
@@ -26,10 +27,10 @@ export const SAFE_BALING_MOISTURE_PCT: Record<BaleType, number> = {
 };
 
 export interface CautionInput {
-  forageClass: 'legume' | 'grass' | 'mixed';
+  forageClass: ForageClass;
   baleType: BaleType;
   moistureAtBalingPct: number | null;
-  storage: 'barn' | 'tarped' | 'outside';
+  storage: StorageKind;
   nscFlag: 'within-advised-limit' | 'above-strict-limit' | 'above-upper-limit' | null;
   /** Dry matter of the lab sample, % as fed, when known. */
   dryMatterPct?: number | null;

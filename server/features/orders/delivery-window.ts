@@ -2,6 +2,7 @@ import { addDays, differenceInCalendarDays, parseISO } from 'date-fns';
 import type { WindowRequest } from '@shared/contracts/orders';
 import type { farms } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
+import type { DeliveryMethod } from '@shared/contracts/enums';
 
 /** How far ahead a buyer may book: from tomorrow up to this many days. */
 export const BOOKING_HORIZON_DAYS = 60;
@@ -12,7 +13,7 @@ const bad = (message: string, path = 'window.date') => new HttpError(400, 'bad_w
  * The window for a delivery day or a pickup appointment, checked against the grower's calendar. Times are
  * the farm's wall-clock time, kept as UTC instants of the same digits (the farm's zone is not recorded).
  */
-export function windowFor(farm: typeof farms.$inferSelect, method: 'delivery' | 'pickup', request: WindowRequest, now: Date): { start: Date; end: Date } {
+export function windowFor(farm: typeof farms.$inferSelect, method: DeliveryMethod, request: WindowRequest, now: Date): { start: Date; end: Date } {
   const day = parseISO(`${request.date}T00:00:00Z`);
   if (Number.isNaN(day.getTime()) || day.toISOString().slice(0, 10) !== request.date) throw bad('That date does not exist.');
   const ahead = differenceInCalendarDays(day, parseISO(now.toISOString().slice(0, 10) + 'T00:00:00Z'));

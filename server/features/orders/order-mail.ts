@@ -1,5 +1,6 @@
 import { formatCents } from '@shared/units/money';
 import type { OutgoingMail } from '../../adapters/mail/mailer';
+import type { DeliveryMethod } from '@shared/contracts/enums';
 
 /** The facts of an order that every order e-mail repeats. */
 export interface OrderMailFacts {
@@ -10,7 +11,7 @@ export interface OrderMailFacts {
   farmName: string;
   bales: number;
   tons: number;
-  method: 'delivery' | 'pickup';
+  method: DeliveryMethod;
   goodsCents: number;
   freightCents: number;
   platformFeeCents: number;

@@ -12,6 +12,7 @@ import { apiErrorMessage } from '../../core/api-error';
 import { requestState, valueOf, errorOf } from '../../core/request-state';
 import { Session } from '../../core/session';
 import { OrdersApi } from './orders-api';
+import type { DeliveryMethod } from '@shared/contracts/enums';
 
 /** On the lot page: choose a load (bales or tons), delivery or pickup and a day, see every figure, then pay. */
 @Component({
@@ -31,7 +32,7 @@ export class BuyPanel {
   protected readonly bales = signal<number | null>(null);
   protected readonly chosenBales = computed(() => this.bales() ?? this.minBales());
   protected readonly tons = computed(() => balesToTons(Math.max(0, Math.round(this.chosenBales())), this.lot().avgBaleWeightLb));
-  protected readonly method = signal<'delivery' | 'pickup'>('pickup');
+  protected readonly method = signal<DeliveryMethod>('pickup');
   protected readonly zip = signal('');
   protected readonly address = signal('');
   protected readonly date = signal('');

@@ -18,6 +18,7 @@ import { apiErrorMessage } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 import { AnalysisPreview } from './analysis-preview';
 import { numberOrNull, StepSave } from './step-save';
+import type { AnalysisMethod } from '@shared/contracts/enums';
 
 /** Lab values, in form order: [control, label, required]. */
 export const VALUE_FIELDS = [
@@ -82,7 +83,7 @@ export class AnalysisStep {
     labCertified: [false],
     reportNumber: [''],
     reportDate: ['', Validators.required],
-    method: ['nirs' as 'nirs' | 'wet_chemistry'],
+    method: ['nirs' as AnalysisMethod],
     basis: ['dm' as 'dm' | 'asFed'],
     values: this.fb.group({
       ...(Object.fromEntries(NUMBER_FIELDS.map((f) => [f, '' as number | string])) as Record<ValueField, number | string>),

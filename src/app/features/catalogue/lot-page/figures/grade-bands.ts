@@ -2,6 +2,7 @@ import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, input } from '@angular/core';
 import { usdaBandTables, type GradeBandTable } from '@shared/forage/grades';
 import { tdnFromAdf } from '@shared/forage/tdn';
+import type { ForageClass } from '@shared/contracts/enums';
 
 const W = 340;
 const X0 = 6;
@@ -66,7 +67,7 @@ export interface GradedValues {
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class GradeBands {
-  readonly forageClass = input.required<'legume' | 'grass' | 'mixed'>();
+  readonly forageClass = input.required<ForageClass>();
   readonly values = input.required<GradedValues>();
   /** The grade each measure alone gives, as the engine graded it. */
   readonly criteria = input.required<{ criterion: string; name: string }[]>();
