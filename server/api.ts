@@ -4,6 +4,7 @@ import session from 'express-session';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { ApiDeps } from './api-deps';
+import { cookieNames } from '@shared/contracts/cookies';
 import { cookiesAreSecure } from './env';
 import { authRouter, createAuthenticator } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
@@ -24,13 +25,11 @@ import { messagesRouter } from './features/messages/messages.router';
 import { createCsrf } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
 
-export const SESSION_COOKIE = 'baleproof.sid';
-
 /** The session middleware, shared by the API and the server-side renderer (which needs to know the user). */
 export function createSessionMiddleware({ env, db }: Pick<ApiDeps, 'env' | 'db'>) {
   const PgStore = connectPgSimple(session);
   return session({
-    name: SESSION_COOKIE,
+    name: cookieNames(cookiesAreSecure(env)).session,
     secret: env.SESSION_SECRET,
     // Tests open and close many apps on one pool; a prune timer firing after the pool closed would log after
     // the test ended (which fails the Jest run), so expired sessions are pruned only outside tests.
@@ -77,7 +76,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use(csrf.requireToken);
 
   api.use('/health', healthRouter(db));
-  api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, signInIpLimit: env.SIGN_IN_IP_RATE_LIMIT, issueCsrfCookie: csrf.issueCookie }));
+  api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, signInIpLimit: env.SIGN_IN_IP_RATE_LIMIT, csrf, secureCookies: cookiesAreSecure(env) }));
   api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(deps));
   api.use('/admin/payouts', adminPayoutsRouter(deps));

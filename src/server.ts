@@ -10,7 +10,8 @@ import helmet from 'helmet';
 import cluster from 'node:cluster';
 import { availableParallelism } from 'node:os';
 import { join } from 'node:path';
-import { createApi } from '../server/api';
+import { createApi, createSessionMiddleware } from '../server/api';
+import { createAuthenticator } from '../server/features/auth/auth.router';
 import { createAppDeps } from '../server/app-deps';
 import { listenForCatalogueChanges } from '../server/features/catalogue-cache/catalogue-cache';
 import { cachedPages } from '../server/features/catalogue-cache/page-cache';
@@ -35,9 +36,6 @@ app.use('/media', mediaRouter(deps.storage));
 // needs a nonce-based CSP, left for when one is configured.
 app.use(helmet({ contentSecurityPolicy: false }));
 
-// Pages hand out the CSRF cookie too: a server-rendered page may make its first API call a POST.
-app.use(createCsrf(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)).issueCookie);
-
 app.use(
   express.static(browserDistFolder, {
     maxAge: '1y',
@@ -45,6 +43,10 @@ app.use(
     redirect: false,
   }),
 );
+
+// Pages hand out the CSRF cookie too: a server-rendered page may make its first API call a POST. The
+// token is bound to the session, so pages (not static files) read the session first.
+app.use(createSessionMiddleware(deps), createAuthenticator(deps.db).session(), createCsrf(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)).issueCookie);
 
 app.use(cachedPages((req) => angularApp.handle(req), writeResponseToNodeResponse, deps.catalogueCache));
 

@@ -176,6 +176,8 @@ describe('authorization matrix: every API route × every kind of caller', () => 
     const suspended = await signedInUser(t, 'admin');
     // Suspended behind the session's back (no sign-out): every request must still be refused.
     await t.deps.db.update(users).set({ disabledAt: new Date(t.clock.now()), disabledReason: 'matrix test' }).where(eq(users.email, suspended.email));
+    // Its CSRF token was bound to the session that just ended; the next page load hands out a visitor's one.
+    await suspended.agent.get('/auth/me');
     agents = { anonymous: t.agent(), 'suspended admin': suspended.agent, buyer: buyer.agent, 'other buyer': otherBuyer.agent, grower: grower.agent, 'other grower': otherGrower.agent, admin: admin.agent };
 
     const draftLot = await completeLot(grower.agent);
@@ -193,7 +195,7 @@ describe('authorization matrix: every API route × every kind of caller', () => 
     const asked = await buyer.agent.post(`/messages/lots/${listedLot.id}`, { body: 'Is the second cutting still available?' });
     if (asked.status !== 201) throw new Error(`message failed: ${JSON.stringify(asked.body)}`);
     const [thread] = await t.deps.db.select({ id: messageThreads.id }).from(messageThreads).where(eq(messageThreads.buyerId, buyerId));
-    const [saved] = await t.deps.db.insert(savedSearches).values({ userId: buyerId, name: 'Matrix search', query: { forageType: 'alfalfa' } }).returning();
+    const [saved] = await t.deps.db.insert(savedSearches).values({ userId: buyerId, name: 'Matrix search', query: { forageType: 'alfalfa' }, alerts: false }).returning();
     ids = { draftLot, listedLot: listedLot.id, order: order!.id, claim: claim!.id, thread: thread!.id, savedSearch: saved!.id, photo: photo!.id };
   }, 120_000);
   afterAll(() => t.close());

@@ -1,4 +1,4 @@
-import { provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
+import { HttpXsrfTokenExtractor, provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
 import { ApplicationConfig, inject, provideAppInitializer, provideBrowserGlobalErrorListeners } from '@angular/core';
 import { provideClientHydration, withEventReplay } from '@angular/platform-browser';
 import { provideRouter, withComponentInputBinding, withInMemoryScrolling } from '@angular/router';
@@ -7,6 +7,7 @@ import { routes } from './app.routes';
 import { provideReaderLocale } from './core/locale';
 import { Session } from './core/session';
 import { forwardCookiesOnServer } from './core/ssr-cookie-interceptor';
+import { XsrfTokenFromCookie } from './core/xsrf-token';
 
 export const appConfig: ApplicationConfig = {
   providers: [
@@ -14,6 +15,8 @@ export const appConfig: ApplicationConfig = {
     provideReaderLocale,
     provideRouter(routes, withComponentInputBinding(), withInMemoryScrolling({ scrollPositionRestoration: 'enabled' })),
     provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer])),
+    // After provideHttpClient, so it replaces Angular's one-name cookie reader.
+    { provide: HttpXsrfTokenExtractor, useClass: XsrfTokenFromCookie },
     provideClientHydration(withEventReplay()),
     provideAppInitializer(() => {
       inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');

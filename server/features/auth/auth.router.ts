@@ -1,9 +1,11 @@
-import { Router, type Request, type RequestHandler } from 'express';
+import { Router, type Request } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { Passport } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
+import { cookieNames } from '@shared/contracts/cookies';
 import { SignInSchema, SignUpSchema, type SessionUser } from '@shared/contracts/auth';
 import type { Db } from '../../db/client';
+import type { Csrf } from '../../middleware/csrf';
 import { HttpError } from '../../middleware/http-error';
 import { AuthService } from './auth.service';
 
@@ -35,7 +37,7 @@ export function createAuthenticator(db: Db) {
   return passport;
 }
 
-export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit: number; issueCsrfCookie: RequestHandler }): Router {
+export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean }): Router {
   const auth = new AuthService(db);
   const router = Router();
 
@@ -56,7 +58,7 @@ export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit
   const perAddress = failedSignIns(options.signInIpLimit, (req) => `ip:${ipKeyGenerator(req.ip ?? '')}`);
 
   // The app's first call: it also hands out the CSRF cookie for API clients that start here.
-  router.get('/me', options.issueCsrfCookie, (req, res) => {
+  router.get('/me', options.csrf.issueCookie, (req, res) => {
     res.json({ user: req.user ?? null });
   });
 
@@ -64,6 +66,7 @@ export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit
     const input = SignUpSchema.parse(req.body);
     const user = await auth.signUp(input);
     await logIn(req, user);
+    options.csrf.renew(req, res);
     res.status(201).json({ user });
   });
 
@@ -72,13 +75,16 @@ export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit
     const user = await auth.checkCredentials(input);
     if (!user) throw new HttpError(401, 'invalid_credentials', 'E-mail or password is wrong.');
     await logIn(req, user);
+    options.csrf.renew(req, res);
     res.json({ user });
   });
 
   router.post('/sign-out', async (req, res) => {
     await new Promise<void>((resolve, reject) => req.logout((err) => (err ? reject(err) : resolve())));
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
-    res.clearCookie('baleproof.sid', { path: '/' });
+    // A `__Host-` cookie is only replaced by a Set-Cookie with the same Secure and Path attributes.
+    res.clearCookie(cookieNames(options.secureCookies).session, { path: '/', secure: options.secureCookies, httpOnly: true, sameSite: 'lax' });
+    options.csrf.renew(req, res);
     res.status(204).end();
   });
 

@@ -1,6 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
 import { parse } from 'cookie';
-import { SESSION_COOKIE } from '../../api';
+import { SESSION_COOKIE_NAMES } from '@shared/contracts/cookies';
 import type { CachedPage, CatalogueCache } from './catalogue-cache';
 
 /** Renders a page; undefined when the renderer has no page for the URL. */
@@ -12,7 +12,8 @@ type Render = (req: Request) => Promise<globalThis.Response | null | undefined>;
  */
 export function cachedPages(render: Render, write: (response: globalThis.Response, res: Response) => Promise<void>, cache: CatalogueCache | undefined) {
   return async (req: Request, res: Response, next: NextFunction): Promise<void> => {
-    const anonymous = req.method === 'GET' && !parse(req.headers.cookie ?? '')[SESSION_COOKIE];
+    const cookies = parse(req.headers.cookie ?? '');
+    const anonymous = req.method === 'GET' && !SESSION_COOKIE_NAMES.some((name) => cookies[name]);
     const key = req.originalUrl;
     const hit = anonymous ? cache?.pages.get(key) : undefined;
     if (hit) return send(hit, res);
