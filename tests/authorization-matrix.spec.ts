@@ -118,7 +118,6 @@ const POLICY: Record<string, Rule> = {
   'GET /orders/lots/:lotId/open-days': { allow: 'anyone', on: 'listedLot' },
   'POST /orders': BUYER,
   'POST /orders/from-list': BUYER,
-  'POST /orders/from-list': BUYER,
   'GET /orders/mine': BUYER,
   'GET /orders/incoming': GROWER,
   'GET /orders/:id': ORDER_PARTY,
