@@ -45,6 +45,17 @@ describe('quality claims', () => {
     expect(pdf.status).toBe(201);
     expect(pdf.body.retest.reportUrl).toBe(`/api/claims/${res.body.id}/retest`);
     expect((await other.agent.get(`/claims/${res.body.id}`)).status).toBe(404);
+
+    // The order page lists the order's claims for its buyer, its grower and admins, and for nobody else.
+    const grower = t.agent();
+    await grower.post('/auth/sign-in', { email: g.email, password: g.password });
+    for (const agent of [buyer.agent, grower, admin.agent]) {
+      const list = await agent.get(`/claims?orderId=${order.id}`);
+      expect([list.status, list.body.items.map((c: { id: number; status: string }) => [c.id, c.status])]).toEqual([200, [[res.body.id, 'open']]]);
+    }
+    expect((await other.agent.get(`/claims?orderId=${order.id}`)).status).toBe(404);
+    expect((await buyer.agent.get(`/claims?orderId=${late.id}`)).body.items).toEqual([]);
+    expect((await buyer.agent.get('/claims?orderId=abc')).status).toBe(400);
   }, 60_000);
 
   it('ends in a partial refund once, e-mails both sides, audits it, and lowers the grower’s payout for the order', async () => {

@@ -11,6 +11,7 @@ import { acceptReport, filesOf } from '../uploads/upload-limits';
 import { ClaimsService } from './claims.service';
 
 const Id = z.object({ id: z.coerce.number().int().positive('Claim id must be a positive whole number.') });
+const OrderQuery = z.object({ orderId: z.coerce.number({ error: 'Give the order id.' }).int().positive('Order id must be a positive whole number.').max(2 ** 31 - 1, 'No such order.') }).strict();
 const ListQuery = z.object({ status: z.enum(CLAIM_STATUSES, { message: 'Unknown claim status.' }).optional() }).strict();
 
 /** Buyers report problems; buyer, grower and admins read a claim. Mounted under /claims. */
@@ -24,6 +25,9 @@ export function claimsRouter(deps: ApiDeps): Router {
   router.post('/:id/retest', requireRole('buyer'), acceptReport, async (req, res) => {
     const [file] = filesOf(req, 'retest report PDF');
     res.status(201).json(await service.attachRetest(req.user!, Id.parse(req.params).id, file!));
+  });
+  router.get('/', requireSignedIn, async (req, res) => {
+    res.json({ items: await service.forOrder(req.user!, OrderQuery.parse(req.query).orderId) });
   });
   router.get('/:id', requireSignedIn, async (req, res) => {
     res.json(await service.viewFor(req.user!, Id.parse(req.params).id));

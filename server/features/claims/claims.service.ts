@@ -103,6 +103,15 @@ export class ClaimsService {
     return this.view(claimId);
   }
 
+  /** The claims on one order, newest first, for the same three people who may see the order; 404 for anyone else. */
+  async forOrder(user: Express.User, orderId: number): Promise<ClaimView[]> {
+    const { db } = this.deps;
+    const [order] = await db.select({ buyerId: orders.buyerId, ownerId: farms.ownerId }).from(orders).innerJoin(farms, eq(farms.id, orders.farmId)).where(eq(orders.id, orderId));
+    if (!order || (user.role !== 'admin' && order.buyerId !== user.id && order.ownerId !== user.id)) throw notFound('That order');
+    const rows = await db.select({ id: qualityClaims.id }).from(qualityClaims).where(eq(qualityClaims.orderId, orderId)).orderBy(desc(qualityClaims.id));
+    return Promise.all(rows.map((r) => this.view(r.id)));
+  }
+
   /**
    * Decides a claim. A refund goes through the payment provider with a key made from the claim, inside
    * the transaction that records it, so a second click or a retry refunds once. When the order was

@@ -6,6 +6,7 @@ import type { ClaimView, ResolveClaim } from '@shared/contracts/claims';
 import { formatCents, dollarsToCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { AdminApi } from './admin-api';
+import { RetestTable } from '../../shared/ui/retest-table';
 import { AdminTabs } from './admin-tabs';
 
 /**
@@ -14,7 +15,7 @@ import { AdminTabs } from './admin-tabs';
  */
 @Component({
   selector: 'app-claims-page',
-  imports: [AdminTabs, FormsModule, MatButton],
+  imports: [AdminTabs, FormsModule, MatButton, RetestTable],
   templateUrl: './claims-page.html',
   styleUrl: './admin-tables.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -10,12 +10,13 @@ import { feeRateLabel } from '@shared/pricing/order-total';
 import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
+import { ClaimPanel } from './claims/claim-panel';
 import { OrdersApi } from './orders-api';
 
 /** One order: figures, the agreed date, what happened when (timeline), the steps open to the viewer, a printable receipt. */
 @Component({
   selector: 'app-order-page',
-  imports: [RouterLink, MatButton],
+  imports: [RouterLink, MatButton, ClaimPanel],
   templateUrl: './order-page.html',
   styleUrl: './order-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -41,7 +42,6 @@ export class OrderPage {
   protected readonly hour = signal(9);
   protected readonly weighedTons = signal('');
   protected readonly ticket = signal<File | null>(null);
-  protected readonly problem = signal('');
   protected readonly money = formatCents;
   protected readonly feeRate = feeRateLabel;
   protected readonly statusLabel = orderStatusLabel;
@@ -65,8 +65,9 @@ export class OrderPage {
   protected accept() {
     return this.run((id) => this.api.accept(id));
   }
-  protected reportProblem() {
-    return this.run((id) => this.api.reportProblem(id, this.problem()));
+  /** Reads the order again after a claim changed it. */
+  protected refresh() {
+    return this.run((id) => this.api.get(id));
   }
   protected pickTicket(event: Event) {
     this.ticket.set((event.target as HTMLInputElement).files?.[0] ?? null);

@@ -1,6 +1,6 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
-import { Observable, switchMap } from 'rxjs';
+import type { Observable } from 'rxjs';
 import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
 
 /** The orders feature's only door to the API. */
@@ -47,10 +47,6 @@ export class OrdersApi {
   }
   accept(id: number): Observable<OrderView> {
     return this.http.post<OrderView>(`/api/orders/${id}/accept`, {});
-  }
-  reportProblem(id: number, reason: string): Observable<OrderView> {
-    // A problem is a quality claim, settled by an admin (the claims feature).
-    return this.http.post(`/api/claims`, { orderId: id, reason }).pipe(switchMap(() => this.get(id)));
   }
   calendar(from: string, days = 7): Observable<{ days: CalendarDay[] }> {
     return this.http.get<{ days: CalendarDay[] }>('/api/delivery-calendar', { params: { from, days } });

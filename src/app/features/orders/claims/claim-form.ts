@@ -1,0 +1,56 @@
+import { CLAIM_NUTRIENTS, type ClaimNutrient } from '@shared/contracts/platform-settings';
+import type { OpenClaim } from '@shared/contracts/claims';
+import { READABLE_FIELD_LABELS } from '@shared/contracts/report-reading';
+import type { NutrientBasis } from '@shared/forage/forage-contract';
+
+/** The four figures the forage engine needs to grade a retest; the others are optional. */
+export const REQUIRED_RETEST_FIELDS: readonly ClaimNutrient[] = ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct'];
+
+/** One input per nutrient an admin compares against its tolerance, labelled and in the units the review desk uses. */
+export const RETEST_FIELDS = CLAIM_NUTRIENTS.map((field) => ({
+  field,
+  label: READABLE_FIELD_LABELS[field].label,
+  // Dry matter is always as fed; the others follow the basis the buyer picks.
+  unit: field === 'dryMatterPct' || field === 'ndfd48Pct' ? READABLE_FIELD_LABELS[field].unit : '%',
+  required: REQUIRED_RETEST_FIELDS.includes(field),
+}));
+
+/** What the buyer typed, as typed. */
+export interface ClaimDraft {
+  reason: string;
+  withRetest: boolean;
+  labName: string;
+  labCertified: boolean;
+  reportDate: string;
+  basis: NutrientBasis;
+  values: Partial<Record<ClaimNutrient, string>>;
+}
+
+export const emptyClaimDraft = (): ClaimDraft => ({ reason: '', withRetest: false, labName: '', labCertified: true, reportDate: '', basis: 'dm', values: {} });
+
+/**
+ * The request body for `POST /api/claims`. Blank optional values are left out; a typed value that is not a
+ * number is sent as typed, so the API's own check names the field (one home for the rules).
+ */
+export function claimRequest(orderId: number, draft: ClaimDraft): OpenClaim {
+  const body: OpenClaim = { orderId, reason: draft.reason.trim() };
+  if (!draft.withRetest) return body;
+  const values: Record<string, number | string> = { basis: draft.basis };
+  for (const { field } of RETEST_FIELDS) {
+    const typed = (draft.values[field] ?? '').trim().replace(',', '.');
+    if (typed === '') continue;
+    const n = Number(typed);
+    values[field] = Number.isFinite(n) ? n : typed;
+  }
+  return { ...body, retest: { labName: draft.labName.trim(), labCertified: draft.labCertified, reportDate: draft.reportDate, values } };
+}
+
+/** The first thing still missing before the claim can be sent, or null. */
+export function missingInDraft(draft: ClaimDraft): string | null {
+  if (draft.reason.trim().length < 10) return 'Say what is wrong with the hay (at least 10 characters).';
+  if (!draft.withRetest) return null;
+  if (!draft.labName.trim()) return 'Name the lab that retested the hay.';
+  if (!draft.reportDate) return 'Enter the date of the retest report.';
+  const blank = RETEST_FIELDS.find((f) => f.required && !(draft.values[f.field] ?? '').trim());
+  return blank ? `Enter ${blank.label} from the retest.` : null;
+}
