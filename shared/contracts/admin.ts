@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import type { AuditChange } from './audit-changes';
 import { USER_ROLES, type UserRole } from './auth';
 
 /*
@@ -51,6 +52,8 @@ export interface AuditRow {
   entityId: string;
   before: unknown;
   after: unknown;
+  /** What changed, from → to, in words (from `before` and `after`). */
+  changes: AuditChange[];
   data: unknown;
 }
 

@@ -300,7 +300,8 @@ export interface ReviewLotView {
   /** What reading the PDF gave, in plain words (e.g. that a scan has no text). */
   readingSummary: string;
   /** What happened to the lot, newest first, in words, with who acted. */
-  history: { action: string; label: string; at: string; by: string | null; note: string | null }[];
+  /** `changes`: what the action changed, from → to, in words (empty for rows written before it was kept). */
+  history: { action: string; label: string; at: string; by: string | null; note: string | null; changes: string }[];
 }
 
 export type { Finding };

@@ -1,5 +1,6 @@
 import { and, desc, eq, type SQL } from 'drizzle-orm';
 import type { AuditRow } from '@shared/contracts/admin';
+import { auditChanges } from '@shared/contracts/audit-changes';
 import { auditActionLabel } from '@shared/contracts/audit-labels';
 import type { Db } from '../../db/client';
 import { auditEvents, users } from '../../db/schema';
@@ -27,6 +28,7 @@ export async function auditTrail(db: Db, query: { entityType?: string | undefine
     entityId: e.entityId,
     before: e.before,
     after: e.after,
+    changes: auditChanges(e.entityType, e.before, e.after),
     data: e.data,
   }));
 }

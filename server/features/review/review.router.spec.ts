@@ -59,6 +59,12 @@ describe('review API', () => {
     expect(t.mails.find((m) => m.to === grower.email && m.subject.startsWith('Listed:'))).toBeDefined();
     const audit = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, String(id)), eq(auditEvents.action, 'lot.approved')));
     expect(audit).toHaveLength(1);
+    // The row keeps what the approval changed, from → to, at the API's clock.
+    expect(audit[0]).toMatchObject({
+      before: { status: 'in_review', analysisVerification: 'pending', publishedAt: null },
+      after: { status: 'listed', analysisVerification: 'verified', publishedAt: t.clock.now().toISOString() },
+      createdAt: t.clock.now(),
+    });
     expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(409);
   }, 60_000);
 
@@ -75,8 +81,19 @@ describe('review API', () => {
     expect(audit[0]!.data).toEqual({ reason });
     expect((await t.agent().get(`/lots/${id}`)).status).toBe(404);
 
+    expect(audit[0]).toMatchObject({ before: { status: 'in_review', reviewNote: null, analysisVerification: 'pending' }, after: { status: 'returned', reviewNote: reason, analysisVerification: 'rejected' } });
+
     const again = await grower.agent.post(`/selling/lots/${id}/submit`);
     expect(again.body).toMatchObject({ status: 'in_review', reviewNote: null, analysis: { verification: 'pending' } });
+    const resubmitted = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.entityId, String(id)), eq(auditEvents.action, 'lot.submitted')));
+    expect(resubmitted.at(-1)).toMatchObject({ before: { status: 'returned', reviewNote: reason, analysisVerification: 'rejected' }, after: { status: 'in_review', reviewNote: null, analysisVerification: 'pending' } });
+
+    // The review desk's history says it in words, newest first (status names from labels.ts).
+    const history = (await admin.agent.get(`/review/lots/${id}`)).body.history as { action: string; changes: string }[];
+    expect(history.slice(0, 2).map((h) => [h.action, h.changes])).toEqual([
+      ['lot.submitted', `Status: Needs changes → With the reviewer; Note to the grower: ${reason} → —; Lab analysis: sent back → not yet checked`],
+      ['lot.returned', `Status: With the reviewer → Needs changes; Note to the grower: — → ${reason}; Lab analysis: not yet checked → sent back`],
+    ]);
   }, 60_000);
 
   it('shows each entered value beside the value read from the PDF and flags the mismatch', async () => {

@@ -9,7 +9,9 @@ import { findLotWithFarm } from '../selling/lot-access';
 import { editableLot } from '../selling/lot-view';
 import { onLotApproved } from './lot-approved';
 import { approvedMail, returnedMail } from './review-mail';
+import { auditChanges, auditChangesLine } from '@shared/contracts/audit-changes';
 import { auditActionLabel } from '@shared/contracts/audit-labels';
+import { recordAudit } from '../audit/audit-log';
 import { compareWithReading } from '@shared/lab-report/compare-reading';
 import { readingSummary } from '../uploads/report-reading';
 
@@ -45,7 +47,7 @@ export class ReviewService {
     const { farm } = await findLotWithFarm(db, lotId);
     const [owner] = await db.select({ email: users.email }).from(users).where(eq(users.id, farm.ownerId));
     const history = await db
-      .select({ action: auditEvents.action, at: auditEvents.createdAt, data: auditEvents.data, actorName: users.displayName, actorRole: users.role })
+      .select({ action: auditEvents.action, at: auditEvents.createdAt, before: auditEvents.before, after: auditEvents.after, data: auditEvents.data, actorName: users.displayName, actorRole: users.role })
       .from(auditEvents)
       .leftJoin(users, eq(users.id, auditEvents.actorId))
       .where(and(eq(auditEvents.entityType, 'lot'), eq(auditEvents.entityId, String(lotId))))
@@ -65,6 +67,7 @@ export class ReviewService {
         at: h.at.toISOString(),
         by: h.actorName ? `${h.actorName} (${h.actorRole})` : null,
         note: (h.data as { reason?: string }).reason ?? null,
+        changes: auditChangesLine(auditChanges('lot', h.before, h.after)),
       })),
     };
   }
@@ -77,15 +80,23 @@ export class ReviewService {
     if (view.missing.length > 0) throw conflict('lot_incomplete', `This lot still lacks ${view.missing.join(', ')}.`);
     const now = this.deps.clock.now();
     await db.transaction(async (tx) => {
-      await tx
-        .update(lots)
-        .set({ status: next, publishedAt: lot.publishedAt ?? now, reviewedBy: admin.id, reviewedAt: now, reviewNote: null, updatedAt: now })
-        .where(eq(lots.id, lotId));
+      const publishedAt = lot.publishedAt ?? now;
+      await tx.update(lots).set({ status: next, publishedAt, reviewedBy: admin.id, reviewedAt: now, reviewNote: null, updatedAt: now }).where(eq(lots.id, lotId));
+      const [analysis] = await tx.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
       await tx
         .update(labAnalyses)
         .set({ verification: 'verified', verifiedBy: admin.id, verifiedAt: now })
         .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
-      await tx.insert(auditEvents).values({ actorId: admin.id, action: 'lot.approved', entityType: 'lot', entityId: String(lotId), data: { title: lot.title } });
+      await recordAudit(tx, {
+        actorId: admin.id,
+        action: 'lot.approved',
+        entityType: 'lot',
+        entityId: lotId,
+        before: { status: lot.status, analysisVerification: analysis?.verification ?? null, publishedAt: lot.publishedAt?.toISOString() ?? null },
+        after: { status: next, analysisVerification: 'verified', publishedAt: publishedAt.toISOString() },
+        data: { title: lot.title },
+        at: now,
+      });
     });
     await this.mailGrower(farm.ownerId, (to) => approvedMail(to, lot, env.PUBLIC_URL));
     await onLotApproved(this.deps, lotId);
@@ -97,12 +108,22 @@ export class ReviewService {
     const next = requireLotTransition(lot.status, 'return', 'admin');
     const now = this.deps.clock.now();
     await db.transaction(async (tx) => {
+      const [analysis] = await tx.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
       await tx.update(lots).set({ status: next, reviewNote: reason, reviewedBy: admin.id, reviewedAt: now, updatedAt: now }).where(eq(lots.id, lotId));
       await tx
         .update(labAnalyses)
         .set({ verification: 'rejected', verifiedBy: admin.id, verifiedAt: now })
         .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
-      await tx.insert(auditEvents).values({ actorId: admin.id, action: 'lot.returned', entityType: 'lot', entityId: String(lotId), data: { reason } });
+      await recordAudit(tx, {
+        actorId: admin.id,
+        action: 'lot.returned',
+        entityType: 'lot',
+        entityId: lotId,
+        before: { status: lot.status, reviewNote: lot.reviewNote, analysisVerification: analysis?.verification ?? null },
+        after: { status: next, reviewNote: reason, analysisVerification: 'rejected' },
+        data: { reason },
+        at: now,
+      });
     });
     await this.mailGrower(farm.ownerId, (to) => returnedMail(to, lot, reason, env.PUBLIC_URL));
   }

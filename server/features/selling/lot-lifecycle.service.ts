@@ -4,8 +4,9 @@ import { stepIndex } from '@shared/contracts/selling';
 import { relistedStatus, requireLotTransition } from '@shared/lifecycle/lot-lifecycle';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
-import { auditEvents, farms, labAnalyses, lots, orders } from '../../db/schema';
+import { farms, labAnalyses, lots, orders } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
+import { recordAudit } from '../audit/audit-log';
 import { LotsService } from '../lots/lots.service';
 import { ownedLot } from './lot-access';
 import { editableLot } from './lot-view';
@@ -25,10 +26,21 @@ export class LotLifecycleService {
     if (view.missing.length > 0) {
       throw new HttpError(400, 'lot_incomplete', `Before submitting, add ${view.missing.join(', ')}.`, view.missing.map((m) => ({ path: 'lot', message: m })));
     }
+    const now = this.clock.now();
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: next, reviewNote: null, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
-      await tx.update(labAnalyses).set({ verification: 'pending' }).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true), eq(labAnalyses.verification, 'rejected')));
-      await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.submitted', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
+      await tx.update(lots).set({ status: next, reviewNote: null, updatedAt: now }).where(eq(lots.id, lotId));
+      const reopened = await tx.update(labAnalyses).set({ verification: 'pending' }).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true), eq(labAnalyses.verification, 'rejected'))).returning({ id: labAnalyses.id });
+      const analysis = reopened.length > 0 ? { before: { analysisVerification: 'rejected' }, after: { analysisVerification: 'pending' } } : { before: {}, after: {} };
+      await recordAudit(tx, {
+        actorId: user.id,
+        action: 'lot.submitted',
+        entityType: 'lot',
+        entityId: lotId,
+        before: { status: lot.status, reviewNote: lot.reviewNote, ...analysis.before },
+        after: { status: next, reviewNote: null, ...analysis.after },
+        data: { from: lot.status },
+        at: now,
+      });
     });
   }
 
@@ -36,9 +48,10 @@ export class LotLifecycleService {
   async withdraw(user: Express.User, lotId: number): Promise<void> {
     const { lot } = await ownedLot(this.db, lotId, user);
     const next = requireLotTransition(lot.status, 'withdraw', 'grower');
+    const now = this.clock.now();
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: next, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
-      await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.withdrawn', entityType: 'lot', entityId: String(lotId), data: { from: lot.status } });
+      await tx.update(lots).set({ status: next, updatedAt: now }).where(eq(lots.id, lotId));
+      await recordAudit(tx, { actorId: user.id, action: 'lot.withdrawn', entityType: 'lot', entityId: lotId, before: { status: lot.status }, after: { status: next }, data: { from: lot.status }, at: now });
     });
   }
 
@@ -47,9 +60,10 @@ export class LotLifecycleService {
     const { lot } = await ownedLot(this.db, lotId, user);
     const [analysis] = await this.db.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
     const next = relistedStatus(lot.status, { analysisVerified: analysis?.verification === 'verified', everPublished: lot.publishedAt !== null, balesAvailable: lot.balesAvailable });
+    const now = this.clock.now();
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ status: next, updatedAt: this.clock.now() }).where(eq(lots.id, lotId));
-      await tx.insert(auditEvents).values({ actorId: user.id, action: 'lot.relisted', entityType: 'lot', entityId: String(lotId), data: { to: next } });
+      await tx.update(lots).set({ status: next, updatedAt: now }).where(eq(lots.id, lotId));
+      await recordAudit(tx, { actorId: user.id, action: 'lot.relisted', entityType: 'lot', entityId: lotId, before: { status: lot.status }, after: { status: next }, data: { to: next }, at: now });
     });
     return next === 'in_review' ? 'in_review' : 'listed';
   }

@@ -1,5 +1,5 @@
-import { and, eq } from 'drizzle-orm';
-import { labAnalyses, lots } from '../../db/schema';
+import { and, asc, eq, inArray } from 'drizzle-orm';
+import { auditEvents, labAnalyses, lots } from '../../db/schema';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 
@@ -177,6 +177,15 @@ describe('selling API', () => {
     expect((await t.agent().get(`/lots/${id}`)).status).toBe(404);
     expect((await grower.agent.post(`/selling/lots/${id}/relist`)).body.status).toBe('listed');
     expect((await t.agent().get(`/lots/${id}`)).status).toBe(200);
+    // Each step is in the audit trail with the state it left and the state it reached.
+    const trail = await t.deps.db.select().from(auditEvents).where(and(eq(auditEvents.entityType, 'lot'), eq(auditEvents.entityId, String(id)), inArray(auditEvents.action, ['lot.withdrawn', 'lot.relisted']))).orderBy(asc(auditEvents.id));
+    expect(trail.map((r) => [r.action, r.before, r.after])).toEqual([
+      ['lot.withdrawn', { status: 'listed' }, { status: 'withdrawn' }],
+      ['lot.relisted', { status: 'withdrawn' }, { status: 'listed' }],
+    ]);
+    // The audit page reads them in words: the states as labels.ts names them.
+    const page = (await admin.agent.get(`/admin/audit?entityType=lot&entityId=${id}`)).body.items as { action: string; changes: { label: string; from: string; to: string }[] }[];
+    expect(page.find((r) => r.action === 'lot.withdrawn')!.changes).toEqual([{ field: 'status', label: 'Status', from: 'Listed', to: 'Paused' }]);
 
     const copy = await grower.agent.post(`/selling/lots/${id}/copy`);
     expect(copy.status).toBe(201);

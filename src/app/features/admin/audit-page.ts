@@ -16,11 +16,11 @@ import { AdminTabs } from './admin-tabs';
       <h1>Audit trail</h1>
       @if (error()) { <div class="bp-error-box" role="alert">{{ error() }}</div> }
       <table aria-label="Audit trail">
-        <thead><tr><th scope="col">When (UTC)</th><th scope="col">What</th><th scope="col">Who</th><th scope="col">On</th><th scope="col">Before</th><th scope="col">After</th><th scope="col">Details</th></tr></thead>
+        <thead><tr><th scope="col">When (UTC)</th><th scope="col">What</th><th scope="col">Who</th><th scope="col">On</th><th scope="col">Changed (from → to)</th><th scope="col">Details</th></tr></thead>
         <tbody>
           @for (r of rows(); track r.id) {
             <tr><td>{{ r.at.slice(0, 16).replace('T', ' ') }}</td><td>{{ r.label }}</td><td>{{ r.by }}</td><td>{{ r.entityType }} {{ r.entityId }}</td>
-              <td><code>{{ r.before ? (r.before | json) : '' }}</code></td><td><code>{{ r.after ? (r.after | json) : '' }}</code></td><td><code>{{ r.data | json }}</code></td></tr>
+              <td>@for (c of r.changes; track c.field) { <div>{{ c.label }}: {{ c.from }} → {{ c.to }}</div> }</td><td><code>{{ r.data | json }}</code></td></tr>
           }
         </tbody>
       </table>
