@@ -5,6 +5,7 @@ import type { TestApi } from '../../../tests/support/test-api';
 import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
 import { deliveredOrder, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
+import { holdSettings } from '../../../tests/support/settings-lock';
 import { simplePdf } from '../../../tests/support/simple-pdf';
 
 const DAY = 86_400_000;
@@ -16,12 +17,18 @@ describe('quality claims', () => {
   let admin: SignedInUser;
   let buyer: SignedInUser;
   let buyerId: number;
+  // The claim window and the tolerances come from the platform settings, which another file may change.
+  let releaseSettings: () => Promise<void>;
   beforeAll(async () => {
+    releaseSettings = await holdSettings('read');
     ({ t, admin } = await startAdminApi());
     buyer = await signedInUser(t, 'buyer');
     buyerId = (await buyer.agent.get('/auth/me')).body.user.id;
   });
-  afterAll(() => t.close());
+  afterAll(async () => {
+    await t.close();
+    await releaseSettings();
+  });
 
   const now = () => t.clock.now().getTime();
   const deliveredYesterday = async (farmId: number) =>
