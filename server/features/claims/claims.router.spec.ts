@@ -98,6 +98,17 @@ describe('quality claims', () => {
     expect(settled.body.payouts[0]).toMatchObject({ status: 'sent', amountCents: 110_000 });
   }, 60_000);
 
+  it('closes the claim window at the order’s own acceptance date, even when the claim setting was lengthened after delivery', async () => {
+    // Delivered yesterday with a one-day acceptance time (the settings then), now past: the order is due to the
+    // grower and may already be paid out, so a claim now would refund money the grower has been paid.
+    const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
+    const order = await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 50_000, status: 'delivered', deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() - 60_000), buyerId });
+    const late = await buyer.agent.post('/claims', { orderId: order.id, reason: 'Found mould after the acceptance date.' });
+    expect([late.status, late.body.error?.code]).toEqual([409, 'claim_window_closed']);
+    const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
+    expect(o!.status).toBe('delivered');
+  }, 60_000);
+
   it('rejects a claim without money moving, and a full refund returns everything the buyer paid', async () => {
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
     const kept = await deliveredYesterday(g.farm.id);

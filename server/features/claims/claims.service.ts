@@ -36,8 +36,11 @@ export class ClaimsService {
       const [order] = await tx.select().from(orders).where(eq(orders.id, input.orderId)).for('update');
       if (!order || order.buyerId !== buyer.id) throw notFound('That order');
       this.checkOrder(order.status, 'report_problem', 'buyer');
-      if (!order.deliveredAt || now.getTime() > order.deliveredAt.getTime() + claimDays * DAY_MS) {
-        throw conflict('claim_window_closed', `Problems can be reported within ${claimDays} days of delivery; that time has passed.`);
+      // The window also ends at the order's own acceptance date, fixed at delivery: from then on the order is
+      // due to the grower (and may be paid out), whatever the claim setting says now.
+      const closesAt = order.deliveredAt ? Math.min(order.deliveredAt.getTime() + claimDays * DAY_MS, order.acceptBy?.getTime() ?? Infinity) : -Infinity;
+      if (now.getTime() > closesAt) {
+        throw conflict('claim_window_closed', `Problems can be reported within ${claimDays} days of delivery and before the acceptance date; that time has passed.`);
       }
       const [lot] = await tx.select({ forageClass: lots.forageClass }).from(lots).where(eq(lots.id, order.lotId));
       // Retest values are checked by the engine's own contract, as the lot form's are.
