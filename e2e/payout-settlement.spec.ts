@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, freshPage, test, type Page } from './support/test';
 import type { OrderView } from '@shared/contracts/orders';
 import { ADMIN, BUYER, GROWER, signInAs } from './support/accounts';
 import { callApi, csrfToken } from './support/app-api';
@@ -11,9 +11,9 @@ const usd = (cents: number) => new Intl.NumberFormat('en-US', { style: 'currency
 test.describe.configure({ timeout: 300_000 });
 
 test('the admin settles a payout batch for a grower with a completed order: one transfer, paid once, in the grower’s history', async ({ browser }) => {
-  const grower = await (await browser.newContext()).newPage();
-  const buyer = await (await browser.newContext()).newPage();
-  const admin = await (await browser.newContext()).newPage();
+  const grower = await freshPage(browser);
+  const buyer = await freshPage(browser);
+  const admin = await freshPage(browser);
   await signInAs(grower, GROWER);
   await signInAs(buyer, BUYER);
   await signInAs(admin, ADMIN);

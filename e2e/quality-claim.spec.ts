@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, freshPage, test } from './support/test';
 import type { LotDetail } from '@shared/contracts/lots';
 import { simplePdf } from '../tests/support/simple-pdf';
 import { ADMIN, BUYER, GROWER, signInAs } from './support/accounts';
@@ -13,9 +13,9 @@ const usd = (cents: number) => new Intl.NumberFormat('en-US', { style: 'currency
 test.describe.configure({ timeout: 300_000 });
 
 test('a buyer files a claim with a retest; the admin judges it beside the listing and refunds part; all three roles see the refund and the grower’s payout shrinks by it', async ({ browser }) => {
-  const grower = await (await browser.newContext()).newPage();
-  const buyer = await (await browser.newContext()).newPage();
-  const admin = await (await browser.newContext()).newPage();
+  const grower = await freshPage(browser);
+  const buyer = await freshPage(browser);
+  const admin = await freshPage(browser);
   await signInAs(grower, GROWER);
   await signInAs(buyer, BUYER);
   await signInAs(admin, ADMIN);

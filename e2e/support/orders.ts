@@ -1,4 +1,4 @@
-import { expect, type Page } from '@playwright/test';
+import { expect, type Page } from './test';
 import type { OrderQuote, OrderView } from '@shared/contracts/orders';
 import type { SellerLotRow } from '@shared/contracts/selling';
 import { callApi } from './app-api';
@@ -30,7 +30,10 @@ export async function deliveredPickupOrder(buyer: Page, grower: Page): Promise<O
   const open = await callApi<{ days: { date: string }[]; pickupFromHour: number }>(buyer, 'GET', `/api/orders/lots/${lotId}/open-days`);
   const placed = await callApi<{ id: number; paymentUrl: string }>(buyer, 'POST', '/api/orders', { lotId, bales, method: 'pickup', window: { date: open.days[0]!.date, pickupHour: open.pickupFromHour } });
 
-  await buyer.goto(placed.paymentUrl);
+  // To the provider's page the way a buyer goes: from the order page's link.
+  await buyer.goto(`/orders/${placed.id}`);
+  await buyer.getByRole('link', { name: 'Go to the payment page' }).click();
+  await expect(buyer).toHaveURL(placed.paymentUrl);
   await buyer.getByLabel('Card number').fill(PAYING_CARD);
   await buyer.getByRole('button', { name: /^Pay \$/ }).click();
   await expect(buyer).toHaveURL(new RegExp(`/orders/${placed.id}\\?paid=1`));
