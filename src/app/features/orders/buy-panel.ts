@@ -11,6 +11,7 @@ import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { requestState, valueOf, errorOf } from '../../core/request-state';
 import { Session } from '../../core/session';
+import { CartStore } from './cart-store';
 import { OrdersApi } from './orders-api';
 import type { DeliveryMethod } from '@shared/contracts/enums';
 
@@ -26,6 +27,7 @@ export class BuyPanel {
   private readonly api = inject(OrdersApi);
   private readonly document = inject(DOCUMENT);
   protected readonly session = inject(Session);
+  private readonly cart = inject(CartStore);
   readonly lot = input.required<LotDetail>();
 
   protected readonly minBales = computed(() => Math.min(this.lot().balesAvailable, Math.max(1, balesForTons(this.lot().minOrderTons, this.lot().avgBaleWeightLb))));
@@ -39,6 +41,7 @@ export class BuyPanel {
   protected readonly pickupHour = signal<number | null>(null);
   protected readonly error = signal('');
   protected readonly busy = signal(false);
+  protected readonly listed = signal(false);
   protected readonly money = formatCents;
   protected readonly feeRate = feeRateLabel;
 
@@ -63,6 +66,14 @@ export class BuyPanel {
   }
   protected numberOf(value: string): number | null {
     return value === '' ? null : Number(value);
+  }
+
+  /** Puts this lot, at the chosen bales, on the hay list (replacing it if it is there already). */
+  protected putOnList(): void {
+    const lot = this.lot();
+    const bales = Math.round(this.chosenBales());
+    this.cart.addLines([{ lotId: lot.id, title: lot.title, farmName: lot.farm.name, bales, tons: balesToTons(bales, lot.avgBaleWeightLb), hayCents: this.quote()?.goodsCents ?? 0, freightCents: null }]);
+    this.listed.set(true);
   }
 
   protected async reserveAndPay(): Promise<void> {

@@ -1,11 +1,25 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject, signal } from '@angular/core';
+import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
-import { fixed } from '../catalogue/format';
+import { catchError, debounceTime, firstValueFrom, forkJoin, map, of, switchMap } from 'rxjs';
+import type { ListCheckoutResult, OrderQuote } from '@shared/contracts/orders';
+import { feeRateLabel } from '@shared/pricing/order-total';
+import { apiErrorMessage } from '../../core/api-error';
+import { Session } from '../../core/session';
 import { MoneyPipe } from '../../shared/ui/money-pipe';
-import { CartStore } from './cart-store';
+import { fixed } from '../catalogue/format';
+import { CartStore, type CartLine } from './cart-store';
+import { OrdersApi } from './orders-api';
 
-/** What the buyer means to order. Checkout and payment come with the ordering feature. */
+type LineQuote = { quote: OrderQuote } | { error: string };
+type Unit = 'bales' | 'loads';
+
+/**
+ * The hay list: lots the buyer means to buy (from lot pages or the planner's cheapest mix), with quantities
+ * in bales or loads, live figures per lot, and one checkout that holds every lot's bales at once: each lot
+ * becomes its own order with its own payment page.
+ */
 @Component({
   selector: 'app-cart-page',
   imports: [MoneyPipe, RouterLink, MatButton],
@@ -14,15 +28,94 @@ import { CartStore } from './cart-store';
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class CartPage {
+  private readonly api = inject(OrdersApi);
   protected readonly cart = inject(CartStore);
-  /** False until the browser has read the saved cart, so the server never claims the cart is empty. */
+  protected readonly session = inject(Session);
+  /** False until the browser has read the saved list, so the server never claims the list is empty. */
   protected readonly ready = signal(false);
+  protected readonly method = signal<'pickup' | 'delivery'>('pickup');
+  protected readonly zip = signal('');
+  protected readonly address = signal('');
+  protected readonly units = signal<Record<number, Unit>>({});
+  protected readonly busy = signal(false);
+  protected readonly error = signal('');
+  protected readonly placed = signal<ListCheckoutResult['orders'] | null>(null);
   protected readonly fixed = fixed;
+  protected readonly feeRate = feeRateLabel;
+
+  private readonly zipOk = computed(() => /^\d{5}$/.test(this.zip()));
+  private readonly request = computed(() => ({ lines: this.cart.lines().map((l) => ({ lotId: l.lotId, bales: l.bales })), method: this.method(), deliveryZip: this.method() === 'delivery' && this.zipOk() ? this.zip() : undefined }));
+  private readonly quoted = toSignal(
+    toObservable(this.request).pipe(
+      debounceTime(250),
+      switchMap((r) =>
+        r.lines.length === 0
+          ? of(new Map<number, LineQuote>())
+          : forkJoin(r.lines.map((l) => this.api.quote({ ...l, method: r.method, deliveryZip: r.deliveryZip }).pipe(map((quote): LineQuote => ({ quote })), catchError((e) => of<LineQuote>({ error: apiErrorMessage(e) }))))).pipe(
+              map((answers) => new Map(r.lines.map((l, i) => [l.lotId, answers[i]!]))),
+            ),
+      ),
+    ),
+    { initialValue: new Map<number, LineQuote>() },
+  );
+
+  /** The list by grower, in the order the lots were added. */
+  protected readonly growers = computed(() => {
+    const byFarm = new Map<string, CartLine[]>();
+    for (const line of this.cart.lines()) byFarm.set(line.farmName, [...(byFarm.get(line.farmName) ?? []), line]);
+    return [...byFarm].map(([farmName, lines]) => ({ farmName, lines }));
+  });
+  protected readonly quotes = computed(() => [...this.quoted().values()].flatMap((q) => ('quote' in q ? [q.quote] : [])));
+  protected readonly totalCents = computed(() => this.quotes().reduce((s, q) => s + q.totalCents, 0));
+  protected readonly problems = computed(() => [...this.quoted().values()].some((q) => 'error' in q || !!q.quote.problem));
+  protected readonly complete = computed(() => this.quoted().size === this.cart.count() && this.cart.lines().every((l) => this.quoted().has(l.lotId)));
+  protected readonly canCheckout = computed(() => this.cart.count() > 0 && this.complete() && !this.problems() && (this.method() === 'pickup' || (this.zipOk() && this.address().trim().length >= 5)));
 
   constructor() {
     afterNextRender(() => {
       this.cart.restore();
       this.ready.set(true);
     });
+  }
+
+  protected quoteOf(lotId: number): LineQuote | undefined {
+    return this.quoted().get(lotId);
+  }
+  protected unitOf(lotId: number): Unit {
+    return this.units()[lotId] ?? 'bales';
+  }
+  /** The quantity as shown in the line's unit: bales, or loads of the grower's truck (two decimals). */
+  protected shownQuantity(line: CartLine): string {
+    const q = this.quoteOf(line.lotId);
+    if (this.unitOf(line.lotId) === 'bales' || !q || !('quote' in q)) return String(line.bales);
+    return String(Math.round((line.bales / q.quote.balesPerLoad) * 100) / 100);
+  }
+  protected setUnit(lotId: number, unit: string): void {
+    this.units.update((u) => ({ ...u, [lotId]: unit === 'loads' ? 'loads' : 'bales' }));
+  }
+  protected setQuantity(line: CartLine, value: string): void {
+    const amount = Number(value);
+    if (!(amount > 0)) return;
+    const q = this.quoteOf(line.lotId);
+    const perLoad = q && 'quote' in q ? q.quote.balesPerLoad : null;
+    const bales = this.unitOf(line.lotId) === 'loads' && perLoad ? Math.round(amount * perLoad) : Math.round(amount);
+    this.cart.setBales(line.lotId, Math.max(1, bales));
+  }
+
+  protected async checkout(): Promise<void> {
+    this.error.set('');
+    this.busy.set(true);
+    try {
+      const r = this.request();
+      const result = await firstValueFrom(
+        this.api.placeList({ lines: r.lines, method: r.method, ...(r.method === 'delivery' ? { deliveryZip: this.zip(), deliveryAddress: this.address().trim() } : {}) }),
+      );
+      this.placed.set(result.orders);
+      this.cart.clear();
+    } catch (e) {
+      this.error.set(apiErrorMessage(e));
+    } finally {
+      this.busy.set(false);
+    }
   }
 }

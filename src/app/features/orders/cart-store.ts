@@ -41,6 +41,12 @@ export class CartStore {
     this.save([...this.state().filter((l) => !incoming.has(l.lotId)), ...lines]);
   }
 
+  /** Changes how many bales of a lot are on the list (whole bales, at least one). */
+  setBales(lotId: number, bales: number): void {
+    if (!Number.isInteger(bales) || bales < 1) return;
+    this.save(this.state().map((l) => (l.lotId === lotId ? { ...l, bales } : l)));
+  }
+
   remove(lotId: number): void {
     this.save(this.state().filter((l) => l.lotId !== lotId));
   }

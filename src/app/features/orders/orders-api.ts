@@ -1,7 +1,7 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import type { Observable } from 'rxjs';
-import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
+import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, ListCheckout, ListCheckoutResult, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
 
 /** The orders feature's only door to the API. */
 @Injectable({ providedIn: 'root' })
@@ -17,6 +17,10 @@ export class OrdersApi {
   }
   place(order: CreateOrder): Observable<CreatedOrder> {
     return this.http.post<CreatedOrder>('/api/orders', order);
+  }
+  /** Checks out the hay list: one order (hold and payment page) per lot, all held or none. */
+  placeList(list: ListCheckout): Observable<ListCheckoutResult> {
+    return this.http.post<ListCheckoutResult>('/api/orders/from-list', list);
   }
   get(id: number): Observable<OrderView> {
     return this.http.get<OrderView>(`/api/orders/${id}`);
