@@ -20,7 +20,7 @@ test('a buyer fills the hay list from two lot pages, changes a quantity, and che
   await first.getByLabel('Quantity').blur();
   await expect(first.getByText(/^Hay \(150 bales/)).toBeVisible();
   // The same line in loads: the field now counts loads of the grower's truck, and the bales stay 150.
-  await first.getByLabel('in').selectOption('loads');
+  await first.getByLabel('Counted in').selectOption('loads');
   const perLoad = Number(/a full load is (\d+) bales/.exec(await first.getByText(/a full load is/).innerText())![1]);
   await expect(first.getByLabel('Quantity')).toHaveValue(String(Math.round((150 / perLoad) * 100) / 100));
   await expect(first.getByText(/^Hay \(150 bales/)).toBeVisible();

@@ -45,13 +45,15 @@ export class CartPage {
 
   private readonly zipOk = computed(() => /^\d{5}$/.test(this.zip()));
   private readonly request = computed(() => ({ lines: this.cart.lines().map((l) => ({ lotId: l.lotId, bales: l.bales })), method: this.method(), deliveryZip: this.method() === 'delivery' && this.zipOk() ? this.zip() : undefined }));
+  /** Until a delivery ZIP is given, the figures are the hay and fee alone (priced as at the farm). */
+  protected readonly freightPending = computed(() => this.method() === 'delivery' && !this.zipOk());
   private readonly quoted = toSignal(
     toObservable(this.request).pipe(
       debounceTime(250),
       switchMap((r) =>
         r.lines.length === 0
           ? of(new Map<number, LineQuote>())
-          : forkJoin(r.lines.map((l) => this.api.quote({ ...l, method: r.method, deliveryZip: r.deliveryZip }).pipe(map((quote): LineQuote => ({ quote })), catchError((e) => of<LineQuote>({ error: apiErrorMessage(e) }))))).pipe(
+          : forkJoin(r.lines.map((l) => this.api.quote({ ...l, method: r.deliveryZip ? r.method : 'pickup', deliveryZip: r.deliveryZip }).pipe(map((quote): LineQuote => ({ quote })), catchError((e) => of<LineQuote>({ error: apiErrorMessage(e) }))))).pipe(
               map((answers) => new Map(r.lines.map((l, i) => [l.lotId, answers[i]!]))),
             ),
       ),
