@@ -2,7 +2,8 @@ import { createHash, randomUUID } from 'node:crypto';
 import { eq, sql } from 'drizzle-orm';
 import type { PhotoView } from '@shared/contracts/lots';
 import type { ApiDeps } from '../../api-deps';
-import { photos, storedFiles, type PhotoVariant } from '../../db/schema';
+import type { Db } from '../../db/client';
+import { lots, photos, storedFiles, type PhotoVariant } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
 import { photoView } from '../lots/lots.service';
 import { renderPhotoVariants, type RenderedVariant } from '../photos/photo-variants';
@@ -28,17 +29,8 @@ interface Prepared {
  */
 export async function addLotPhotos(deps: Pick<ApiDeps, 'db' | 'storage'>, lot: LotRow, ownerId: number, files: Express.Multer.File[]): Promise<PhotoView[]> {
   const { db, storage } = deps;
-  const [{ count, maxPosition, hasCover }] = (await db
-    .select({
-      count: sql<number>`count(*)`.mapWith(Number),
-      maxPosition: sql<number>`coalesce(max(${photos.position}), -1)`.mapWith(Number),
-      hasCover: sql<boolean>`coalesce(bool_or(${photos.isCover}), false)`,
-    })
-    .from(photos)
-    .where(eq(photos.lotId, lot.id))) as [{ count: number; maxPosition: number; hasCover: boolean }];
-  if (count + files.length > PHOTOS_PER_LOT) {
-    throw new HttpError(400, 'too_many_photos', `A lot can have at most ${PHOTOS_PER_LOT} photos; it has ${count}. Remove some first.`);
-  }
+  // A quick look first, so a request that cannot fit is refused before its photos are rendered.
+  checkRoom(await photoTally(db, lot.id), files.length);
 
   const sniffed = [];
   for (const file of files) sniffed.push(await sniffPhoto(file.buffer, displayName(file)));
@@ -63,6 +55,11 @@ export async function addLotPhotos(deps: Pick<ApiDeps, 'db' | 'storage'>, lot: L
   const pending: PendingFile[] = prepared.flatMap((p) => [{ key: p.originalKey, data: p.file.buffer }, ...p.variants.map((v) => ({ key: v.key, data: v.data }))]);
   const rows = await writeThenRecord(storage, pending, () =>
     db.transaction(async (tx) => {
+      // Parallel uploads to one lot queue on its row, so each counts the photos the others just added.
+      await tx.select({ id: lots.id }).from(lots).where(eq(lots.id, lot.id)).for('update');
+      const tally = await photoTally(tx, lot.id);
+      checkRoom(tally, prepared.length);
+      const { maxPosition, hasCover } = tally;
       const out = [];
       for (const [i, p] of prepared.entries()) {
         const [original] = await tx
@@ -80,6 +77,30 @@ export async function addLotPhotos(deps: Pick<ApiDeps, 'db' | 'storage'>, lot: L
     }),
   );
   return rows.map(photoView);
+}
+
+interface PhotoTally {
+  count: number;
+  maxPosition: number;
+  hasCover: boolean;
+}
+
+async function photoTally(db: Pick<Db, 'select'>, lotId: number): Promise<PhotoTally> {
+  const [tally] = await db
+    .select({
+      count: sql<number>`count(*)`.mapWith(Number),
+      maxPosition: sql<number>`coalesce(max(${photos.position}), -1)`.mapWith(Number),
+      hasCover: sql<boolean>`coalesce(bool_or(${photos.isCover}), false)`,
+    })
+    .from(photos)
+    .where(eq(photos.lotId, lotId));
+  return tally!;
+}
+
+function checkRoom({ count }: PhotoTally, adding: number): void {
+  if (count + adding > PHOTOS_PER_LOT) {
+    throw new HttpError(400, 'too_many_photos', `A lot can have at most ${PHOTOS_PER_LOT} photos; it has ${count}. Remove some first.`);
+  }
 }
 
 export function displayName(file: Express.Multer.File): string {
