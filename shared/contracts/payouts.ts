@@ -20,13 +20,6 @@ export interface DueOrderLine {
   amountCents: number;
 }
 
-export interface DueDeduction {
-  orderId: number;
-  reason: string;
-  /** Negative. */
-  amountCents: number;
-}
-
 export interface GrowerPayoutDue {
   farmId: number;
   farmName: string;
@@ -35,7 +28,6 @@ export interface GrowerPayoutDue {
   ready: boolean;
   heldReason: string | null;
   orders: DueOrderLine[];
-  deductions: DueDeduction[];
   totalCents: number;
 }
 
@@ -62,7 +54,6 @@ export interface PayoutView {
   createdAt: string;
   sentAt: string | null;
   lines: { orderId: number; goodsCents: number; freightCents: number; refundedCents: number; amountCents: number }[];
-  deductions: DueDeduction[];
 }
 
 export interface BatchView {

@@ -55,22 +55,3 @@ export const payoutLines = pgTable(
   },
   (t) => [index('payout_lines_payout_idx').on(t.payoutId)],
 );
-
-/**
- * Money taken off a grower's next payout: a refund made after the order had already been paid out.
- * `payoutId` is set when a payout deducts it; `sourceKey` (e.g. `refund:12`) records each cause once.
- */
-export const payoutAdjustments = pgTable(
-  'payout_adjustments',
-  {
-    id: integer().primaryKey().generatedAlwaysAsIdentity(),
-    farmId: integer().notNull().references(() => farms.id, { onDelete: 'restrict' }),
-    orderId: integer().notNull().references(() => orders.id, { onDelete: 'restrict' }),
-    amountCents: integer().notNull(),
-    reason: text().notNull(),
-    sourceKey: text().notNull().unique(),
-    payoutId: integer().references(() => payouts.id, { onDelete: 'restrict' }),
-    createdAt: timestamp({ withTimezone: true }).notNull(),
-  },
-  (t) => [index('payout_adjustments_farm_idx').on(t.farmId, t.payoutId), check('payout_adjustments_negative', sql`${t.amountCents} < 0`)],
-);

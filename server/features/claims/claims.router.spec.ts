@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
-import { auditEvents, orders } from '../../db/schema';
-import type { TestApi } from '../../../tests/support/test-api';
+import { auditEvents, orders, payoutLines } from '../../db/schema';
+import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
 import { deliveredOrder, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
@@ -108,6 +108,32 @@ describe('quality claims', () => {
     const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
     expect(o!.status).toBe('delivered');
   }, 60_000);
+
+  it('never both pays an order out and opens a claim on it when a batch and a claim race at the acceptance date', async () => {
+    // The buyer's request runs on a clock a second before the acceptance date, the admin's a moment after it
+    // (two servers a second apart): each alone would succeed. Real concurrency against PostgreSQL, ten rounds.
+    const buyerSide = await startTestApi({}, { stripe: t.stripeFake });
+    try {
+      buyerSide.clock.set(new Date(now() - 1_500));
+      const racer = await signedInUser(buyerSide, 'buyer');
+      const racerId = (await racer.agent.get('/auth/me')).body.user.id as number;
+      const outcomes: string[] = [];
+      for (let round = 0; round < 10; round += 1) {
+        const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
+        const order = await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 40_000, status: 'delivered', deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() - 500), buyerId: racerId });
+        const [claim, batch] = await Promise.all([
+          racer.agent.post('/claims', { orderId: order.id, reason: 'Wet bales in the middle of the stack.' }),
+          admin.agent.post('/admin/payouts/batches', { requestKey: randomUUID(), farmIds: [g.farm.id] }),
+        ]);
+        const inPayout = (await t.deps.db.select().from(payoutLines).where(eq(payoutLines.orderId, order.id))).length;
+        outcomes.push(`${claim.status}/${batch.status}/${inPayout}`);
+      }
+      // Either the claim won (201; the batch found nothing due: 409, no line) or the payout did (a line; claim 409).
+      expect(outcomes.filter((o) => o !== '201/409/0' && o !== '409/201/1')).toEqual([]);
+    } finally {
+      await buyerSide.close();
+    }
+  }, 120_000);
 
   it('rejects a claim without money moving, and a full refund returns everything the buyer paid', async () => {
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe);

@@ -9,9 +9,9 @@ import { checkOrderTransition, type OrderEvent, type OrderStatus } from '@shared
 import { formatCents } from '@shared/units/money';
 import type { OutgoingMail } from '../../adapters/mail/mailer';
 import type { ApiDeps } from '../../api-deps';
-import { farms, labAnalyses, lots, orderEvents, orderRefunds, orders, payoutAdjustments, payoutLines, payouts, qualityClaims, storedFiles, users } from '../../db/schema';
+import { farms, labAnalyses, lots, orderEvents, orderRefunds, orders, payoutLines, qualityClaims, storedFiles, users } from '../../db/schema';
 import { conflict, forbidden, HttpError, notFound } from '../../middleware/http-error';
-import { recordAudit, type DbOrTx } from '../audit/audit-log';
+import { recordAudit } from '../audit/audit-log';
 import { dmRequestOf } from '../selling/analysis-values';
 import { SettingsService } from '../settings/settings.service';
 import { sniffPdf } from '../uploads/file-sniff';
@@ -38,8 +38,11 @@ export class ClaimsService {
       this.checkOrder(order.status, 'report_problem', 'buyer');
       // The window also ends at the order's own acceptance date, fixed at delivery: from then on the order is
       // due to the grower (and may be paid out), whatever the claim setting says now.
-      const closesAt = order.deliveredAt ? Math.min(order.deliveredAt.getTime() + claimDays * DAY_MS, order.acceptBy?.getTime() ?? Infinity) : -Infinity;
-      if (now.getTime() > closesAt) {
+      const pastWindow = !order.deliveredAt || now.getTime() > order.deliveredAt.getTime() + claimDays * DAY_MS;
+      const pastAcceptance = order.acceptBy !== null && now.getTime() >= order.acceptBy.getTime();
+      // A payout that includes the order locks it first (payouts-due), so a claim waiting on that lock sees its line here.
+      const [paidOut] = await tx.select({ id: payoutLines.id }).from(payoutLines).where(eq(payoutLines.orderId, order.id));
+      if (pastWindow || pastAcceptance || paidOut) {
         throw conflict('claim_window_closed', `Problems can be reported within ${claimDays} days of delivery and before the acceptance date; that time has passed.`);
       }
       const [lot] = await tx.select({ forageClass: lots.forageClass }).from(lots).where(eq(lots.id, order.lotId));
@@ -117,8 +120,9 @@ export class ClaimsService {
 
   /**
    * Decides a claim. A refund goes through the payment provider with a key made from the claim, inside
-   * the transaction that records it, so a second click or a retry refunds once. When the order was
-   * already paid out, the refund is taken off the grower's next payout.
+   * the transaction that records it, so a second click or a retry refunds once. A claimed order is not
+   * due to the grower, so the refund always comes off the order's own payout (a claim is refused once
+   * the order is due or paid out).
    */
   async resolve(admin: Express.User, claimId: number, input: ResolveClaim): Promise<ClaimView> {
     const { db, stripe, clock } = this.deps;
@@ -146,7 +150,6 @@ export class ClaimsService {
         }
         const [refundRow] = await tx.insert(orderRefunds).values({ orderId: order!.id, amountCents: amount, reason: 'claim', idempotencyKey, providerRefundId: refund.id, createdBy: admin.id, createdAt: now }).returning();
         await tx.update(orders).set({ refundedCents: order!.refundedCents + amount }).where(eq(orders.id, order!.id));
-        await this.deductIfPaidOut(tx, order!.id, order!.farmId, amount, claim.id, now);
         await recordAudit(tx, {
           actorId: admin.id,
           action: 'refund.issued',
@@ -167,12 +170,6 @@ export class ClaimsService {
     const view = await this.view(claimId);
     await this.mailBoth(view, (to, role) => claimDecidedMail(to, role, view, this.deps.env.PUBLIC_URL));
     return view;
-  }
-
-  private async deductIfPaidOut(tx: DbOrTx, orderId: number, farmId: number, amount: number, claimId: number, now: Date): Promise<void> {
-    const [line] = await tx.select({ id: payoutLines.id }).from(payoutLines).innerJoin(payouts, eq(payouts.id, payoutLines.payoutId)).where(eq(payoutLines.orderId, orderId));
-    if (!line) return; // not paid out yet: the order's own payout will be smaller
-    await tx.insert(payoutAdjustments).values({ farmId, orderId, amountCents: -amount, reason: `refund on claim ${claimId}`, sourceKey: `claim-refund-${claimId}`, createdAt: now }).onConflictDoNothing();
   }
 
   private checkClaim(from: ClaimStatus, event: ClaimEvent): void {

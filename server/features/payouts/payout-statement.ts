@@ -3,7 +3,7 @@ import type { PayoutView } from '@shared/contracts/payouts';
 import { centsToDecimalText as dollars } from '@shared/units/money';
 
 /**
- * A grower's statement as CSV: one row per order paid and per deduction, under the payout that carried
+ * A grower's statement as CSV: one row per order paid (refunds to the buyer already taken off), under the payout that carried
  * it, amounts in dollars with two decimals (spreadsheets read them as numbers).
  */
 export function payoutStatementCsv(farmName: string, payouts: PayoutView[]): string {
@@ -11,9 +11,6 @@ export function payoutStatementCsv(farmName: string, payouts: PayoutView[]): str
   for (const p of [...payouts].reverse()) {
     for (const l of p.lines) {
       rows.push({ payout: p.id, status: p.statusLabel, sent: p.sentAt?.slice(0, 10) ?? '', order: l.orderId, item: 'order', hay: dollars(l.goodsCents), freight: dollars(l.freightCents), refunded: dollars(l.refundedCents), amount: dollars(l.amountCents), transfer: p.transferId ?? '' });
-    }
-    for (const d of p.deductions) {
-      rows.push({ payout: p.id, status: p.statusLabel, sent: p.sentAt?.slice(0, 10) ?? '', order: d.orderId, item: `deduction: ${d.reason}`, hay: '', freight: '', refunded: '', amount: dollars(d.amountCents), transfer: p.transferId ?? '' });
     }
   }
   const body = Papa.unparse(rows, { columns: ['payout', 'status', 'sent', 'order', 'item', 'hay', 'freight', 'refunded', 'amount', 'transfer'], newline: '\r\n' });

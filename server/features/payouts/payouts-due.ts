@@ -1,7 +1,7 @@
-import { and, asc, eq, inArray, isNull, lte, notExists, or, sql } from 'drizzle-orm';
-import type { DueDeduction, DueOrderLine, GrowerPayoutDue } from '@shared/contracts/payouts';
+import { and, asc, eq, inArray, lte, notExists, or, sql } from 'drizzle-orm';
+import type { DueOrderLine, GrowerPayoutDue } from '@shared/contracts/payouts';
 import type { DbOrTx } from '../audit/audit-log';
-import { farms, lots, orders, payoutAdjustments, payoutLines, users } from '../../db/schema';
+import { farms, lots, orders, payoutLines, users } from '../../db/schema';
 
 /** Why a grower's payout is held, in words; null when it can be sent. */
 export function heldReasonOf(farm: { payoutAccountId: string | null; payoutsEnabled: boolean }): string | null {
@@ -12,24 +12,22 @@ export function heldReasonOf(farm: { payoutAccountId: string | null; payoutsEnab
 
 /**
  * What each grower is owed now: orders delivered and accepted (or past the acceptance date) that no
- * payout has paid yet, net of refunds (the platform fee was paid by the buyer on top, and stays), less
- * refunds made after an earlier payout.
+ * payout has paid yet, net of refunds (the platform fee was paid by the buyer on top, and stays). No
+ * refund can follow a payout: a claim is refused once its order is due, and `lock` (inside the batch's
+ * transaction) holds the orders so a claim arriving meanwhile waits and then sees the payout.
  */
-export async function payoutsDue(db: DbOrTx, now: Date, farmIds?: number[]): Promise<GrowerPayoutDue[]> {
+export async function payoutsDue(db: DbOrTx, now: Date, farmIds?: number[], options: { lock?: boolean } = {}): Promise<GrowerPayoutDue[]> {
   const eligible = or(eq(orders.status, 'completed'), and(eq(orders.status, 'delivered'), lte(orders.acceptBy, now)));
-  const rows = await db
+  const query = db
     .select({ order: orders, lotTitle: lots.title })
     .from(orders)
     .innerJoin(lots, eq(lots.id, orders.lotId))
     .where(and(eligible, farmIds ? inArray(orders.farmId, farmIds) : undefined, notExists(db.select({ one: sql`1` }).from(payoutLines).where(eq(payoutLines.orderId, orders.id)))))
-    .orderBy(asc(orders.farmId), asc(orders.id));
-  const adjustments = await db
-    .select()
-    .from(payoutAdjustments)
-    .where(and(isNull(payoutAdjustments.payoutId), farmIds ? inArray(payoutAdjustments.farmId, farmIds) : undefined))
-    .orderBy(asc(payoutAdjustments.id));
+    .orderBy(asc(orders.farmId), asc(orders.id))
+    .$dynamic();
+  const rows = await (options.lock ? query.for('update', { of: orders }) : query);
 
-  const ids = [...new Set([...rows.map((r) => r.order.farmId), ...adjustments.map((a) => a.farmId)])];
+  const ids = [...new Set(rows.map((r) => r.order.farmId))];
   if (ids.length === 0) return [];
   const farmRows = await db.select({ farm: farms, email: users.email }).from(farms).innerJoin(users, eq(users.id, farms.ownerId)).where(inArray(farms.id, ids));
 
@@ -47,10 +45,9 @@ export async function payoutsDue(db: DbOrTx, now: Date, farmIds?: number[]): Pro
           refundedCents: order.refundedCents,
           amountCents: Math.max(0, order.goodsCents + order.freightCents - order.refundedCents),
         }));
-      const deductions: DueDeduction[] = adjustments.filter((a) => a.farmId === farm.id).map((a) => ({ orderId: a.orderId, reason: a.reason, amountCents: a.amountCents }));
-      const totalCents = lines.reduce((s, l) => s + l.amountCents, 0) + deductions.reduce((s, d) => s + d.amountCents, 0);
+      const totalCents = lines.reduce((s, l) => s + l.amountCents, 0);
       const heldReason = heldReasonOf(farm);
-      return { farmId: farm.id, farmName: farm.name, growerEmail: email, ready: heldReason === null, heldReason, orders: lines, deductions, totalCents };
+      return { farmId: farm.id, farmName: farm.name, growerEmail: email, ready: heldReason === null, heldReason, orders: lines, totalCents };
     })
     .sort((a, b) => a.farmName.localeCompare(b.farmName));
 }

@@ -3,7 +3,7 @@ import Stripe from 'stripe';
 import type { BatchView, CreateBatch, PayoutView } from '@shared/contracts/payouts';
 import { checkPayoutTransition, payoutStatusLabel, type PayoutEvent, type PayoutStatus } from '@shared/lifecycle/payout-lifecycle';
 import type { ApiDeps } from '../../api-deps';
-import { farms, payoutAdjustments, payoutBatches, payoutLines, payouts, users } from '../../db/schema';
+import { farms, payoutBatches, payoutLines, payouts, users } from '../../db/schema';
 import { conflict, HttpError, notFound } from '../../middleware/http-error';
 import { recordAudit } from '../audit/audit-log';
 import { heldReasonOf, payoutsDue } from './payouts-due';
@@ -32,7 +32,7 @@ export class PayoutsService {
       await tx.execute(sql`select pg_advisory_xact_lock(hashtext('payout_batches'))`);
       const [existing] = await tx.select({ id: payoutBatches.id }).from(payoutBatches).where(eq(payoutBatches.requestKey, input.requestKey));
       if (existing) return existing.id;
-      const due = (await payoutsDue(tx, now, input.farmIds)).filter((g) => g.totalCents > 0);
+      const due = (await payoutsDue(tx, now, input.farmIds, { lock: true })).filter((g) => g.totalCents > 0);
       if (due.length === 0) throw conflict('nothing_due', 'None of the chosen growers has anything due.');
       const [batch] = await tx.insert(payoutBatches).values({ requestKey: input.requestKey, createdBy: admin.id, createdAt: now }).returning();
       for (const grower of due) {
@@ -51,7 +51,6 @@ export class PayoutsService {
         if (grower.orders.length > 0) {
           await tx.insert(payoutLines).values(grower.orders.map((o) => ({ payoutId: payout!.id, orderId: o.orderId, goodsCents: o.goodsCents, freightCents: o.freightCents, refundedCents: o.refundedCents, amountCents: o.amountCents })));
         }
-        await tx.update(payoutAdjustments).set({ payoutId: payout!.id }).where(and(eq(payoutAdjustments.farmId, grower.farmId), isNull(payoutAdjustments.payoutId)));
         if (!grower.ready) {
           await recordAudit(tx, { actorId: admin.id, action: 'payout.held', entityType: 'payout', entityId: payout!.id, after: { status: 'held', amountCents: grower.totalCents }, data: { farmId: grower.farmId, reason: grower.heldReason }, at: now });
         }
@@ -172,7 +171,6 @@ export class PayoutsService {
     if (rows.length === 0) return [];
     const ids = rows.map((r) => r.p.id);
     const lines = await db.select().from(payoutLines).where(inArray(payoutLines.payoutId, ids)).orderBy(asc(payoutLines.orderId));
-    const adjustments = await db.select().from(payoutAdjustments).where(inArray(payoutAdjustments.payoutId, ids));
     return rows.map(({ p, farmName }) => ({
       id: p.id,
       batchId: p.batchId,
@@ -187,7 +185,6 @@ export class PayoutsService {
       createdAt: p.createdAt.toISOString(),
       sentAt: p.sentAt?.toISOString() ?? null,
       lines: lines.filter((l) => l.payoutId === p.id).map(({ orderId, goodsCents, freightCents, refundedCents, amountCents }) => ({ orderId, goodsCents, freightCents, refundedCents, amountCents })),
-      deductions: adjustments.filter((a) => a.payoutId === p.id).map((a) => ({ orderId: a.orderId, reason: a.reason, amountCents: a.amountCents })),
     }));
   }
 }

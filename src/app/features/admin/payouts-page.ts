@@ -9,7 +9,7 @@ import { AdminApi } from './admin-api';
 import { AdminTabs } from './admin-tabs';
 
 /**
- * Payouts: what each grower is owed (orders, amounts, deductions), a batch made from the growers the
+ * Payouts: what each grower is owed (orders, amounts, refunds deducted), a batch made from the growers the
  * admin ticked, and settling it. The batch request carries a key made when the page loads, so a second
  * click or a reload-and-resubmit finds the same batch.
  */

@@ -18,7 +18,7 @@ import { formatCents } from '@shared/units/money';
           <tbody>
             @for (p of items(); track p.id) {
               <tr><td>{{ p.id }}</td><td>{{ p.statusLabel }}@if (p.heldReason) { — {{ p.heldReason }}}</td><td>{{ p.sentAt?.slice(0, 10) ?? '—' }}</td>
-                <td>{{ orders(p) }}@if (p.deductions.length > 0) { · less {{ money(-deducted(p)) }} refunded after an earlier payout}</td><td class="n">{{ money(p.amountCents) }}</td></tr>
+                <td>{{ orders(p) }}</td><td class="n">{{ money(p.amountCents) }}</td></tr>
             }
           </tbody>
         </table>
@@ -47,9 +47,5 @@ export class PayoutHistory {
 
   protected orders(p: PayoutView): string {
     return p.lines.map((l) => `#${l.orderId}`).join(', ');
-  }
-
-  protected deducted(p: PayoutView): number {
-    return p.deductions.reduce((s, d) => s + d.amountCents, 0);
   }
 }
