@@ -19,6 +19,7 @@ import { mediaRouter } from '../server/features/media/media.router';
 import { registerOrderSweeps, scheduleOrderSweeps } from '../server/features/orders/order-sweeps';
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
+import { loopbackRenderRequest } from '../server/middleware/render-request';
 
 const browserDistFolder = join(import.meta.dirname, '../browser');
 
@@ -48,7 +49,9 @@ app.use(
 // token is bound to the session, so pages (not static files) read the session first.
 app.use(createSessionMiddleware(deps), createAuthenticator(deps.db).session(), createCsrf(deps.env.SESSION_SECRET, cookiesAreSecure(deps.env)).issueCookie);
 
-app.use(cachedPages((req) => angularApp.handle(req), writeResponseToNodeResponse, deps.catalogueCache));
+// The renderer sees the page on the app's own loopback port, so its API calls (with the visitor's cookie)
+// can never be sent where a Host or X-Forwarded-Host header points.
+app.use(cachedPages((req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)), writeResponseToNodeResponse, deps.catalogueCache));
 
 /**
  * Worker processes: WEB_CONCURRENCY, else every core in production and one process otherwise. Sessions,
