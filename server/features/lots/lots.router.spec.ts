@@ -2,6 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
+import { TEST_NOW } from '../../../tests/support/test-clock';
 
 describe('lots API', () => {
   let t: TestApi;
@@ -112,6 +113,30 @@ describe('lots API', () => {
     // The catalogue's "sampled to protocol" filter agrees.
     const compliantOnly = await t.agent().get(`/lots?q=${own}&compliantOnly=true`);
     expect(compliantOnly.body.items.map((i: { title: string }) => i.title)).toEqual([`${own} cores 20`]);
+  }, 120_000);
+
+  // The protocol judges a sample's age on the day the lot is listed (at most 180 days, the engine's default,
+  // `common practice`). A lot saved with a 69-day-old sample and approved 120 days later (189 days) is not
+  // sampled to protocol: the lot page and the catalogue's filter must both say so.
+  it('gives the lot page and the "sampled to protocol" filter one verdict when time passes before listing', async () => {
+    const own = `A${randomUUID().slice(0, 8)}`;
+    const grower = await signedInGrower(t);
+    const admin = await signedInUser(t, 'admin');
+    const id = await completeLot(grower.agent, { lot: { title: `${own} aged` } }); // sampled 2026-07-08, saved on TEST_NOW
+    expect((await grower.agent.post(`/selling/lots/${id}/submit`)).status).toBe(200);
+    try {
+      t.clock.set(new Date(Date.parse(TEST_NOW) + 120 * 86_400_000));
+      expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+    } finally {
+      t.clock.set(TEST_NOW);
+    }
+    const page = (await t.agent().get(`/lots/${id}`)).body;
+    expect(page.samplingReport.findings.map((f: { code: string }) => f.code)).toContain('sample-too-old');
+    expect(page.samplingReport.compliant).toBe(false);
+    expect(page.sampling.compliant).toBe(false);
+    const titles = async (query: string) => (await t.agent().get(`/lots?q=${own}${query}`)).body.items.map((i: { title: string }) => i.title);
+    expect(await titles('')).toEqual([`${own} aged`]);
+    expect(await titles('&compliantOnly=true')).toEqual([]);
   }, 120_000);
 
   it('shows a listed lot and hides one under review from the public', async () => {

@@ -6,7 +6,8 @@ import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, lotSearch, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { farmDistanceSql, farmWithinSql, locateZip } from '../geo/geo';
 import { evaluationOf } from '../selling/analysis-values';
-import { samplingFactsOf, samplingReportOf } from './sampling-report';
+import { samplingFactsOf } from '@shared/contracts/sampling-record';
+import { storedSamplingVerdict } from './sampling-report';
 import { costPerTonDryMatterCents } from '@shared/pricing/cost-per-nutrient';
 import { balesToTons, roundCents } from '@shared/units';
 
@@ -250,7 +251,7 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: C
         }
       : null,
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
-    samplingReport: sampling ? samplingReportOf(lot, sampling, lot.publishedAt ?? clock.now()) : null,
+    samplingReport: sampling ? storedSamplingVerdict(sampling) : null,
     sampling: sampling ? { ...samplingFactsOf(sampling), compliant: sampling.compliant } : null,
     photos: photoRows.map(photoView),
   };

@@ -1,39 +1,24 @@
-import { baleShapeOf } from '@shared/contracts/lots';
-import { evaluateSampling, type SamplingEvaluation, type SamplingRecord } from '@shared/forage';
-import type { lots, samplingRecords } from '../../db/schema';
-import { balesToTons } from '@shared/units';
+import { eq, sql } from 'drizzle-orm';
+import type { Finding, SamplingEvaluation } from '@shared/forage';
+import { samplingVerdictOf } from '@shared/contracts/sampling-record';
+import type { Db } from '../../db/client';
+import { lots, samplingRecords } from '../../db/schema';
 
-type LotFacts = Pick<typeof lots.$inferSelect, 'baleType' | 'harvestStartedOn' | 'harvestEndedOn' | 'baleCount' | 'avgBaleWeightLb'>;
-type SamplingFacts = Pick<
-  typeof samplingRecords.$inferSelect,
-  'sampledOn' | 'coresTaken' | 'balesSampled' | 'probeDiameterIn' | 'probeLengthIn' | 'corePosition' | 'sampledBy'
->;
+type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
-/** The grower's sampling facts alone (a stored row carries more columns than pages should see). */
-export function samplingFactsOf(s: SamplingFacts): SamplingFacts {
-  return {
-    sampledOn: s.sampledOn,
-    coresTaken: s.coresTaken,
-    balesSampled: s.balesSampled,
-    probeDiameterIn: s.probeDiameterIn,
-    probeLengthIn: s.probeLengthIn,
-    corePosition: s.corePosition,
-    sampledBy: s.sampledBy,
-  };
+/** The stored sampling verdict, as every page and the catalogue filter read it. */
+export function storedSamplingVerdict(s: Pick<typeof samplingRecords.$inferSelect, 'compliant' | 'findings'>): SamplingEvaluation {
+  return { compliant: s.compliant, findings: s.findings as Finding[] };
 }
 
-/** The engine's sampling record for a lot: the grower's sampling facts plus the lot's shape, harvest and size. */
-export function samplingRecordOf(lot: LotFacts, s: SamplingFacts): SamplingRecord {
-  return {
-    ...samplingFactsOf(s),
-    baleShape: baleShapeOf(lot.baleType),
-    harvestStartedOn: lot.harvestStartedOn,
-    harvestEndedOn: lot.harvestEndedOn,
-    lotTons: balesToTons(lot.baleCount, lot.avgBaleWeightLb),
-  };
-}
-
-/** The sampling record checked against the protocol as of `listedOn` (the sample-age check needs a date). */
-export function samplingReportOf(lot: LotFacts, s: SamplingFacts, listedOn: Date): SamplingEvaluation {
-  return evaluateSampling(samplingRecordOf(lot, s), { listedOn: listedOn.toISOString() });
+/**
+ * Recomputes and stores a lot's sampling verdict (see `samplingVerdictOf`); called in the transaction
+ * of every change to one of its inputs: the sampling facts, the lot's harvest dates, bale shape or
+ * size, and its first listing.
+ */
+export async function refreshSamplingVerdict(tx: Tx | Db, lotId: number, now: Date): Promise<void> {
+  const [row] = await tx.select({ s: samplingRecords, lot: lots }).from(samplingRecords).innerJoin(lots, eq(lots.id, samplingRecords.lotId)).where(eq(samplingRecords.lotId, lotId));
+  if (!row) return;
+  const verdict = samplingVerdictOf(row.lot, row.s, now);
+  await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: sql`now()` }).where(eq(samplingRecords.id, row.s.id));
 }

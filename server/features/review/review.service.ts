@@ -5,6 +5,7 @@ import type { ApiDeps } from '../../api-deps';
 import type { OutgoingMail } from '../../adapters/mail/mailer';
 import { auditEvents, farms, labAnalyses, lots, users } from '../../db/schema';
 import { conflict } from '../../middleware/http-error';
+import { refreshSamplingVerdict } from '../lots/sampling-report';
 import { findLotWithFarm } from '../selling/lot-access';
 import { editableLot } from '../selling/lot-view';
 import { onLotApproved } from './lot-approved';
@@ -87,6 +88,8 @@ export class ReviewService {
         .update(labAnalyses)
         .set({ verification: 'verified', verifiedBy: admin.id, verifiedAt: now })
         .where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+      // The sample's age is judged on the day the lot is first listed.
+      await refreshSamplingVerdict(tx, lotId, now);
       await recordAudit(tx, {
         actorId: admin.id,
         action: 'lot.approved',

@@ -14,7 +14,8 @@ import {
 } from '@shared/contracts/selling';
 import { listedPricePerTonCents } from '@shared/pricing/price-per-ton';
 import { afterReviewedChange, factsNeedingReview, statusAfterStockChange } from '@shared/lifecycle/lot-lifecycle';
-import { samplingReportOf } from '../lots/sampling-report';
+import { samplingVerdictOf } from '@shared/contracts/sampling-record';
+import { refreshSamplingVerdict } from '../lots/sampling-report';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { labAnalyses, lots, samplingRecords } from '../../db/schema';
@@ -67,6 +68,8 @@ export class LotStepsService {
     await this.db.transaction(async (tx) => {
       await tx.update(lots).set({ ...columns, ...this.progress(lot, 'lot') }).where(eq(lots.id, lotId));
       if (columns.forageClass !== lot.forageClass) await this.reevaluate(tx, lotId, columns.forageClass);
+      // The sampling verdict depends on the harvest dates.
+      await this.recheckSampling(tx, lotId);
       if (needsReview) await this.backToReview(tx, lot);
     });
   }
@@ -100,7 +103,7 @@ export class LotStepsService {
 
   async saveSampling(user: Express.User, lotId: number, input: SamplingStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'sampling');
-    const verdict = samplingReportOf(lot, input, this.clock.now());
+    const verdict = samplingVerdictOf(lot, input, this.clock.now());
     await this.db.transaction(async (tx) => {
       const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: this.clock.now() };
       await tx.insert(samplingRecords).values({ lotId, ...values }).onConflictDoUpdate({ target: samplingRecords.lotId, set: values });
@@ -227,15 +230,7 @@ export class LotStepsService {
   }
 
   private async recheckSampling(tx: Tx, lotId: number): Promise<void> {
-    const [row] = await tx
-      .select({ s: samplingRecords, lot: lots })
-      .from(samplingRecords)
-      .innerJoin(lots, eq(lots.id, samplingRecords.lotId))
-      .where(eq(samplingRecords.lotId, lotId));
-    if (!row) return;
-    const { s, lot } = row;
-    const verdict = samplingReportOf(lot, s, this.clock.now());
-    await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: sql`now()` }).where(eq(samplingRecords.id, s.id));
+    await refreshSamplingVerdict(tx, lotId, this.clock.now());
   }
 }
 

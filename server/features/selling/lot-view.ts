@@ -4,7 +4,8 @@ import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { labAnalyses, photos, samplingRecords, storedFiles } from '../../db/schema';
 import { photoView } from '../lots/lots.service';
-import { samplingFactsOf, samplingReportOf } from '../lots/sampling-report';
+import { samplingFactsOf } from '@shared/contracts/sampling-record';
+import { storedSamplingVerdict } from '../lots/sampling-report';
 import { enteredValuesOf, evaluationOf } from './analysis-values';
 import { findLotWithFarm } from './lot-access';
 import { balesToTons } from '@shared/units';
@@ -72,7 +73,7 @@ export async function editableLot(db: Db, lotId: number, clock: Clock): Promise<
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,
     samplingReport:
       sampling && saved('quantity')
-        ? samplingReportOf(lot, sampling, lot.publishedAt ?? clock.now())
+        ? storedSamplingVerdict(sampling)
         : null,
     missing: [],
   };

@@ -6,9 +6,8 @@ import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/fo
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
-import { baleShapeOf } from '@shared/contracts/lots';
 import { SamplingStepSchema, type EditableLot } from '@shared/contracts/selling';
-import { evaluateSampling } from '@shared/forage';
+import { samplingVerdictOf } from '@shared/contracts/sampling-record';
 import { FindingsList } from '../ui/findings-list';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave } from './step-save';
@@ -72,16 +71,7 @@ export class SamplingStep {
     const parsed = SamplingStepSchema.safeParse(this.body(this.value()));
     const lot = this.lot();
     if (!parsed.success || !lot.lot || !lot.quantity) return null;
-    return evaluateSampling(
-      {
-        ...parsed.data,
-        baleShape: baleShapeOf(lot.quantity.baleType),
-        harvestStartedOn: lot.lot.harvestStartedOn,
-        harvestEndedOn: lot.lot.harvestEndedOn,
-        lotTons: lot.quantity.totalTons,
-      },
-      { listedOn: new Date().toISOString() },
-    );
+    return samplingVerdictOf({ ...lot.lot, ...lot.quantity }, parsed.data, new Date());
   });
 
   constructor() {
