@@ -1,4 +1,5 @@
 import { createHash, randomUUID } from 'node:crypto';
+import { timeZoneForState } from '@shared/time/farm-time';
 import { sql } from 'drizzle-orm';
 import { evaluateSampling } from '@shared/forage';
 import type { FileStorage } from '../../server/adapters/storage/file-storage';
@@ -54,6 +55,7 @@ export async function seedDemo({ db, storage, adminEmail, adminPassword, log = (
           zip: farm.zip,
           latitude: place.latitude,
           longitude: place.longitude,
+          timeZone: timeZoneForState(place.state),
           deliveryRadiusMi: farm.deliveryRadiusMi,
           loadingFacilities: farm.loadingFacilities,
           pickupHours: farm.pickupHours,

@@ -123,7 +123,8 @@ export interface OrderView {
   id: number;
   status: OrderStatus;
   lot: { id: number; title: string; forageType: string; cutting: number; baleType: string; avgBaleWeightLb: number };
-  farm: { id: number; name: string; city: string; state: string; pickupFromHour: number; pickupToHour: number };
+  /** `timeZone`: the farm's IANA zone; windows are shown in it. */
+  farm: { id: number; name: string; city: string; state: string; pickupFromHour: number; pickupToHour: number; timeZone: string };
   buyer: { displayName: string; email: string };
   bales: number;
   tons: number;

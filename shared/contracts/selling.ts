@@ -7,6 +7,7 @@ import { BALE_TYPES, FORAGE_TYPES, type BaleType, type ForageType, type LotDetai
 import { lbToShortTons, shortTonsToLb } from '../units/mass';
 import { multiLineText, singleLineText } from './text';
 import { ANALYSIS_METHODS, CORE_POSITIONS, STORAGE_KINDS, type ForageClass, type VerificationState } from './enums';
+import { isTimeZone } from '../time/farm-time';
 
 /*
  * Contracts of the grower's side: farm profile, the guided lot form (one schema per step), the
@@ -37,12 +38,15 @@ export const FarmProfileInputSchema = z
     loadingFacilities: prose('Loading facilities', 500).default(''),
     pickupHours: prose('Pickup hours', 300).default(''),
     description: prose('Description', 2000).default(''),
+    /** IANA time zone; when left out, the farm keeps its zone (a new farm takes its state's main zone). */
+    timeZone: z.string().refine(isTimeZone, 'Choose a time zone by its IANA name, e.g. America/Chicago.').optional(),
   })
   .strict();
 export type FarmProfileInput = z.infer<typeof FarmProfileInputSchema>;
 
 export interface FarmProfile extends FarmProfileInput {
   id: number;
+  timeZone: string;
   city: string;
   state: string;
   latitude: number;

@@ -1,4 +1,5 @@
 import { randomUUID } from 'node:crypto';
+import { timeZoneForState } from '@shared/time/farm-time';
 import type { ForageEvaluationRequest } from '@shared/forage';
 import type { Db } from '../../server/db/client';
 import { farms, labAnalyses, lots, samplingRecords, users } from '../../server/db/schema';
@@ -18,7 +19,7 @@ export async function createGrower(db: Db, zip = '66502') {
   const place = locateZip(zip);
   const [farm] = await db
     .insert(farms)
-    .values({ ownerId: user!.id, name: `Fixture Farm ${randomUUID().slice(0, 6)}`, addressLine: '1 Test Rd', city: place.city, state: place.state, zip, latitude: place.latitude, longitude: place.longitude })
+    .values({ ownerId: user!.id, name: `Fixture Farm ${randomUUID().slice(0, 6)}`, addressLine: '1 Test Rd', city: place.city, state: place.state, zip, latitude: place.latitude, longitude: place.longitude, timeZone: timeZoneForState(place.state) })
     .returning();
   return { user: user!, farm: farm!, email, password: 'grower-password' };
 }

@@ -28,6 +28,8 @@ export const farms = pgTable(
     /** Pickup appointments start on the hour between these (local farm time, 24 h clock). */
     pickupFromHour: integer().notNull().default(8),
     pickupToHour: integer().notNull().default(17),
+    /** The farm's IANA time zone (e.g. America/Chicago): delivery days and pickup hours are its wall-clock time. */
+    timeZone: text().notNull(),
     description: text().notNull().default(''),
     /** Connected payout account at the payment provider; null until set up. */
     payoutAccountId: text(),

@@ -4,6 +4,7 @@ import type { FarmProfile, FarmProfileInput } from '@shared/contracts/selling';
 import type { Db } from '../../db/client';
 import { farms } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
+import { timeZoneForState } from '@shared/time/farm-time';
 import { locateZip } from '../geo/geo';
 
 type FarmRow = typeof farms.$inferSelect;
@@ -26,10 +27,11 @@ export class FarmsService {
     const columns = { ...input, city: place.city, state: place.state, latitude: place.latitude, longitude: place.longitude };
     const existing = await this.mine(userId);
     if (existing) {
+      // A farm keeps its time zone unless the grower chooses another.
       const [row] = await this.db.update(farms).set(columns).where(eq(farms.id, existing.id)).returning();
       return row!;
     }
-    const [row] = await this.db.insert(farms).values({ ownerId: userId, ...columns }).returning();
+    const [row] = await this.db.insert(farms).values({ ownerId: userId, ...columns, timeZone: input.timeZone ?? timeZoneForState(place.state) }).returning();
     return row!;
   }
 
@@ -84,6 +86,7 @@ export function farmProfileView(farm: FarmRow): FarmProfile {
     loadingFacilities: farm.loadingFacilities,
     pickupHours: farm.pickupHours,
     description: farm.description,
+    timeZone: farm.timeZone,
     payouts: { state: farm.payoutsEnabled ? 'ready' : farm.payoutAccountId ? 'pending' : 'none' },
   };
 }

@@ -13,6 +13,7 @@ import { conflict, forbidden, HttpError, notFound } from '../../middleware/http-
 import { sniffPhoto } from '../uploads/file-sniff';
 import { sha256 } from '../uploads/photo-upload';
 import { writeThenRecord } from '../uploads/write-then-record';
+import { farmDay, farmInstant, nextDay } from '@shared/time/farm-time';
 import { daysFrom, windowFor } from './delivery-window';
 import { loadOrderRecord, readableOrder, type OrderRecord } from './order-record';
 import { applyOrderEvent, lockOrder, type Tx } from './order-transition';
@@ -52,7 +53,7 @@ export class DeliveriesService {
       const to = this.step(delivery.status, event, part);
       if (order.method === 'delivery') await this.checkCapacity(tx, record, delivery.windowStart, orderId);
       await tx.update(deliveries).set({ status: to, updatedAt: this.now() }).where(eq(deliveries.id, delivery.id));
-      if (order.status === 'paid') await applyOrderEvent(tx, order, 'schedule', { actor: part, actorId: user.id }, this.now(), {}, `Date agreed: ${delivery.windowStart.toISOString().slice(0, 10)}`);
+      if (order.status === 'paid') await applyOrderEvent(tx, order, 'schedule', { actor: part, actorId: user.id }, this.now(), {}, `Date agreed: ${farmDay(delivery.windowStart, record.farm.timeZone)}`);
     });
     await this.orders.notify(orderId, ['date_confirmed']);
     return this.orders.get(user, orderId);
@@ -146,23 +147,24 @@ export class DeliveriesService {
   }
 
   /** The grower's week (or any run of days): loads booked per day against the loads the farm can haul. */
-  async calendar(user: Express.User, from: string, days: number): Promise<CalendarDay[]> {
+  async calendar(user: Express.User, from: string, days: number): Promise<{ days: CalendarDay[]; timeZone: string }> {
     const farm = await this.ownFarm(user);
-    return this.days(farm, from, days, true);
+    return { days: await this.days(farm, from, days, true), timeZone: farm.timeZone };
   }
 
   /** Days a buyer can ask for delivery or pickup from a lot's farm, from tomorrow, with the room left. */
-  async openDays(lotId: number, days = 21): Promise<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number }> {
+  async openDays(lotId: number, days = 21): Promise<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number; timeZone: string }> {
     const [row] = await this.deps.db.select({ farm: farms }).from(lots).innerJoin(farms, eq(farms.id, lots.farmId)).where(and(eq(lots.id, lotId), inArray(lots.status, ['listed', 'sold_out'])));
     if (!row) throw notFound('Lot');
-    const tomorrow = new Date(this.now().getTime() + 86_400_000).toISOString().slice(0, 10);
-    return { days: await this.days(row.farm, tomorrow, days, false), pickupFromHour: row.farm.pickupFromHour, pickupToHour: row.farm.pickupToHour };
+    const tomorrow = nextDay(farmDay(this.now(), row.farm.timeZone));
+    return { days: await this.days(row.farm, tomorrow, days, false), pickupFromHour: row.farm.pickupFromHour, pickupToHour: row.farm.pickupToHour, timeZone: row.farm.timeZone };
   }
 
   private async days(farm: typeof farms.$inferSelect, from: string, count: number, withOrders: boolean): Promise<CalendarDay[]> {
     const dates = daysFrom(from, count);
-    const start = new Date(`${dates[0]}T00:00:00Z`);
-    const end = new Date(new Date(`${dates.at(-1)}T00:00:00Z`).getTime() + 86_400_000);
+    // The farm's days, from its midnight to its next midnight.
+    const start = farmInstant(dates[0]!, 0, farm.timeZone);
+    const end = farmInstant(nextDay(dates.at(-1)!), 0, farm.timeZone);
     const rows = await this.deps.db
       .select({ order: orders, delivery: deliveries, buyerName: users.displayName, lotTitle: lots.title })
       .from(deliveries)
@@ -171,7 +173,7 @@ export class DeliveriesService {
       .innerJoin(lots, eq(lots.id, orders.lotId))
       .where(and(eq(orders.farmId, farm.id), inArray(orders.status, [...ORDER_HOLDS_STOCK]), gte(deliveries.windowStart, start), lt(deliveries.windowStart, end)));
     return dates.map((date) => {
-      const today = rows.filter((r) => r.delivery.windowStart.toISOString().slice(0, 10) === date);
+      const today = rows.filter((r) => farmDay(r.delivery.windowStart, farm.timeZone) === date);
       const deliveryDay = farm.deliveryWeekdays.includes(new Date(`${date}T00:00:00Z`).getUTCDay());
       return {
         date,
@@ -206,13 +208,14 @@ export class DeliveriesService {
   }
 
   private async checkCapacity(tx: Tx, record: OrderRecord, windowStart: Date, orderId: number) {
-    const day = windowStart.toISOString().slice(0, 10);
-    const start = new Date(`${day}T00:00:00Z`);
+    const day = farmDay(windowStart, record.farm.timeZone);
+    const start = farmInstant(day, 0, record.farm.timeZone);
+    const dayEnd = farmInstant(nextDay(day), 0, record.farm.timeZone);
     const [booked] = await tx
       .select({ loads: sql<number>`coalesce(sum(${orders.loads}), 0)::int` })
       .from(deliveries)
       .innerJoin(orders, eq(orders.id, deliveries.orderId))
-      .where(and(eq(orders.farmId, record.farm.id), eq(orders.method, 'delivery'), inArray(deliveries.status, ['confirmed', 'in_transit', 'done']), gte(deliveries.windowStart, start), lt(deliveries.windowStart, new Date(start.getTime() + 86_400_000)), sql`${orders.id} <> ${orderId}`));
+      .where(and(eq(orders.farmId, record.farm.id), eq(orders.method, 'delivery'), inArray(deliveries.status, ['confirmed', 'in_transit', 'done']), gte(deliveries.windowStart, start), lt(deliveries.windowStart, dayEnd), sql`${orders.id} <> ${orderId}`));
     if ((booked?.loads ?? 0) + record.order.loads > record.farm.loadsPerDay) {
       throw conflict('day_full', `${day} already has ${booked?.loads ?? 0} of ${record.farm.loadsPerDay} loads booked; offer the buyer another day.`);
     }

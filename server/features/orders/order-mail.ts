@@ -1,4 +1,5 @@
 import { formatCents } from '@shared/units/money';
+import { farmDateLabel, farmTimeLabel } from '@shared/time/farm-time';
 import type { OutgoingMail } from '../../adapters/mail/mailer';
 import type { DeliveryMethod } from '@shared/contracts/enums';
 
@@ -18,15 +19,20 @@ export interface OrderMailFacts {
   totalCents: number;
   refundedCents: number;
   windowStart: Date | null;
+  /** The farm's IANA zone: the window is written in its time. */
+  timeZone: string;
   deliveryAddress: string | null;
 }
 
 export type OrderMailKind = 'order_received' | 'new_order' | 'date_confirmed' | 'date_changed' | 'delivered' | 'receipt';
 
 const escape = (s: string) => s.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
-const day = (d: Date) => d.toLocaleDateString('en-US', { weekday: 'long', month: 'long', day: 'numeric', year: 'numeric', timeZone: 'UTC' });
 const when = (f: OrderMailFacts) =>
-  f.windowStart ? (f.method === 'pickup' ? `pickup ${day(f.windowStart)} at ${f.windowStart.getUTCHours()}:00 (farm time)` : `delivery on ${day(f.windowStart)}`) : 'date to agree';
+  f.windowStart
+    ? f.method === 'pickup'
+      ? `pickup ${farmDateLabel(f.windowStart, f.timeZone)} at ${farmTimeLabel(f.windowStart, f.timeZone)} (farm time)`
+      : `delivery on ${farmDateLabel(f.windowStart, f.timeZone)}`
+    : 'date to agree';
 
 function factRows(f: OrderMailFacts): [string, string][] {
   return [

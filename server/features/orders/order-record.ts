@@ -58,6 +58,7 @@ export function mailFacts(r: OrderRecord): OrderMailFacts {
     totalCents: r.order.totalCents,
     refundedCents: r.order.refundedCents,
     windowStart: r.delivery?.windowStart ?? null,
+    timeZone: r.farm.timeZone,
     deliveryAddress: r.order.deliveryAddress,
   };
 }
@@ -72,7 +73,7 @@ export async function orderView(db: Db, r: OrderRecord, part: Actor & ('buyer' |
     id: o.id,
     status: o.status,
     lot: { id: r.lot.id, title: r.lot.title, forageType: r.lot.forageType, cutting: r.lot.cutting, baleType: r.lot.baleType, avgBaleWeightLb: r.lot.avgBaleWeightLb },
-    farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour },
+    farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour, timeZone: r.farm.timeZone },
     buyer: { displayName: r.buyer.displayName, email: part === 'buyer' || part === 'admin' || o.status !== 'awaiting_payment' ? r.buyer.email : '' },
     bales: o.bales,
     tons: o.tons,

@@ -93,7 +93,7 @@ export function deliveryCalendarRouter({ deliveries }: OrderFeature): Router {
   router.use(requireRole('grower'));
   router.get('/', async (req, res) => {
     const { from, days } = CalendarQuery.parse(req.query);
-    res.json({ days: await deliveries.calendar(req.user!, from, days) });
+    res.json(await deliveries.calendar(req.user!, from, days));
   });
   router.get('/settings', async (req, res) => {
     res.json(await deliveries.settings(req.user!));

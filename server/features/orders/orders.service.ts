@@ -334,7 +334,7 @@ export class OrdersService {
       method: r.order.method,
       createdAt: r.order.createdAt.toISOString(),
       lot: { id: r.lot.id, title: r.lot.title, forageType: r.lot.forageType, cutting: r.lot.cutting, baleType: r.lot.baleType, avgBaleWeightLb: r.lot.avgBaleWeightLb },
-      farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour },
+      farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour, timeZone: r.farm.timeZone },
       buyerName: r.buyerName,
       windowStart: r.delivery?.windowStart.toISOString() ?? null,
       deliveryStatus: r.delivery?.status ?? null,

@@ -7,6 +7,7 @@ import type { OrderView } from '@shared/contracts/orders';
 import { deliveryStatusLabel } from '@shared/lifecycle/delivery-lifecycle';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
 import { feeRateLabel } from '@shared/pricing/order-total';
+import { farmDateLabel, farmTimeLabel } from '@shared/time/farm-time';
 import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
@@ -44,6 +45,8 @@ export class OrderPage {
   protected readonly ticket = signal<File | null>(null);
   protected readonly money = formatCents;
   protected readonly feeRate = feeRateLabel;
+  protected readonly farmDate = farmDateLabel;
+  protected readonly farmTime = farmTimeLabel;
   protected readonly statusLabel = orderStatusLabel;
   protected readonly deliveryLabel = deliveryStatusLabel;
   protected readonly can = (action: string) => this.order()?.actions.includes(action) ?? false;

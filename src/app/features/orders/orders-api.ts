@@ -12,8 +12,8 @@ export class OrdersApi {
     const params = new HttpParams({ fromObject: Object.fromEntries(Object.entries(query).filter(([, v]) => v !== undefined && v !== '')) as Record<string, string> });
     return this.http.get<OrderQuote>('/api/orders/quote', { params });
   }
-  openDays(lotId: number): Observable<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number }> {
-    return this.http.get<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number }>(`/api/orders/lots/${lotId}/open-days`);
+  openDays(lotId: number): Observable<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number; timeZone: string }> {
+    return this.http.get<{ days: CalendarDay[]; pickupFromHour: number; pickupToHour: number; timeZone: string }>(`/api/orders/lots/${lotId}/open-days`);
   }
   place(order: CreateOrder): Observable<CreatedOrder> {
     return this.http.post<CreatedOrder>('/api/orders', order);
@@ -52,8 +52,8 @@ export class OrdersApi {
   accept(id: number): Observable<OrderView> {
     return this.http.post<OrderView>(`/api/orders/${id}/accept`, {});
   }
-  calendar(from: string, days = 7): Observable<{ days: CalendarDay[] }> {
-    return this.http.get<{ days: CalendarDay[] }>('/api/delivery-calendar', { params: { from, days } });
+  calendar(from: string, days = 7): Observable<{ days: CalendarDay[]; timeZone: string }> {
+    return this.http.get<{ days: CalendarDay[]; timeZone: string }>('/api/delivery-calendar', { params: { from, days } });
   }
   settings(): Observable<DeliverySettings> {
     return this.http.get<DeliverySettings>('/api/delivery-calendar/settings');

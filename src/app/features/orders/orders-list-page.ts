@@ -4,6 +4,7 @@ import { RouterLink } from '@angular/router';
 
 import type { OrderSummary } from '@shared/contracts/orders';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
+import { farmDateLabel } from '@shared/time/farm-time';
 import { formatCents } from '@shared/units/money';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
 import { Session } from '../../core/session';
@@ -23,7 +24,7 @@ import { OrdersApi } from './orders-api';
           @for (o of list; track o.id) {
             <li>
               <a [routerLink]="['/orders', o.id]">Order {{ o.id }}: {{ o.bales }} bales of {{ o.lot.title }}</a>
-              <span>{{ statusLabel(o.status) }} · {{ money(o.totalCents) }} · {{ o.method === 'delivery' ? 'delivery' : 'pickup' }}@if (o.windowStart) { {{ o.windowStart.slice(0, 10) }} }</span>
+              <span>{{ statusLabel(o.status) }} · {{ money(o.totalCents) }} · {{ o.method === 'delivery' ? 'delivery' : 'pickup' }}@if (o.windowStart) { {{ farmDate(o.windowStart, o.farm.timeZone) }} }</span>
               <span class="who">{{ grower ? o.buyerName : o.farm.name }}</span>
             </li>
           }
@@ -44,4 +45,5 @@ export class OrdersListPage {
   protected readonly error = computed(() => errorOf(this.state()));
   protected readonly money = formatCents;
   protected readonly statusLabel = orderStatusLabel;
+  protected readonly farmDate = farmDateLabel;
 }

@@ -4,6 +4,7 @@ import { RouterLink } from '@angular/router';
 import { switchMap } from 'rxjs';
 import type { CalendarDay } from '@shared/contracts/orders';
 import { deliveryStatusLabel } from '@shared/lifecycle/delivery-lifecycle';
+import { farmTimeLabel } from '@shared/time/farm-time';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { OrdersApi } from '../../orders/orders-api';
 
@@ -37,7 +38,7 @@ const shift = (iso: string, days: number) => new Date(Date.parse(`${iso}T00:00:0
               <h2>{{ weekday(d.date) }} {{ d.date.slice(5) }}</h2>
               <p class="load">{{ d.deliveryDay ? d.bookedLoads + ' of ' + d.capacityLoads + ' loads' : 'no deliveries' }}</p>
               @for (o of d.orders; track o.id) {
-                <a [routerLink]="['/orders', o.id]">{{ o.method === 'pickup' ? 'Pickup ' + o.windowStart.slice(11, 16) : o.loads + ' load' + (o.loads > 1 ? 's' : '') }}: {{ o.buyerName }} ({{ label(o.deliveryStatus) }})</a>
+                <a [routerLink]="['/orders', o.id]">{{ o.method === 'pickup' ? 'Pickup ' + farmTime(o.windowStart) : o.loads + ' load' + (o.loads > 1 ? 's' : '') }}: {{ o.buyerName }} ({{ label(o.deliveryStatus) }})</a>
               }
             </li>
           }
@@ -62,12 +63,17 @@ export class DeliveryCalendarPage {
   private readonly api = inject(OrdersApi);
   protected readonly week = signal(mondayOf(new Date()));
   private readonly state = toSignal(toObservable(this.week).pipe(switchMap((from) => requestState(this.api.calendar(from, 7)))), {
-    initialValue: { status: 'loading' } as RequestState<{ days: CalendarDay[] }>,
+    initialValue: { status: 'loading' } as RequestState<{ days: CalendarDay[]; timeZone: string }>,
   });
   protected readonly days = computed(() => valueOf(this.state())?.days ?? null);
   protected readonly error = computed(() => errorOf(this.state()));
   protected readonly shift = shift;
   protected readonly label = deliveryStatusLabel;
+  /** A pickup's hour on the farm's own clock, its zone named. */
+  protected farmTime(iso: string): string {
+    const zone = valueOf(this.state())?.timeZone;
+    return zone ? farmTimeLabel(iso, zone) : '';
+  }
   protected weekday(iso: string): string {
     return WEEKDAYS[new Date(`${iso}T00:00:00Z`).getUTCDay()]!;
   }

@@ -8,6 +8,7 @@ import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import type { FarmProfile } from '@shared/contracts/selling';
+import { FARM_TIME_ZONES } from '@shared/time/farm-time';
 import { apiErrorMessage, apiFieldErrors } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 
@@ -38,7 +39,9 @@ export class FarmProfilePage implements OnInit {
     loadingFacilities: [''],
     pickupHours: [''],
     description: [''],
+    timeZone: [''],
   });
+  protected readonly zones = FARM_TIME_ZONES;
 
   ngOnInit(): void {
     void this.load();
@@ -57,8 +60,8 @@ export class FarmProfilePage implements OnInit {
   private show(farm: FarmProfile | null): void {
     this.farm.set(farm);
     if (farm) {
-      const { name, addressLine, zip, deliveryRadiusMi, loadingFacilities, pickupHours, description } = farm;
-      this.form.reset({ name, addressLine, zip, deliveryRadiusMi, loadingFacilities, pickupHours, description });
+      const { name, addressLine, zip, deliveryRadiusMi, loadingFacilities, pickupHours, description, timeZone } = farm;
+      this.form.reset({ name, addressLine, zip, deliveryRadiusMi, loadingFacilities, pickupHours, description, timeZone });
     }
   }
 
@@ -68,7 +71,7 @@ export class FarmProfilePage implements OnInit {
       return;
     }
     await this.run(async () => {
-      const { farm } = await firstValueFrom(this.api.saveFarm({ ...this.form.getRawValue(), deliveryRadiusMi: Number(this.form.controls.deliveryRadiusMi.value) }));
+      const { farm } = await firstValueFrom(this.api.saveFarm({ ...this.form.getRawValue(), deliveryRadiusMi: Number(this.form.controls.deliveryRadiusMi.value), timeZone: this.form.controls.timeZone.value || undefined }));
       this.show(farm);
       this.message.set(`Saved. Hay is loaded at ${farm.city}, ${farm.state}.`);
     });
