@@ -151,7 +151,8 @@ describe('buying a load', () => {
     const statuses = results.map((r) => r.status).sort();
     expect(statuses.filter((s) => s === 201)).toHaveLength(1);
     expect(statuses.filter((s) => s === 409)).toHaveLength(19);
-    for (const r of results.filter((x) => x.status === 409)) expect(r.body.error.message).toMatch(/no longer available/);
+    // A loser either lost the hold itself or, arriving after the winner's commit, read a lot with none left: both say so.
+    for (const r of results.filter((x) => x.status === 409)) expect(r.body.error.message).toMatch(/no longer available|no bales left/);
     expect(await balesLeft(lot.id)).toBe(0);
     const held = await t.deps.db.select().from(orders).where(eq(orders.lotId, lot.id));
     expect(held).toHaveLength(1);
