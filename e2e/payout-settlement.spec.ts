@@ -1,22 +1,14 @@
-import { expect, freshPage, test, type Page } from './support/test';
+import { expect, test, type Page } from './support/test';
 import type { OrderView } from '@shared/contracts/orders';
-import { ADMIN, BUYER, GROWER, signInAs } from './support/accounts';
+import { threeRoles, usd } from './support/accounts';
 import { callApi, csrfToken } from './support/app-api';
 import { deliveredPickupOrder } from './support/orders';
 import { platformBalanceCents, stripeGet } from './support/stripe-fake';
 
-/** US dollars as a US reader sees them, formatted by the runtime (not by the app's own money code). */
-const usd = (cents: number) => new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' }).format(cents / 100);
-
 test.describe.configure({ timeout: 300_000 });
 
 test('the admin settles a payout batch for a grower with a completed order: one transfer, paid once, in the grower’s history', async ({ browser }) => {
-  const grower = await freshPage(browser);
-  const buyer = await freshPage(browser);
-  const admin = await freshPage(browser);
-  await signInAs(grower, GROWER);
-  await signInAs(buyer, BUYER);
-  await signInAs(admin, ADMIN);
+  const { grower, buyer, admin } = await threeRoles(browser);
 
   // The grower finishes payout set-up on the farm page (the provider's onboarding, here the local fake).
   await payoutsReady(grower);

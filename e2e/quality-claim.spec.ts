@@ -1,24 +1,16 @@
-import { expect, freshPage, test } from './support/test';
+import { expect, test } from './support/test';
 import type { LotDetail } from '@shared/contracts/lots';
 import { simplePdf } from '../tests/support/simple-pdf';
-import { ADMIN, BUYER, GROWER, signInAs } from './support/accounts';
+import { BUYER, GROWER, threeRoles, usd } from './support/accounts';
 import { callApi } from './support/app-api';
 import { waitForMail } from './support/mail-catcher';
 import { deliveredPickupOrder } from './support/orders';
 import { platformBalanceCents } from './support/stripe-fake';
 
-/** US dollars as a US reader sees them, formatted by the runtime (not by the app's own money code). */
-const usd = (cents: number) => new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' }).format(cents / 100);
-
 test.describe.configure({ timeout: 300_000 });
 
 test('a buyer files a claim with a retest; the admin judges it beside the listing and refunds part; all three roles see the refund and the grower’s payout shrinks by it', async ({ browser }) => {
-  const grower = await freshPage(browser);
-  const buyer = await freshPage(browser);
-  const admin = await freshPage(browser);
-  await signInAs(grower, GROWER);
-  await signInAs(buyer, BUYER);
-  await signInAs(admin, ADMIN);
+  const { grower, buyer, admin } = await threeRoles(browser);
   const order = await deliveredPickupOrder(buyer, grower);
   const lot = await callApi<LotDetail>(buyer, 'GET', `/api/lots/${order.lot.id}`);
   const listed = lot.analysis!;

@@ -1,4 +1,5 @@
-import { expect, type Page } from '@playwright/test';
+import { expect, type Browser, type Page } from '@playwright/test';
+import { freshPage } from './test';
 
 // Demo accounts from the seed (README lists them).
 export const GROWER = { email: 'grower@demo.baleproof.example', password: 'demo-grower-pass' };
@@ -19,3 +20,15 @@ export async function listedLotIds(page: Page, count: number): Promise<number[]>
   expect(res.ok()).toBe(true);
   return ((await res.json()) as { items: { id: number }[] }).items.map((i) => i.id);
 }
+
+/** A grower, a buyer and an admin, each signed in on a page of their own (own cookies). */
+export async function threeRoles(browser: Browser): Promise<{ grower: Page; buyer: Page; admin: Page }> {
+  const [grower, buyer, admin] = [await freshPage(browser), await freshPage(browser), await freshPage(browser)];
+  await signInAs(grower, GROWER);
+  await signInAs(buyer, BUYER);
+  await signInAs(admin, ADMIN);
+  return { grower, buyer, admin };
+}
+
+/** US dollars as a US reader sees them, formatted by the runtime (not by the app's own money code). */
+export const usd = (cents: number) => new Intl.NumberFormat('en-US', { style: 'currency', currency: 'USD' }).format(cents / 100);
