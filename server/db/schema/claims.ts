@@ -1,6 +1,7 @@
 import { sql } from 'drizzle-orm';
 import { boolean, check, date, index, integer, jsonb, pgTable, text, timestamp, uniqueIndex } from 'drizzle-orm/pg-core';
 import { claimStatus } from './enums';
+import { orderLines } from './order-lines';
 import { orders } from './orders';
 import { storedFiles } from './files';
 import { users } from './users';
@@ -11,6 +12,8 @@ export const qualityClaims = pgTable(
   {
     id: integer().primaryKey().generatedAlwaysAsIdentity(),
     orderId: integer().notNull().references(() => orders.id, { onDelete: 'restrict' }),
+    /** The line (lot) the problem is about, when the buyer named one; null means the whole order. */
+    orderLineId: integer().references(() => orderLines.id, { onDelete: 'restrict' }),
     openedBy: integer().notNull().references(() => users.id, { onDelete: 'restrict' }),
     reason: text().notNull(),
     /** The certified lab's retest report PDF. */

@@ -7,6 +7,7 @@ export * from './sampling-records';
 export * from './lab-analyses';
 export * from './photos';
 export * from './orders';
+export * from './order-lines';
 export * from './deliveries';
 export * from './order-events';
 export * from './order-refunds';
