@@ -76,7 +76,7 @@ export class ClaimsService {
     const claim = await this.row(claimId);
     if (claim.openedBy !== buyer.id) throw notFound('That claim');
     if (claim.status !== 'open') throw conflict('claim_decided', 'This claim has been decided; nothing can be added.');
-    sniffPdf(file.buffer, file.originalname);
+    await sniffPdf(file.buffer, file.originalname);
     const key = `claims/${claimId}/${randomUUID()}.pdf`;
     await writeThenRecord(this.deps.storage, [{ key, data: file.buffer }], () =>
       this.deps.db.transaction(async (tx) => {

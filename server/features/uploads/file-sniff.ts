@@ -1,3 +1,4 @@
+import { PDFDocument } from 'pdf-lib';
 import sharp, { type Metadata } from 'sharp';
 import { HttpError } from '../../middleware/http-error';
 import { MAX_INPUT_PIXELS } from '../photos/photo-variants';
@@ -46,13 +47,23 @@ export async function sniffPhoto(data: Buffer, name: string): Promise<SniffedPho
 }
 
 /**
- * A PDF starts with `%PDF-` (within the first 1,024 bytes, as readers allow) and ends with `%%EOF`
- * (possibly followed by whitespace or a short trailer of junk, as many generators leave).
+ * A PDF is accepted only if it parses as one: the `%PDF-` header and `%%EOF` marker are checked first
+ * (cheap), then pdf-lib reads the cross-reference table, trailer and catalog and must find at least one
+ * page. A file that merely wraps HTML or script between those two markers (a polyglot) has no document
+ * structure and is refused. Encrypted PDFs are accepted here (their text is read later, or reported unreadable).
  */
-export function sniffPdf(data: Buffer, name: string): void {
+export async function sniffPdf(data: Buffer, name: string): Promise<void> {
+  const refuse = (message: string) =>
+    new HttpError(400, 'not_a_pdf', `“${name}” ${message} Upload the lab report as the PDF the lab sent.`, [{ path: 'report', message: 'Not a PDF.' }]);
   const head = data.subarray(0, 1024).toString('latin1');
   const tail = data.subarray(Math.max(0, data.length - 1024)).toString('latin1');
-  if (!head.includes('%PDF-') || !tail.includes('%%EOF')) {
-    throw new HttpError(400, 'not_a_pdf', `“${name}” is not a PDF file. Upload the lab report as the PDF the lab sent.`, [{ path: 'report', message: 'Not a PDF.' }]);
+  if (!head.includes('%PDF-') || !tail.includes('%%EOF')) throw refuse('is not a PDF file.');
+  let pages = 0;
+  try {
+    const doc = await PDFDocument.load(data, { ignoreEncryption: true, updateMetadata: false, throwOnInvalidObject: true });
+    pages = doc.getPageCount();
+  } catch {
+    throw refuse('is not a PDF we can open: its document structure is missing or damaged.');
   }
+  if (pages < 1) throw refuse('has no pages.');
 }

@@ -12,7 +12,7 @@ import { writeThenRecord } from './write-then-record';
 /** Stores a lab report PDF (checked by content) with the values read from its text, and links it to the lot's current analysis. */
 export async function attachLabReport(deps: Pick<ApiDeps, 'db' | 'storage' | 'clock'>, lot: LotRow, ownerId: number, file: Express.Multer.File): Promise<{ id: number; originalName: string; sizeBytes: number; reading: ReportReading | null }> {
   const name = displayName(file);
-  sniffPdf(file.buffer, name);
+  await sniffPdf(file.buffer, name);
   const key = `reports/${lot.id}/${randomUUID()}.pdf`;
   const steps = new LotStepsService(deps.db, deps.clock);
   // Read before storing, so the reading lands in the same transaction as the file's row.

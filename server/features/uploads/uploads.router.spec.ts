@@ -1,5 +1,6 @@
 import { readdir } from 'node:fs/promises';
 import { eq, inArray } from 'drizzle-orm';
+import { PDFDocument } from 'pdf-lib';
 import sharp from 'sharp';
 import type { FileStorage } from '../../adapters/storage/file-storage';
 import { createApi } from '../../api';
@@ -103,6 +104,29 @@ describe('uploads API', () => {
     const full = makePdf();
     const truncated = await upload('report', [{ data: full.subarray(0, full.length - 40), name: 'report.pdf' }]);
     expect(truncated.status).toBe(400);
+  });
+
+  it('refuses an HTML/JS polyglot wrapped in %PDF- … %%EOF, and accepts a real PDF written by pdf-lib', async () => {
+    // A polyglot: the PDF magic and end marker around an HTML page (OWASP "file upload": check content, not markers).
+    const polyglot = Buffer.from('%PDF-1.7\n<html><body><script>fetch("/api/auth/me").then(r=>r.text()).then(alert)</script></body></html>\n%%EOF\n');
+    const rows = await growerFileCount();
+    const res = await upload('report', [{ data: polyglot, name: 'report.pdf' }]);
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('not_a_pdf');
+    // The same markers around one bare object: still no catalog or page tree.
+    const halfPdf = Buffer.from('%PDF-1.4\n1 0 obj\n<< /Type /Catalog >>\nendobj\n<script>alert(document.cookie)</script>\n%%EOF');
+    expect((await upload('report', [{ data: halfPdf, name: 'report.pdf' }])).status).toBe(400);
+    expect(await growerFileCount()).toBe(rows);
+    const doc = await PDFDocument.create();
+    doc.addPage().drawText('Invented lab: crude protein 12.0 % DM');
+    const real = Buffer.from(await doc.save());
+    const ok = await upload('report', [{ data: real, name: 'pdf-lib.pdf' }]);
+    expect(ok.status).toBe(201);
+    const served = await grower.agent.raw.get(`/uploads/lots/${lotId}/report`).buffer(true);
+    expect(served.headers['content-type']).toBe('application/pdf');
+    expect(served.headers['x-content-type-options']).toBe('nosniff');
+    expect(served.headers['content-disposition']).toMatch(/^inline; filename="lab-report-lot-\d+\.pdf"$/);
+    expect(Buffer.from(served.body).equals(real)).toBe(true);
   });
 
   it('refuses an image over the pixel limit before decoding it (decompression bomb)', async () => {

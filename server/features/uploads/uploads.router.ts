@@ -48,7 +48,7 @@ export function uploadsRouter(deps: ApiDeps): Router {
   // Reads a report without keeping it, so the lot form can fill in the values for the grower to confirm.
   router.post('/report-reading', requireRole('grower'), acceptReport, async (req, res) => {
     const [file] = filesOf(req, 'lab report PDF');
-    sniffPdf(file!.buffer, displayName(file!));
+    await sniffPdf(file!.buffer, displayName(file!));
     const reading = await readLabReportPdf(file!.buffer);
     res.json({ reading, values: prefillFromReading(reading), summary: readingSummary(reading) });
   });
