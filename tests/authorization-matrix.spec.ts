@@ -135,8 +135,8 @@ const POLICY: Record<string, Rule> = {
   'GET /messages/threads': { allow: ['buyer', 'grower'] },
   'GET /messages/threads/:id': { allow: ['buyer', 'grower'], on: 'thread', reach: ['buyer', 'grower'] },
   'POST /messages/threads/:id': { allow: ['buyer', 'grower'], on: 'thread', reach: ['buyer', 'grower'], body: () => MESSAGE },
-  'GET /messages/lots/:lotId': { allow: ['buyer', 'grower'], on: 'listedLot' },
-  // Only buyers open a conversation about a lot (the messages router admits growers; this step refuses them).
+  // Only buyers open or read a conversation about a lot; the router refuses growers before the service.
+  'GET /messages/lots/:lotId': { allow: ['buyer'], on: 'listedLot' },
   'POST /messages/lots/:lotId': { allow: ['buyer'], on: 'listedLot', body: () => MESSAGE },
 };
 

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { and, eq } from 'drizzle-orm';
-import { auditEvents, orders, payoutLines } from '../../db/schema';
+import { auditEvents, orders, payoutLines, storedFiles, users } from '../../db/schema';
+import { PDF_MAX_BYTES } from '../uploads/upload-limits';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { signedInUser } from '../../../tests/support/grower-lot';
@@ -52,6 +53,18 @@ describe('quality claims', () => {
     expect(pdf.status).toBe(201);
     expect(pdf.body.retest.reportUrl).toBe(`/api/claims/${res.body.id}/retest`);
     expect((await other.agent.get(`/claims/${res.body.id}`)).status).toBe(404);
+    // A stranger's retest upload is refused before its body is read: an oversized file gets 404 (not the
+    // upload limit's 413, which would mean it was buffered) and no file row or stored file appears.
+    const [otherUser] = await t.deps.db.select({ id: users.id }).from(users).where(eq(users.email, other.email));
+    const filesBefore = await t.deps.db.select({ id: storedFiles.id }).from(storedFiles).where(eq(storedFiles.ownerId, otherUser!.id));
+    const otherToken = await other.agent.token();
+    const oversized = Buffer.concat([simplePdf(['Retest']), Buffer.alloc(PDF_MAX_BYTES + 1024, 32)]);
+    const stranger = await other.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', otherToken).attach('report', oversized, 'retest.pdf');
+    expect(stranger.status).toBe(404);
+    const strangerSmall = await other.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', otherToken).attach('report', simplePdf(['Not mine']), 'retest.pdf');
+    expect(strangerSmall.status).toBe(404);
+    expect(await t.deps.db.select({ id: storedFiles.id }).from(storedFiles).where(eq(storedFiles.ownerId, otherUser!.id))).toEqual(filesBefore);
+    expect((await buyer.agent.get(`/claims/${res.body.id}`)).body.retest.reportUrl).toBe(`/api/claims/${res.body.id}/retest`);
 
     // The order page lists the order's claims for its buyer, its grower and admins, and for nobody else.
     const grower = t.agent();

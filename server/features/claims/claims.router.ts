@@ -22,7 +22,11 @@ export function claimsRouter(deps: ApiDeps): Router {
   router.post('/', requireRole('buyer'), async (req, res) => {
     res.status(201).json(await service.open(req.user!, OpenClaimSchema.parse(req.body)));
   });
-  router.post('/:id/retest', requireRole('buyer'), acceptReport, async (req, res) => {
+  // Ownership is checked before the body is read, so a stranger's upload is never buffered or stored.
+  router.post('/:id/retest', requireRole('buyer'), async (req, res, next) => {
+    await service.openClaimOf(req.user!, Id.parse(req.params).id);
+    acceptReport(req, res, next);
+  }, async (req, res) => {
     const [file] = filesOf(req, 'retest report PDF');
     res.status(201).json(await service.attachRetest(req.user!, Id.parse(req.params).id, file!));
   });

@@ -73,9 +73,7 @@ export class ClaimsService {
 
   /** The buyer attaches the certified lab's retest PDF to their open claim. */
   async attachRetest(buyer: Express.User, claimId: number, file: Express.Multer.File): Promise<ClaimView> {
-    const claim = await this.row(claimId);
-    if (claim.openedBy !== buyer.id) throw notFound('That claim');
-    if (claim.status !== 'open') throw conflict('claim_decided', 'This claim has been decided; nothing can be added.');
+    await this.openClaimOf(buyer, claimId);
     await sniffPdf(file.buffer, file.originalname);
     const key = `claims/${claimId}/${randomUUID()}.pdf`;
     await writeThenRecord(this.deps.storage, [{ key, data: file.buffer }], () =>
@@ -181,6 +179,14 @@ export class ClaimsService {
     const result = checkOrderTransition(from, event, actor);
     if (!result.ok) throw result.reason === 'not_allowed' ? forbidden(result.message) : conflict('order_state', result.message);
     return result.to;
+  }
+
+  /** The buyer's own open claim (checked before an upload's body is read, and again before it is stored). */
+  async openClaimOf(buyer: Express.User, claimId: number): Promise<ClaimRow> {
+    const claim = await this.row(claimId);
+    if (claim.openedBy !== buyer.id) throw notFound('That claim');
+    if (claim.status !== 'open') throw conflict('claim_decided', 'This claim has been decided; nothing can be added.');
+    return claim;
   }
 
   private async row(claimId: number): Promise<ClaimRow> {

@@ -72,6 +72,10 @@ describe('messages between buyers and growers', () => {
     // Growers answer; they do not open threads on lots.
     const growerSide = await growerAgent(grower);
     expect((await growerSide.post(`/messages/lots/${lot.id}`, { body: 'Hi' })).status).toBe(403);
+    // The router refuses them before reading the request: a bad body or lot id still answers 403, not 400.
+    expect((await growerSide.post(`/messages/lots/${lot.id}`, {})).status).toBe(403);
+    expect((await growerSide.post('/messages/lots/abc', { body: 'Hi' })).status).toBe(403);
+    expect((await growerSide.get(`/messages/lots/${lot.id}`)).status).toBe(403);
   });
 
   it('two first messages at once share one thread (unique per buyer and lot, checked in PostgreSQL)', async () => {

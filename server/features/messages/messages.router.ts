@@ -32,12 +32,13 @@ export function messagesRouter(deps: ApiDeps, notices: MessageNotices = outboxMe
     res.status(201).json(await service.read(req.user!, posted.threadId));
   });
 
-  router.get('/lots/:lotId', async (req, res) => {
+  // Only buyers open or read a conversation about a lot; growers answer in their inbox (threads above).
+  router.get('/lots/:lotId', requireRole('buyer'), async (req, res) => {
     const { lotId } = LotParams.parse(req.params);
     res.json({ thread: await service.threadAboutLot(req.user!, lotId) });
   });
 
-  router.post('/lots/:lotId', async (req, res) => {
+  router.post('/lots/:lotId', requireRole('buyer'), async (req, res) => {
     const { lotId } = LotParams.parse(req.params);
     const { body } = MessageCreateSchema.parse(req.body);
     const posted = await service.writeAboutLot(req.user!, lotId, body);

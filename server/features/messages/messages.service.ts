@@ -3,7 +3,7 @@ import type { MessageView, ThreadDetail, ThreadView } from '@shared/contracts/me
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { farms, lots, messages, messageThreads, users } from '../../db/schema';
-import { conflict, forbidden, notFound } from '../../middleware/http-error';
+import { conflict, notFound } from '../../middleware/http-error';
 
 /** What a notice e-mail needs to know; sent after the message is stored (see message-notices.ts). */
 export interface PostedMessage {
@@ -29,7 +29,6 @@ export class MessagesService {
 
   /** A buyer writes to a lot's grower: the thread for this buyer and lot is made on the first message. */
   async writeAboutLot(buyer: Participant, lotId: number, body: string): Promise<PostedMessage> {
-    if (buyer.role !== 'buyer') throw forbidden('Only buyers start a conversation about a lot; growers answer in their inbox.');
     const [lot] = await this.db
       .select({ id: lots.id, status: lots.status, growerId: farms.ownerId })
       .from(lots)
