@@ -12,8 +12,8 @@ export async function fillBenchData(db: Db, lotCount: number, farmCount = 2000):
   await db.execute(sql`select setseed(0.42)`);
   await db.execute(sql`insert into users (email, password_hash, display_name, role)
     select 'bench' || g || '@bench.example', 'x', 'Bench grower ' || g, 'grower' from generate_series(1, ${farmCount}) g`);
-  await db.execute(sql`insert into farms (owner_id, name, address_line, city, state, zip, latitude, longitude)
-    select u.id, 'Bench farm ' || u.id, 'Road', 'Town', 'KS', '66502', 33 + random() * 13, -104 + random() * 16
+  await db.execute(sql`insert into farms (owner_id, name, address_line, city, state, zip, time_zone, latitude, longitude)
+    select u.id, 'Bench farm ' || u.id, 'Road', 'Town', 'KS', '66502', 'America/Chicago', 33 + random() * 13, -104 + random() * 16
     from users u where u.email like 'bench%@bench.example' order by u.id`);
   await db.execute(sql`insert into lots (farm_id, title, field_name, cutting, forage_type, forage_class, harvest_started_on, harvest_ended_on,
       storage, bale_type, bale_count, bales_available, avg_bale_weight_lb, price_cents_per_ton, status, published_at)
