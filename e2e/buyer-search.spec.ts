@@ -134,7 +134,8 @@ test.describe('buyers find and choose hay', () => {
 
     await expect(page.getByRole('heading', { level: 1, name: 'Your hay list' })).toBeVisible();
     // Lot by lot, the hay list holds exactly the planned mix: the same lots and the same bales, each priced
-    // again from the live lot; it survives a reload (kept in the browser).
+    // again from the live lot at the same hay cost the plan stated (the plan prices the whole bales it recommends,
+    // as the order quote does); it survives a reload (kept in the browser).
     const amount = (text: string | null | undefined) => Number((text ?? '').replace(/[^\d.]/g, ''));
     const expectPlannedLines = async () => {
       await expect(page.getByRole('article')).toHaveCount(planned.length);
@@ -142,6 +143,7 @@ test.describe('buyers find and choose hay', () => {
         const article = page.getByRole('article', { name: line.lot });
         await expect(article.getByRole('spinbutton', { name: 'Quantity' })).toHaveValue(String(amount(line.bales)));
         await expect(article.getByRole('term').first()).toContainText(`Hay (${amount(line.bales)} bales`);
+        await expect(article.getByRole('definition').first()).toHaveText(line.hay!);
       }
     };
     await expectPlannedLines();

@@ -25,6 +25,8 @@ export interface PlanCandidate {
   farmName: string;
   distanceMi: number;
   priceCentsPerTon: number;
+  pricingUnit: 'ton' | 'bale';
+  priceCentsPerBale: number | null;
   freightCentsPerLoadedMile: number;
   tonsAvailable: number;
   balesAvailable: number;
@@ -41,7 +43,7 @@ export interface PlanPurchaseLine {
   title: string;
   farmName: string;
   tons: number;
-  /** Whole bales covering `tons`, never more than are available. */
+  /** Whole bales to buy, never more than are available; `tons` is their weight and `hayCents` their order price. */
   bales: number;
   loads: number;
   hayCents: number;

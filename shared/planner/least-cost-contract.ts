@@ -63,11 +63,24 @@ export const CandidateLotSchema = z
     crudeProteinPctDm: z.number().min(0, 'crudeProteinPctDm cannot be negative').max(60, 'crudeProteinPctDm cannot exceed 60'),
     /** Horse digestible energy, Mcal per kg dry matter. */
     deMcalPerKgDm: z.number().min(0, 'deMcalPerKgDm cannot be negative').max(5, 'deMcalPerKgDm cannot exceed 5'),
+    /**
+     * Average bale weight, lb. When given, the plan buys whole bales (never more than the stock holds) and
+     * prices them as an order for those bales is priced (`goodsCents` in shared/pricing); without it, tons.
+     */
+    avgBaleWeightLb: z.number().positive('avgBaleWeightLb must be more than 0').optional(),
+    /** How the grower sells the lot: 'ton' (default) weighs the bales at `pricePerTonCents`; 'bale' counts them at `priceCentsPerBale`. */
+    pricingUnit: z.enum(['ton', 'bale']).default('ton'),
+    /** Price of one bale, whole cents (lots sold by the bale). */
+    priceCentsPerBale: z.number().int('priceCentsPerBale must be whole cents').positive('priceCentsPerBale must be more than 0').nullable().default(null),
   })
   .strict()
   .refine((lot) => lot.minOrderTons <= lot.tonsAvailable, {
     path: ['minOrderTons'],
     message: 'minOrderTons cannot exceed tonsAvailable',
+  })
+  .refine((lot) => lot.pricingUnit === 'ton' || (lot.priceCentsPerBale !== null && lot.avgBaleWeightLb !== undefined), {
+    path: ['priceCentsPerBale'],
+    message: 'a lot sold by the bale needs priceCentsPerBale and avgBaleWeightLb',
   });
 
 export const FREIGHT_MODELS = ['per-load', 'per-ton'] as const;
@@ -103,11 +116,13 @@ export type FreightModel = (typeof FREIGHT_MODELS)[number];
 /** One lot in the plan. */
 export interface PlanLine {
   readonly lotId: string;
-  /** Short tons as-fed to buy, rounded up to 0.001 t (2 lb). */
+  /** Whole bales to buy, when the lot's bale weight was given (else absent). */
+  readonly bales?: number;
+  /** Short tons as-fed to buy: the weight of `bales`, or rounded up to 0.001 t (2 lb) when bales are not known. */
   readonly tons: number;
   /** Truck loads to haul it (counted even when freight is free, e.g. the buyer collects). */
   readonly loads: number;
-  /** Hay before freight, whole cents. */
+  /** Hay before freight, whole cents: what an order for `bales` costs (shared/pricing `goodsCents`). */
   readonly hayCents: Cents;
   /** Freight, whole cents (per whole load, or pro rata under the per-ton model). */
   readonly freightCents: Cents;

@@ -4,6 +4,7 @@
  */
 
 import type { Solution } from 'yalps';
+import { balesForTons } from '../units/bales';
 import { type Cents, formatCents } from '../units/money';
 import { formatNumber, roundTo } from '../units/rounding';
 import type { FreightModel, LeastCostPlan, ParsedLeastCostRequest, PlanLine } from './least-cost-contract';
@@ -44,9 +45,20 @@ export function lineSentence(y: LotYield, line: PlanLine, freightModel: FreightM
         : `plus ${formatCents(line.freightCents)} freight spread per ton`;
   const limits: string[] = [];
   if (Math.abs(line.tons - lot.tonsAvailable) < 1e-9) limits.push('all of its stock');
-  else if (lot.minOrderTons > 0 && Math.abs(line.tons - lot.minOrderTons) < 0.0015) limits.push('its minimum order');
+  else if (lot.minOrderTons > 0 && (line.bales === undefined ? Math.abs(line.tons - lot.minOrderTons) < 0.0015 : line.bales === balesForTons(lot.minOrderTons, lot.avgBaleWeightLb!))) {
+    limits.push('its minimum order');
+  }
   const limitText = limits.length > 0 ? ` That is ${limits.join(' and ')}.` : '';
-  return `From ${lotText(lot)}, buy ${tonsText(line.tons)} at ${formatCents(lot.pricePerTonCents)}/t (${formatCents(line.hayCents)}) ${freight}: ${formatCents(line.costCents)} in all, ${formatCents(line.costCents / line.tons)}/t delivered.${limitText}`;
+  const quantity = line.bales === undefined ? tonsText(line.tons) : `${formatNumber(line.bales, 0)} ${line.bales === 1 ? 'bale' : 'bales'} (${tonsText(line.tons)})`;
+  const price = lot.pricingUnit === 'bale' && lot.priceCentsPerBale !== null ? `${formatCents(lot.priceCentsPerBale)} a bale` : `${formatCents(lot.pricePerTonCents)}/t`;
+  return `From ${lotText(lot)}, buy ${quantity} at ${price} (${formatCents(line.hayCents)}) ${freight}: ${formatCents(line.costCents)} in all, ${formatCents(line.costCents / line.tons)}/t delivered.${limitText}`;
+}
+
+/** Why the hay bought is a little more than the need: nobody sells part of a bale. */
+export function wholeBaleSentences(lines: readonly PlanLine[]): string[] {
+  return lines.some((l) => l.bales !== undefined)
+    ? ['Quantities are rounded up to whole bales, and the cost is what an order for those bales costs, so the hay supplies a little more than the need.']
+    : [];
 }
 
 export function bindingSentences(supplied: LeastCostPlan['supplied'], request: ParsedRequest): string[] {

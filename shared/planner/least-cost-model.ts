@@ -17,6 +17,8 @@
 
 import type { Model, Solution } from 'yalps';
 import { deliveredPrice } from '../pricing/delivered-price';
+import { goodsCents } from '../pricing/order-total';
+import { balesForTons, balesToTons, balesWithinTons } from '../units/bales';
 import { freightPerLoadCents, loadsForTons } from '../pricing/freight';
 import { type Cents, roundCents } from '../units/money';
 import { KG_PER_SHORT_TON } from '../units/mass';
@@ -108,18 +110,35 @@ export function buildModel(yields: readonly LotYield[], request: ParsedRequest, 
 export interface PricedLines {
   readonly chosen: readonly { y: LotYield; line: PlanLine }[];
   readonly totalCostCents: Cents;
+  /** What the bought hay supplies as eaten (whole bales, or tons rounded up). */
   readonly supplied: LeastCostPlan['supplied'];
+  /** What the solver's exact tons supply, before rounding to what can be bought: shows which need binds. */
+  readonly solved: LeastCostPlan['supplied'];
 }
 
-/** Turns raw solver tons into plan lines: rounded up to 0.001 t, priced with whole-load or pro-rata freight. */
+/** What the buyer buys of a lot for the solver's raw tons: whole bales when the bale weight is known, else tons to 0.001 t. */
+function purchase(lot: Lot, raw: number): { tons: number; bales?: number } {
+  if (lot.avgBaleWeightLb === undefined) {
+    // Round up so rounding never leaves a shortfall; never above the stock.
+    return { tons: Math.min(lot.tonsAvailable, ceilTo(raw - 1e-9, 3)) };
+  }
+  const bales = Math.min(balesWithinTons(lot.tonsAvailable, lot.avgBaleWeightLb), balesForTons(Math.max(0, raw - 1e-9), lot.avgBaleWeightLb));
+  return { bales, tons: balesToTons(bales, lot.avgBaleWeightLb) };
+}
+
+/**
+ * Turns raw solver tons into plan lines: whole bales (or tons rounded up to 0.001 t), the hay priced as an
+ * order for them is priced (`goodsCents`), freight per whole load or pro rata.
+ */
 export function priceLines(yields: readonly LotYield[], rawTons: readonly number[], request: ParsedRequest, freightModel: FreightModel): PricedLines {
   const chosen: { y: LotYield; line: PlanLine }[] = [];
   const supplied = { deMcal: 0, crudeProteinKg: 0, dryMatterKg: 0 };
+  const solved = { deMcal: 0, crudeProteinKg: 0, dryMatterKg: 0 };
   yields.forEach((y, i) => {
     const raw = rawTons[i] ?? 0;
     if (raw <= 1e-6) return;
-    // Round up so rounding never leaves a shortfall; never above the stock.
-    const tons = Math.min(y.lot.tonsAvailable, ceilTo(raw - 1e-9, 3));
+    const { tons, bales } = purchase(y.lot, raw);
+    if (tons <= 0) return;
     const price = deliveredPrice({
       pricePerTonCents: y.lot.pricePerTonCents,
       tons,
@@ -127,14 +146,20 @@ export function priceLines(yields: readonly LotYield[], rawTons: readonly number
       distanceMi: y.lot.distanceMi,
       tonsPerLoad: request.tonsPerLoad,
     });
+    const hayCents =
+      bales === undefined
+        ? price.hayCents
+        : goodsCents({ pricingUnit: y.lot.pricingUnit, priceCentsPerTon: y.lot.pricePerTonCents, priceCentsPerBale: y.lot.priceCentsPerBale, avgBaleWeightLb: y.lot.avgBaleWeightLb! }, bales);
     const freightCents = freightModel === 'per-load' ? price.freightCents : roundCents((tons * y.freightPerLoadCents) / request.tonsPerLoad);
     chosen.push({
       y,
-      line: { lotId: y.lot.lotId, tons, loads: price.loads, hayCents: price.hayCents, freightCents, costCents: price.hayCents + freightCents },
+      line: { lotId: y.lot.lotId, ...(bales === undefined ? {} : { bales }), tons, loads: price.loads, hayCents, freightCents, costCents: hayCents + freightCents },
     });
-    supplied.deMcal += tons * y.deMcalPerTon;
-    supplied.crudeProteinKg += tons * y.cpKgPerTon;
-    supplied.dryMatterKg += tons * y.dmKgPerTon;
+    for (const [sum, t] of [[supplied, tons], [solved, raw]] as const) {
+      sum.deMcal += t * y.deMcalPerTon;
+      sum.crudeProteinKg += t * y.cpKgPerTon;
+      sum.dryMatterKg += t * y.dmKgPerTon;
+    }
   });
-  return { chosen, totalCostCents: chosen.reduce((sum, c) => sum + c.line.costCents, 0), supplied };
+  return { chosen, totalCostCents: chosen.reduce((sum, c) => sum + c.line.costCents, 0), supplied, solved };
 }

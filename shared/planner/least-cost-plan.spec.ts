@@ -212,6 +212,47 @@ describe('leastCostPlan', () => {
   });
 });
 
+describe('leastCostPlan in whole bales: the stated cost is what the buyer pays for the bales it recommends', () => {
+  // A lot of 1,300 lb round bales at 88 % DM and 2.0 Mcal/kg DM; the herd needs 10,000 Mcal. Tons for the energy alone:
+  // 10,000 / (907.18 kg × 0.88 × 2.0) = 6.263 t, i.e. 6.263 × 2,000 / 1,300 = 9.64 bales, so the buyer must buy 10 bales
+  // = 10 × 1,300 / 2,000 = 6.5 t (hand arithmetic; $/ton × tons, domain brief §11).
+  const needs = { deMcal: 10000, crudeProteinKg: 0, maxDryMatterKg: 1e6 };
+  const rounds = { dryMatterPct: 88, deMcalPerKgDm: 2.0, avgBaleWeightLb: 1300, tonsAvailable: 26 }; // 40 bales
+
+  it('priced by the ton: 10 bales × 1,300 lb ÷ 2,000 × $180/t = $1,170.00, not the $1,127.52 of the 6.264 t the herd eats', () => {
+    const plan = leastCostPlan({ needs, lots: [lot({ lotId: 'rounds', pricePerTonCents: 18000, ...rounds })] });
+    expect(plan.lines).toEqual([{ lotId: 'rounds', bales: 10, tons: 6.5, loads: 1, hayCents: 117000, freightCents: 0, costCents: 117000 }]);
+    expect(plan.totalCostCents).toBe(117000);
+    expect(plan.explanation.join(' ')).toContain('buy 10 bales (6.50 t)');
+  });
+
+  it('priced by the bale: 10 bales × $90.00 = $900.00, as the grower counts them', () => {
+    // $90 a 1,300 lb bale is $138.46/t ($90 × 2,000 / 1,300, domain brief §11), the ton price the search compares lots on.
+    const plan = leastCostPlan({
+      needs,
+      lots: [lot({ lotId: 'rounds', pricePerTonCents: 13846, pricingUnit: 'bale', priceCentsPerBale: 9000, ...rounds })],
+    });
+    expect(plan.lines.map((l) => [l.bales, l.hayCents])).toEqual([[10, 90000]]);
+    expect(plan.totalCostCents).toBe(90000);
+  });
+
+  it('never plans more bales than the lot has: 9 bales left (5.85 t) and the rest from a second lot', () => {
+    // Need 10 t worth of energy; the cheap lot has 9 × 1,300 lb = 5.85 t; the rest, 4.15 t, in 60 lb small bales is
+    // 4.15 × 2,000 / 60 = 138.3 → 139 bales = 4.17 t at $200/t = $834.00 (hand arithmetic).
+    const plan = leastCostPlan({
+      needs: { deMcal: 10 * dmPerTon(90) * 2.0, crudeProteinKg: 0, maxDryMatterKg: 1e6 },
+      lots: [
+        lot({ lotId: 'rounds', pricePerTonCents: 15000, avgBaleWeightLb: 1300, tonsAvailable: 5.85 }),
+        lot({ lotId: 'smalls', pricePerTonCents: 20000, avgBaleWeightLb: 60 }),
+      ],
+    });
+    expect(plan.lines.map((l) => [l.lotId, l.bales, l.tons, l.hayCents])).toEqual([
+      ['rounds', 9, 5.85, 87750],
+      ['smalls', 139, 4.17, 83400],
+    ]);
+  });
+});
+
 /** Deterministic pseudo-random lots (Park–Miller generator) resembling a regional market. */
 function randomLots(count: number, seed: number): CandidateLot[] {
   let state = seed;

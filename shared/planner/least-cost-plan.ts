@@ -30,6 +30,7 @@ import {
   perTonSentences,
   summarySentences,
   unusedSentences,
+  wholeBaleSentences,
 } from './least-cost-explanation';
 import { buildModel, type LotYield, lotYield, priceLines, tonsFrom } from './least-cost-model';
 import type { HerdNeedsPlan } from './herd-needs';
@@ -124,12 +125,13 @@ function describePlan(
   rawTons: readonly number[],
   notes: readonly string[],
 ): LeastCostPlan {
-  const { chosen, totalCostCents, supplied } = priceLines(yields, rawTons, request, freightModel);
+  const { chosen, totalCostCents, supplied, solved } = priceLines(yields, rawTons, request, freightModel);
   const lines = chosen.map((c) => c.line);
   const explanation = [
     ...summarySentences(lines, totalCostCents, supplied, request),
     ...chosen.map(({ y, line }) => lineSentence(y, line, freightModel)),
-    ...bindingSentences(supplied, request),
+    ...bindingSentences(solved, request),
+    ...wholeBaleSentences(lines),
     ...forageSentences(supplied, request),
     ...mixSentences(chosen, request),
     ...unusedSentences(yields, chosen, request),

@@ -20,3 +20,9 @@ export function balesForTons(tons: number, baleWeightLb: number): number {
   if (!(tons >= 0) || !Number.isFinite(tons)) throw new RangeError(`tons must be a non-negative number; got ${tons}`);
   return Math.ceil(Number(((tons * LB_PER_SHORT_TON) / positive(baleWeightLb, 'baleWeightLb')).toPrecision(12)));
 }
+
+/** Whole bales that fit within `tons` short tons (rounded down; float noise ignored). */
+export function balesWithinTons(tons: number, baleWeightLb: number): number {
+  if (!(tons >= 0) || !Number.isFinite(tons)) throw new RangeError(`tons must be a non-negative number; got ${tons}`);
+  return Math.floor(Number(((tons * LB_PER_SHORT_TON) / positive(baleWeightLb, 'baleWeightLb')).toPrecision(12)));
+}

@@ -155,15 +155,16 @@ describe('planner API', () => {
       // x = 832.5 − 1.2y and 0.128y = 13.05 → y = 101.95, x = 710.16 (137,110/k): the cheapest vertex.
       // Tons bought = kg DM ÷ k, with k = 907.2 kg × 90 % DM × (1 − 1.3 % waste).
       const k = KG_PER_SHORT_TON * 0.9 * 0.987;
-      const tons = (id: number) => body.lines.find((l: { lotId: number }) => l.lotId === id)?.tons;
+      // The buyer buys whole 60 lb bales: bales = ⌈tons × 2,000 / 60⌉, weighing bales × 60 / 2,000 t (domain brief §11).
+      const bales = (kgDm: number) => Math.ceil(((kgDm / k) * 2000) / 60);
+      const line = (id: number) => body.lines.find((l: { lotId: number }) => l.lotId === id);
       expect(body.plan.feasible).toBe(true);
-      expect(tons(grass)).toBeCloseTo(710.156 / k, 2);
-      expect(tons(alfalfa)).toBeCloseTo(101.953 / k, 2);
-      // Same ZIP: no freight miles, so the cost is the hay alone.
-      const line = body.lines.find((l: { lotId: number }) => l.lotId === grass);
-      expect(line.freightCents).toBe(0);
-      expect(line.hayCents).toBe(Math.round(line.tons * 15000));
-      expect(line.bales).toBe(Math.ceil((line.tons * 2000) / 60));
+      expect(line(grass).bales).toBe(bales(710.156));
+      expect(line(alfalfa).bales).toBe(bales(101.953));
+      expect(line(grass).tons).toBeCloseTo((bales(710.156) * 60) / 2000, 9);
+      // Same ZIP: no freight miles, so the cost is the hay alone: the bales' weight × $150/t.
+      expect(line(grass).freightCents).toBe(0);
+      expect(line(grass).hayCents).toBe(Math.round(((bales(710.156) * 60) / 2000) * 15000));
       expect(body.plan.totalCostCents).toBe(body.lines.reduce((s: number, l: { costCents: number }) => s + l.costCents, 0));
       expect(body.plan.explanation.join(' ')).toMatch(/mixed in for protein/);
       // Lots are named by their titles, not by number.
@@ -196,4 +197,41 @@ describe('planner API', () => {
       expect(unknown.body.error.code).toBe('unknown_zip');
     });
   });
+  describe('POST /planner/purchase-plan, priced as the hay list prices it', () => {
+    // A place of its own (Helena, MT) with one lot of 1,300 lb round bales at $145/t.
+    const zip = '59601';
+    let rounds: number;
+
+    beforeAll(async () => {
+      const { db } = t.deps;
+      await db.update(lots).set({ status: 'withdrawn' }).where(inArray(lots.farmId, db.select({ id: farms.id }).from(farms).where(eq(farms.zip, zip))));
+      const here = await createGrower(db, zip);
+      rounds = (await createLot(db, here.farm.id, { title: `P${randomUUID().slice(0, 6)} rounds`, priceDollarsPerTon: 145 })).id;
+      await db.update(lots).set({ avgBaleWeightLb: 1300, baleCount: 40, balesAvailable: 40, freightCentsPerLoadedMile: 300, minOrderTons: 0 }).where(eq(lots.id, rounds));
+      await db.update(labAnalyses).set({ dryMatterPct: 88, crudeProteinPct: 20, deMcalPerKgDm: 2.0 }).where(eq(labAnalyses.lotId, rounds));
+    });
+
+    it('states the hay cost of the whole bales it tells the buyer to buy, the same as the order quote for those bales', async () => {
+      const herd = { groups: [{ count: 1, bodyWeight: 500, weightUnit: 'kg', class: 'maintenance' }], days: 100, feedingMethod: 'stall-feeder', hayShareOfDiet: 1 };
+      const res = await t.agent().post('/planner/purchase-plan', { herd, zip, maxDistanceMi: 25 });
+      expect(res.status).toBe(200);
+      // By hand: 1,665 Mcal (NRC 2007 maintenance, 16.65 Mcal × 100 d) ÷ 2.0 Mcal/kg = 832.5 kg DM eaten
+      // ÷ (907.2 kg × 88 % DM × (1 − 1.3 % waste, Martinson 2011)) = 1.057 t = 1.63 bales of 1,300 lb → 2 bales
+      // = 2 × 1,300 / 2,000 = 1.30 t × $145/t = $188.50 (domain brief §11). The herd's 1.057 t alone would be $153.27.
+      expect(res.body.lines).toHaveLength(1);
+      const [line] = res.body.lines;
+      expect(line).toMatchObject({ lotId: rounds, bales: 2, tons: 1.3, hayCents: 18850, freightCents: 0, costCents: 18850 });
+      expect(res.body.plan.totalCostCents).toBe(18850);
+
+      // The hay list and checkout quote the same bales through GET /orders/quote: the goods must agree to the cent.
+      let quoted = 0;
+      for (const l of res.body.lines as { lotId: number; bales: number }[]) {
+        const quote = await t.agent().get(`/orders/quote?lotId=${l.lotId}&bales=${l.bales}&method=pickup`);
+        expect(quote.status).toBe(200);
+        quoted += quote.body.goodsCents;
+      }
+      expect(res.body.lines.reduce((s: number, l: { hayCents: number }) => s + l.hayCents, 0)).toBe(quoted);
+    });
+  });
+
 });

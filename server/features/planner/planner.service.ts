@@ -5,7 +5,7 @@ import { leastCostPlan, needsFromHerdPlan, planHerdNeeds } from '@shared/planner
 import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots } from '../../db/schema';
 import { farmDistanceSql, farmWithinSql, locateZip, type ZipPlace } from '../geo/geo';
-import { balesForTons, balesToTons } from '@shared/units';
+import { balesToTons } from '@shared/units';
 
 /** More candidates than this slows the whole-load search without changing realistic plans. */
 export const MAX_PLAN_CANDIDATES = 30;
@@ -23,6 +23,8 @@ export async function loadPlanCandidates(db: Db, zip: string, maxDistanceMi: num
       farmName: farms.name,
       distanceMi: distance,
       priceCentsPerTon: lots.priceCentsPerTon,
+      pricingUnit: lots.pricingUnit,
+      priceCentsPerBale: lots.priceCentsPerBale,
       freightCentsPerLoadedMile: lots.freightCentsPerLoadedMile,
       balesAvailable: lots.balesAvailable,
       avgBaleWeightLb: lots.avgBaleWeightLb,
@@ -71,6 +73,10 @@ export async function planPurchase(db: Db, request: PurchasePlanRequest): Promis
       lotId: key(c.lotId),
       title: c.title,
       pricePerTonCents: c.priceCentsPerTon,
+      // Whole bales, priced as the order quote prices them.
+      avgBaleWeightLb: c.avgBaleWeightLb,
+      pricingUnit: c.pricingUnit,
+      priceCentsPerBale: c.priceCentsPerBale,
       freightCentsPerLoadedMile: c.freightCentsPerLoadedMile,
       distanceMi: c.distanceMi,
       tonsAvailable: c.tonsAvailable,
@@ -89,7 +95,7 @@ export async function planPurchase(db: Db, request: PurchasePlanRequest): Promis
       title: c.title,
       farmName: c.farmName,
       tons: line.tons,
-      bales: Math.min(c.balesAvailable, balesForTons(line.tons, c.avgBaleWeightLb)),
+      bales: line.bales!,
       loads: line.loads,
       hayCents: line.hayCents,
       freightCents: line.freightCents,
