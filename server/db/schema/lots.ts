@@ -36,6 +36,10 @@ export const lots = pgTable(
     harvestEndedOn: date({ mode: 'string' }).notNull(),
     storage: storageKind().notNull(),
     moistureAtBalingPct: doublePrecision(),
+    /** Growing conditions the grower reports (optional): the crop was drought-stressed. Both prompt a nitrate test. */
+    droughtStressed: boolean().notNull().default(false),
+    /** Growing conditions the grower reports (optional): heavy nitrogen fertiliser or manure on the field. */
+    heavyNitrogen: boolean().notNull().default(false),
     baleType: baleType().notNull(),
     baleCount: integer().notNull(),
     balesAvailable: integer().notNull(),
