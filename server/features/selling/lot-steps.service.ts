@@ -15,6 +15,7 @@ import {
 import { listedPricePerTonCents } from '@shared/pricing/price-per-ton';
 import { afterReviewedChange, factsNeedingReview, statusAfterStockChange } from '@shared/lifecycle/lot-lifecycle';
 import { samplingVerdictOf } from '@shared/contracts/sampling-record';
+import { assertLotDates, type LotDateField, type LotDates } from '@shared/contracts/lot-dates';
 import { refreshSamplingVerdict } from '../lots/sampling-report';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
@@ -23,6 +24,8 @@ import { HttpError } from '../../middleware/http-error';
 import { analysisColumns } from '../lots/analysis-record';
 import { dmRequestOf } from './analysis-values';
 import { farmOf, ownedLot, type LotRow } from './lot-access';
+
+const HARVEST: LotDateField[] = ['harvestStartedOn', 'harvestEndedOn'];
 
 type Tx = Parameters<Parameters<Db['transaction']>[0]>[0];
 
@@ -41,6 +44,7 @@ export class LotStepsService {
 
   /** Starts a draft from the first step. */
   async create(user: Express.User, input: LotStep): Promise<number> {
+    assertLotDates(input, this.clock.now(), HARVEST);
     const farm = await farmOf(this.db, user.id);
     const [row] = await this.db
       .insert(lots)
@@ -62,6 +66,7 @@ export class LotStepsService {
 
   async saveLot(user: Express.User, lotId: number, input: LotStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'lot');
+    assertLotDates({ ...(await this.storedDates(lotId)), ...input }, this.clock.now(), HARVEST);
     const columns = this.lotColumns(input);
     const { forageClass: _derived, ...facts } = columns;
     const needsReview = factsNeedingReview(lot, facts).length > 0;
@@ -103,6 +108,7 @@ export class LotStepsService {
 
   async saveSampling(user: Express.User, lotId: number, input: SamplingStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'sampling');
+    assertLotDates({ ...(await this.storedDates(lotId)), harvestStartedOn: lot.harvestStartedOn, sampledOn: input.sampledOn }, this.clock.now(), ['sampledOn']);
     const verdict = samplingVerdictOf(lot, input, this.clock.now());
     await this.db.transaction(async (tx) => {
       const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: this.clock.now() };
@@ -114,6 +120,7 @@ export class LotStepsService {
 
   async saveAnalysis(user: Express.User, lotId: number, input: AnalysisStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'analysis');
+    assertLotDates({ ...(await this.storedDates(lotId)), reportDate: input.reportDate }, this.clock.now(), ['reportDate']);
     const request = parseAnalysisValues(input.values, lot.forageClass);
     const { columns, evaluation } = analysisColumns(request);
     const errors = evaluation.findings.filter((f) => f.severity === 'error');
@@ -159,6 +166,13 @@ export class LotStepsService {
   }
 
   /** The owner's lot, when the step before `step` has been saved. */
+  /** The sample and current lab report dates already saved, to check a step's dates against. */
+  private async storedDates(lotId: number): Promise<LotDates> {
+    const [sampling] = await this.db.select({ sampledOn: samplingRecords.sampledOn }).from(samplingRecords).where(eq(samplingRecords.lotId, lotId));
+    const [analysis] = await this.db.select({ reportDate: labAnalyses.reportDate }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
+    return { sampledOn: sampling?.sampledOn ?? null, reportDate: analysis?.reportDate ?? null };
+  }
+
   async editable(user: Express.User, lotId: number, step: LotFormStep) {
     const found = await ownedLot(this.db, lotId, user);
     const need = stepIndex(step) - 1;

@@ -41,6 +41,30 @@ describe('selling API', () => {
     expect(one.body.error.message).toMatch(/two of bale count/);
   });
 
+  // The test clock stands at 2026-09-15 (tests/support/test-clock); a date may be at most one day ahead of it.
+  it('refuses impossible lot dates with 400 beside the field: year 9999, before 1990, sample before harvest, report before sample', async () => {
+    const detail = (res: { status: number; body: { error: { details: { path: string; message: string }[] } } }) => [res.status, res.body.error?.details?.[0]?.path];
+    expect(detail(await grower.agent.post('/selling/lots', { ...LOT_STEP, harvestStartedOn: '9999-06-10', harvestEndedOn: '9999-06-11' }))).toEqual([400, 'harvestStartedOn']);
+    expect(detail(await grower.agent.post('/selling/lots', { ...LOT_STEP, harvestEndedOn: '2026-09-17' }))).toEqual([400, 'harvestEndedOn']);
+    const old = await grower.agent.post('/selling/lots', { ...LOT_STEP, harvestStartedOn: '1902-06-10' });
+    expect(detail(old)).toEqual([400, 'harvestStartedOn']);
+    expect(old.body.error.message).toMatch(/before 1990/);
+    // Tomorrow by the clock is still accepted (a grower west of UTC is a day behind).
+    const { body: lot } = await grower.agent.post('/selling/lots', { ...LOT_STEP, harvestStartedOn: '2026-09-15', harvestEndedOn: '2026-09-16' });
+    expect(lot.id).toEqual(expect.any(Number));
+    await grower.agent.put(`/selling/lots/${lot.id}/quantity`, QUANTITY_STEP);
+    const early = await grower.agent.put(`/selling/lots/${lot.id}/sampling`, { ...SAMPLING_STEP, sampledOn: '2026-09-14' });
+    expect(detail(early)).toEqual([400, 'sampledOn']);
+    expect(early.body.error.message).toMatch(/on or after the first day of harvest/);
+    expect((await grower.agent.put(`/selling/lots/${lot.id}/sampling`, { ...SAMPLING_STEP, sampledOn: '2026-09-15' })).status).toBe(200);
+    const report = await grower.agent.put(`/selling/lots/${lot.id}/analysis`, { ...ANALYSIS_STEP, reportDate: '2026-09-14' });
+    expect(detail(report)).toEqual([400, 'reportDate']);
+    expect(report.body.error.message).toMatch(/cannot be dated before the sample/);
+    expect((await grower.agent.put(`/selling/lots/${lot.id}/analysis`, { ...ANALYSIS_STEP, reportDate: '2026-09-16' })).status).toBe(200);
+    // Moving the harvest after the stored sample date is refused on the harvest field.
+    expect(detail(await grower.agent.put(`/selling/lots/${lot.id}/lot`, { ...LOT_STEP, harvestStartedOn: '2026-09-16', harvestEndedOn: '2026-09-16' }))).toEqual([400, 'harvestStartedOn']);
+  });
+
   it('rejects an analysis with ADF above NDF, naming the field', async () => {
     const { body } = await grower.agent.post('/selling/lots', LOT_STEP);
     await grower.agent.put(`/selling/lots/${body.id}/quantity`, QUANTITY_STEP);

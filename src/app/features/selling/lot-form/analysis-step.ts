@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, computed, DestroyRef, effect, inject, input, output, signal } from '@angular/core';
-import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
+import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
@@ -11,6 +11,7 @@ import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { catchError, debounceTime, firstValueFrom, last, of, switchMap, tap } from 'rxjs';
 import { readAnalysisCsv } from '@shared/contracts/analysis-csv';
+import { lotDateIssues } from '@shared/contracts/lot-dates';
 import type { EditableLot } from '@shared/contracts/selling';
 import { ForageEvaluationRequestSchema, type ForageEvaluation, NITRATE_TEST_PROMPT, nitrateTestAdvised } from '@shared/forage';
 import { VISUAL_MOULD_LABELS, VISUAL_MOULD_SCORES, type VisualMouldScore } from '@shared/forage/mould-scores';
@@ -89,6 +90,13 @@ export class AnalysisStep {
       ...(Object.fromEntries(NUMBER_FIELDS.map((f) => [f, '' as number | string])) as Record<ValueField, number | string>),
       visualMouldScore: '' as VisualMouldScore | '',
     }),
+  });
+
+  private readonly reportDate = toSignal(this.form.controls.reportDate.valueChanges, { initialValue: '' });
+  /** The lot's date rules (shared with the server): the report is not dated before the sample. */
+  protected readonly dateIssue = computed(() => {
+    const [issue] = lotDateIssues({ sampledOn: this.lot().sampling?.sampledOn, reportDate: this.reportDate() }, new Date(), ['reportDate']);
+    return issue?.message ?? null;
   });
 
   constructor() {

@@ -8,6 +8,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { FORAGE_TYPE_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
 import type { ForageType } from '@shared/contracts/lots';
 import { defaultLotTitle, FORAGE_CLASS_OF, type EditableLot } from '@shared/contracts/selling';
+import { lotDateIssues, type LotDateField } from '@shared/contracts/lot-dates';
 import { CautionsList } from '../ui/cautions-list';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave } from './step-save';
@@ -28,9 +29,10 @@ import { numberOrNull, StepSave } from './step-save';
           </mat-select>
         </mat-form-field>
         <mat-form-field appearance="outline"><mat-label>Mix (if any)</mat-label><input matInput formControlName="mixDescription" /><mat-hint>e.g. 70% alfalfa, 30% orchardgrass</mat-hint></mat-form-field>
-        <mat-form-field appearance="outline"><mat-label>Harvest started</mat-label><input matInput type="date" formControlName="harvestStartedOn" /></mat-form-field>
+        <mat-form-field appearance="outline"><mat-label>Harvest started</mat-label><input matInput type="date" formControlName="harvestStartedOn" />
+          @if (dateIssue('harvestStartedOn'); as e) { <mat-hint class="err">{{ e }}</mat-hint> }</mat-form-field>
         <mat-form-field appearance="outline"><mat-label>Harvest ended</mat-label><input matInput type="date" formControlName="harvestEndedOn" />
-          @if (saving.fieldErrors()['harvestEndedOn']; as e) { <mat-hint class="err">{{ e }}</mat-hint> }
+          @if (dateIssue('harvestEndedOn') ?? saving.fieldErrors()['harvestEndedOn']; as e) { <mat-hint class="err">{{ e }}</mat-hint> }
         </mat-form-field>
         <mat-form-field appearance="outline">
           <mat-label>Storage</mat-label>
@@ -74,6 +76,15 @@ export class LotStep {
     description: [''],
   });
   private readonly value = toSignal(this.form.valueChanges, { initialValue: this.form.getRawValue() });
+  /** The lot's date rules (shared with the server), live for the dates typed and those saved in later steps. */
+  private readonly dateIssues = computed(() => {
+    const v = this.value();
+    const l = this.lot();
+    return lotDateIssues({ harvestStartedOn: v.harvestStartedOn, harvestEndedOn: v.harvestEndedOn, sampledOn: l?.sampling?.sampledOn, reportDate: l?.analysis?.reportDate }, new Date(), ['harvestStartedOn', 'harvestEndedOn']);
+  });
+  protected dateIssue(field: LotDateField): string | null {
+    return this.dateIssues().find((i) => i.path === field)?.message ?? null;
+  }
   protected readonly suggestedTitle = computed(() => {
     const v = this.value();
     return defaultLotTitle({ forageType: (v.forageType ?? 'alfalfa') as never, cutting: Number(v.cutting) || 1, fieldName: v.fieldName || 'field' });

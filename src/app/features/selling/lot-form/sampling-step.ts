@@ -6,6 +6,7 @@ import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/fo
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
+import { lotDateIssues } from '@shared/contracts/lot-dates';
 import { SamplingStepSchema, type EditableLot } from '@shared/contracts/selling';
 import { samplingVerdictOf } from '@shared/contracts/sampling-record';
 import { FindingsList } from '../ui/findings-list';
@@ -20,7 +21,8 @@ import { numberOrNull, StepSave } from './step-save';
     <form [formGroup]="form" (ngSubmit)="save()">
       <p class="hint">The protocol: at least 20 cores, one from each of 20 bales chosen at random, with a sharp probe of at least 3/8 in internal diameter reaching 12–18 in deep.</p>
       <div class="grid">
-        <mat-form-field appearance="outline"><mat-label>Sample date</mat-label><input matInput type="date" formControlName="sampledOn" /></mat-form-field>
+        <mat-form-field appearance="outline"><mat-label>Sample date</mat-label><input matInput type="date" formControlName="sampledOn" />
+          @if (dateIssue(); as e) { <mat-hint class="err">{{ e }}</mat-hint> }</mat-form-field>
         <mat-form-field appearance="outline"><mat-label>Cores taken</mat-label><input matInput type="number" inputmode="numeric" formControlName="coresTaken" /></mat-form-field>
         <mat-form-field appearance="outline"><mat-label>Bales sampled</mat-label><input matInput type="number" inputmode="numeric" formControlName="balesSampled" /></mat-form-field>
         <mat-form-field appearance="outline"><mat-label>Probe inside diameter</mat-label><input matInput type="number" step="0.0625" formControlName="probeDiameterIn" /><span matTextSuffix>in</span><mat-hint>3/8 in = 0.375</mat-hint></mat-form-field>
@@ -65,6 +67,13 @@ export class SamplingStep {
     sampledBy: ['', Validators.required],
   });
   private readonly value = toSignal(this.form.valueChanges, { initialValue: this.form.getRawValue() });
+
+  /** The lot's date rules (shared with the server): on or after the harvest start, not after the report date. */
+  protected readonly dateIssue = computed(() => {
+    const l = this.lot();
+    const [issue] = lotDateIssues({ harvestStartedOn: l.lot?.harvestStartedOn, sampledOn: this.value().sampledOn, reportDate: l.analysis?.reportDate }, new Date(), ['sampledOn']);
+    return issue?.message ?? null;
+  });
 
   /** The engine's sampling check, live, for what is typed so far. */
   protected readonly check = computed(() => {
