@@ -19,3 +19,5 @@ export * from './saved-searches';
 export * from './platform-settings';
 export * from './lot-search';
 export * from './messages';
+export * from './rate-limits';
+export * from './lot-views';

@@ -60,6 +60,8 @@ export const lots = pgTable(
     reviewedAt: timestamp({ withTimezone: true }),
     publishedAt: timestamp({ withTimezone: true }),
     viewCount: integer().notNull().default(0),
+    /** Bumped by every grower change an admin reviews (lot facts, quantity, sampling, analysis, report); an approval names the revision it saw. */
+    revision: integer().notNull().default(1),
     /** The lot this one was copied from (next cutting of the same field). */
     copiedFromId: integer(),
     createdAt: timestamp({ withTimezone: true }).notNull().defaultNow(),

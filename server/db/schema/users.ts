@@ -16,6 +16,8 @@ export const users = pgTable(
     /** Set while an admin has suspended the account; sign-in and every request are refused. */
     disabledAt: timestamp({ withTimezone: true }),
     disabledReason: text(),
+    /** When the owner proved the address by opening the signed link e-mailed at sign-up; null until then. */
+    emailVerifiedAt: timestamp({ withTimezone: true }),
   },
   (t) => [
     uniqueIndex('users_email_lower_key').on(sql`lower(${t.email})`),
@@ -35,3 +37,4 @@ export const session = pgTable(
   },
   (t) => [index('IDX_session_expire').on(t.expire)],
 );
+
