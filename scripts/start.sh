@@ -32,7 +32,7 @@ node --import tsx scripts/seed/seed-cli.ts
 start_fakes
 
 log "building the app"
-node_modules/.bin/ng build --configuration production >"$ROOT/.data/logs/build.log" 2>&1 || { cat "$ROOT/.data/logs/build.log"; fail "build failed"; }
+npm run --silent build:production >"$ROOT/.data/logs/build.log" 2>&1 || { cat "$ROOT/.data/logs/build.log"; fail "build failed"; }
 
 log "Baleproof: http://127.0.0.1:$PORT  (Ctrl-C stops everything)"
 PORT="$PORT" node dist/baleproof/server/server.mjs &

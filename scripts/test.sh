@@ -49,7 +49,7 @@ log "unit and integration tests (Jest)"
 NODE_ENV=test node_modules/.bin/jest --ci
 
 log "building the app for end-to-end tests"
-node_modules/.bin/ng build --configuration production
+npm run --silent build:production
 
 log "preparing the end-to-end database"
 DATABASE_URL="${E2E_DATABASE_URL:?E2E_DATABASE_URL is required}" node --import tsx server/db/migrate-cli.ts

@@ -5,6 +5,7 @@ import {
   writeResponseToNodeResponse,
 } from '@angular/ssr/node';
 import compression from 'compression';
+import expressStaticGzip from 'express-static-gzip';
 import express from 'express';
 import helmet from 'helmet';
 import cluster from 'node:cluster';
@@ -37,11 +38,14 @@ app.use('/media', mediaRouter(deps.storage));
 // needs a nonce-based CSP, left for when one is configured.
 app.use(helmet({ contentSecurityPolicy: false }));
 
+// Static files: the brotli or gzip copy made at build time (scripts/build/precompress.ts) when the browser
+// takes it, else the file itself.
 app.use(
-  express.static(browserDistFolder, {
-    maxAge: '1y',
+  expressStaticGzip(browserDistFolder, {
+    enableBrotli: true,
+    orderPreference: ['br', 'gzip'],
     index: false,
-    redirect: false,
+    serveStatic: { maxAge: '1y', index: false, redirect: false },
   }),
 );
 

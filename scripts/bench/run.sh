@@ -13,6 +13,6 @@ if [ "${BENCH_KEEP_DB:-}" != 1 ]; then
 fi
 if [ "${BENCH_SKIP_BUILD:-}" != 1 ] || [ ! -f dist/baleproof/server/server.mjs ]; then
   log "building the production app"
-  node_modules/.bin/ng build --configuration production
+  npm run --silent build:production
 fi
 node --import tsx scripts/bench/catalogue-bench.ts

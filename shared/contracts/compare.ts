@@ -1,8 +1,8 @@
 import { z } from 'zod';
+import { MAX_COMPARED_LOTS } from './compare-limits';
 import type { BaleType, ForageType } from './lots';
 
-/** Most lots shown side by side. */
-export const MAX_COMPARED_LOTS = 4;
+export { MAX_COMPARED_LOTS };
 
 /**
  * GET /api/lots/compare?ids=3,8,12&zip=66502&tons=24 — up to four lots side by side.

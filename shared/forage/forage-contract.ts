@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { VISUAL_MOULD_SCORES } from './mould-scores';
+import { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES } from './grade-names';
 import { CORE_POSITIONS, FORAGE_CLASSES, type CorePosition, type ForageClass } from '../contracts/enums';
 
 /**
@@ -197,12 +198,7 @@ export type NscMethod = z.infer<typeof NscMethodSchema>;
 export const NscFlagSchema = z.enum(['within-advised-limit', 'above-strict-limit', 'above-upper-limit']);
 export type NscFlag = z.infer<typeof NscFlagSchema>;
 
-/** USDA AMS alfalfa grade names (best first). */
-export const USDA_ALFALFA_GRADES = ['Supreme', 'Premium', 'Good', 'Fair', 'Utility'] as const;
-/** USDA AMS grass grade names (best first). */
-export const USDA_GRASS_GRADES = ['Premium', 'Good', 'Fair', 'Low'] as const;
-/** AFGC legume grade names (best first). */
-export const AFGC_GRADES = ['Prime', 'Grade 1', 'Grade 2', 'Grade 3', 'Grade 4', 'Grade 5'] as const;
+export { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES };
 
 export const UsdaGradeNameSchema = z.enum(['Supreme', 'Premium', 'Good', 'Fair', 'Utility', 'Low']);
 export type UsdaGradeName = z.infer<typeof UsdaGradeNameSchema>;

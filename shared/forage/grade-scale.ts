@@ -1,4 +1,4 @@
-import { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES } from './forage-contract';
+import { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES } from './grade-names';
 import type { ForageClass } from '../contracts/enums';
 
 /** Which published grade table a grade name belongs to. */

@@ -1,13 +1,5 @@
-import {
-  AFGC_GRADES,
-  USDA_ALFALFA_GRADES,
-  USDA_GRASS_GRADES,
-  type AfgcGrade,
-  type ForageClass,
-  type Grades,
-  type UsdaCriterion,
-  type UsdaGrade,
-} from './forage-contract';
+import { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES } from './grade-names';
+import type { AfgcGrade, ForageClass, Grades, UsdaCriterion, UsdaGrade } from './forage-contract';
 import { roundTo } from '../units/rounding';
 
 /*

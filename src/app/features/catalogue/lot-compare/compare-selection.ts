@@ -1,5 +1,5 @@
 import { computed, Injectable } from '@angular/core';
-import { MAX_COMPARED_LOTS } from '@shared/contracts/compare';
+import { MAX_COMPARED_LOTS } from '@shared/contracts/compare-limits';
 import { storedList } from '../../../core/stored-list';
 
 const STORAGE_KEY = 'baleproof.compare';

@@ -1,0 +1,45 @@
+import { expect, test } from '@playwright/test';
+import { readdirSync, readFileSync } from 'node:fs';
+import { get } from 'node:http';
+import { join } from 'node:path';
+import { brotliDecompressSync, gunzipSync } from 'node:zlib';
+
+/**
+ * Static files go out as the brotli or gzip copy made at build time (scripts/build/precompress.ts) when the
+ * browser accepts it, and that copy is the very file the build wrote; a browser that accepts neither gets
+ * the file itself. Read with node:http so the bytes on the wire are seen undecoded.
+ */
+const browserDist = join(process.cwd(), 'dist/baleproof/browser');
+const mainScript = readdirSync(browserDist).find((name) => /^main-.*\.js$/.test(name))!;
+
+function fetchRaw(url: string, acceptEncoding: string): Promise<{ headers: Record<string, string | string[] | undefined>; body: Buffer }> {
+  return new Promise((resolve, reject) => {
+    get(url, { headers: { 'accept-encoding': acceptEncoding } }, (res) => {
+      const chunks: Buffer[] = [];
+      res.on('data', (chunk: Buffer) => chunks.push(chunk));
+      res.on('end', () => resolve({ headers: res.headers, body: Buffer.concat(chunks) }));
+    }).on('error', reject);
+  });
+}
+
+test.describe('precompressed static files', () => {
+  test('brotli first, then gzip, then the plain file; each decodes to the built file', async ({ baseURL }) => {
+    const original = readFileSync(join(browserDist, mainScript));
+    const url = `${baseURL}/${mainScript}`;
+
+    const br = await fetchRaw(url, 'gzip, deflate, br');
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.body.length).toBeLessThan(original.length / 2);
+    expect(brotliDecompressSync(br.body).equals(original)).toBe(true);
+    expect(br.headers['content-type']).toMatch(/javascript/);
+    expect(br.headers['cache-control']).toContain('max-age=31536000');
+
+    const gz = await fetchRaw(url, 'gzip');
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gunzipSync(gz.body).equals(original)).toBe(true);
+
+    const plain = await fetchRaw(url, 'identity');
+    expect(plain.headers['content-encoding']).toBeUndefined();
+    expect(plain.body.equals(original)).toBe(true);
+  });
+});
