@@ -138,6 +138,9 @@ const POLICY: Record<string, Rule> = {
   // Only buyers open or read a conversation about a lot; the router refuses growers before the service.
   'GET /messages/lots/:lotId': { allow: ['buyer'], on: 'listedLot' },
   'POST /messages/lots/:lotId': { allow: ['buyer'], on: 'listedLot', body: () => MESSAGE },
+  // An order's conversation: its buyer and grower write, admins read; anyone else is told the order does not exist.
+  'GET /messages/orders/:orderId': ORDER_PARTY,
+  'POST /messages/orders/:orderId': { allow: ['buyer', 'grower'], on: 'order', reach: ['buyer', 'grower'], body: () => MESSAGE },
 };
 
 /** The callers: the fixture's parties, a stranger of each kind, and an admin whose account was suspended. */

@@ -1,9 +1,10 @@
 import { z } from 'zod';
+import { multiLineText } from './text';
 
-/** POST a message: plain text, up to 2,000 characters. */
+/** POST a message: plain text over several lines, up to 2,000 characters, no control characters. */
 export const MessageCreateSchema = z
   .object({
-    body: z.string().trim().min(1, 'Write a message first.').max(2000, 'Keep a message under 2,000 characters.'),
+    body: multiLineText('Message', 2000, { min: 1, minMessage: 'Write a message first.' }),
   })
   .strict();
 export type MessageCreate = z.input<typeof MessageCreateSchema>;
@@ -18,13 +19,19 @@ export interface MessageView {
   readAt: string | null;
 }
 
-/** A conversation about a lot (or an order from it), as one of its two people sees it. */
+/**
+ * A conversation about a lot (before a sale) or about an order (after one), as one of its two people sees
+ * it; an admin reads order conversations without taking part.
+ */
 export interface ThreadView {
   id: number;
-  lotId: number;
-  lotTitle: string;
+  /** Set for a conversation about a lot, null for one about an order. */
+  lotId: number | null;
+  /** Set for a conversation about an order, null for one about a lot. */
   orderId: number | null;
-  /** The other person: the grower's farm for a buyer, the buyer's name for a grower. */
+  /** What it is about, in words: the lot's title, or "Order 12". */
+  subject: string;
+  /** The other person: the grower's farm for a buyer, the buyer's name for a grower (both for an admin). */
   withName: string;
   lastMessageAt: string;
   lastMessage: string;
@@ -33,4 +40,13 @@ export interface ThreadView {
 
 export interface ThreadDetail extends ThreadView {
   messages: MessageView[];
+}
+
+/** Which messages an order has, as its page asks: the thread (null before the first) and whether the reader may write. */
+export interface OrderThread {
+  thread: ThreadDetail | null;
+  /** False for an admin (reads only) and before the order is paid. */
+  mayWrite: boolean;
+  /** Why the reader may not write, in words; null when they may. */
+  whyNot: string | null;
 }

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { timeZoneForState } from '@shared/time/farm-time';
 import type { ForageEvaluationRequest } from '@shared/forage';
 import type { Db } from '../../server/db/client';
-import { farms, labAnalyses, lots, samplingRecords, users } from '../../server/db/schema';
+import { farms, labAnalyses, lots, orders, samplingRecords, users } from '../../server/db/schema';
 import { hashPassword } from '../../server/features/auth/password';
 import { analysisColumns } from '../../server/features/lots/analysis-record';
 import { locateZip } from '../../server/features/geo/geo';
@@ -65,4 +65,28 @@ export async function createLot(
     compliant: true,
   });
   return lot!;
+}
+
+/** A pickup order of 20 bales from a lot: paid at the test date (`paid`, the default) or still awaiting payment. */
+export async function createOrder(db: Db, opts: { buyerId: number; farmId: number; lotId: number; paid?: boolean }) {
+  const paid = opts.paid ?? true;
+  const [order] = await db
+    .insert(orders)
+    .values({
+      buyerId: opts.buyerId,
+      lotId: opts.lotId,
+      farmId: opts.farmId,
+      status: paid ? 'paid' : 'awaiting_payment',
+      bales: 20,
+      tons: 0.6,
+      priceCentsPerTon: 30000,
+      goodsCents: 18000,
+      platformFeeBps: 300,
+      platformFeeCents: 540,
+      totalCents: 18540,
+      method: 'pickup',
+      paidAt: paid ? new Date(TEST_NOW) : null,
+    })
+    .returning();
+  return order!;
 }

@@ -5,14 +5,15 @@ import { orders } from './orders';
 import { users } from './users';
 
 /**
- * A conversation between one buyer and the grower of one lot (how was it cut, can a semi reach the barn).
- * A thread about an order carries `orderId`; a lot's pre-sale questions have none, one thread per buyer and lot.
+ * A conversation between a buyer and a grower. Before a sale it is about one lot (how was it cut, can a semi
+ * reach the barn): `lotId`, one thread per buyer and lot. After a sale it is about one order (when can the
+ * truck come): `orderId`, one thread per order, whatever lots the order holds. Exactly one of the two is set.
  */
 export const messageThreads = pgTable(
   'message_threads',
   {
     id: integer().primaryKey().generatedAlwaysAsIdentity(),
-    lotId: integer().notNull().references(() => lots.id, { onDelete: 'restrict' }),
+    lotId: integer().references(() => lots.id, { onDelete: 'restrict' }),
     orderId: integer().references(() => orders.id, { onDelete: 'restrict' }),
     buyerId: integer().notNull().references(() => users.id, { onDelete: 'restrict' }),
     growerId: integer().notNull().references(() => users.id, { onDelete: 'restrict' }),
@@ -25,6 +26,7 @@ export const messageThreads = pgTable(
     index('message_threads_buyer_idx').on(t.buyerId, t.lastMessageAt),
     index('message_threads_grower_idx').on(t.growerId, t.lastMessageAt),
     check('message_threads_two_people', sql`${t.buyerId} <> ${t.growerId}`),
+    check('message_threads_lot_or_order', sql`(${t.lotId} is null) <> (${t.orderId} is null)`),
   ],
 );
 

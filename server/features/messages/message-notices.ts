@@ -1,8 +1,10 @@
 import { and, eq, isNull } from 'drizzle-orm';
 import { LotSearchSchema } from '@shared/contracts/lots';
+import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
+import { formatCents } from '@shared/units/money';
 import type { ApiDeps } from '../../api-deps';
 import { lotMail } from '../../adapters/mail/lot-mail';
-import { lots, messages, messageThreads, users } from '../../db/schema';
+import { lots, messages, messageThreads, orders, users } from '../../db/schema';
 import { lotMailFacts } from '../lots/lot-mail-facts';
 import { LotsService } from '../lots/lots.service';
 import type { PostedMessage } from './messages.service';
@@ -29,17 +31,13 @@ export function outboxMessageNotices(deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' |
 }
 
 /**
- * Queues the e-mail to the other person in the thread about one message, with the lot's facts, once: a
- * message whose notice is already queued is skipped, so running this again never sends twice.
+ * Queues the e-mail to the other person in the thread about one message, once: a message whose notice is
+ * already queued is skipped, so running this again never sends twice. About a lot it carries the lot's
+ * facts; about an order, the order's state and total.
  */
 export async function queueMessageNotice(deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' | 'clock'>, messageId: number): Promise<'queued' | 'already-queued' | 'missing'> {
-  const { db, env } = deps;
-  const [row] = await db
-    .select({ message: messages, thread: messageThreads, lotTitle: lots.title })
-    .from(messages)
-    .innerJoin(messageThreads, eq(messageThreads.id, messages.threadId))
-    .innerJoin(lots, eq(lots.id, messageThreads.lotId))
-    .where(eq(messages.id, messageId));
+  const { db } = deps;
+  const [row] = await db.select({ message: messages, thread: messageThreads }).from(messages).innerJoin(messageThreads, eq(messageThreads.id, messages.threadId)).where(eq(messages.id, messageId));
   if (!row) return 'missing';
   if (row.message.noticeSentAt) return 'already-queued';
   const { message, thread } = row;
@@ -48,18 +46,8 @@ export async function queueMessageNotice(deps: Pick<ApiDeps, 'db' | 'jobs' | 'en
     db.select({ email: users.email, name: users.displayName }).from(users).where(eq(users.id, toId)),
     db.select({ name: users.displayName }).from(users).where(eq(users.id, message.senderId)),
   ]);
-  const toGrower = toId === thread.growerId;
-  const summary = (await new LotsService(db).search(LotSearchSchema.parse({ page: '1', pageSize: '1' }), { lotIds: [thread.lotId] })).items[0];
-  const mail = lotMail({
-    to: to!.email,
-    subject: toGrower ? `A buyer asks about “${row.lotTitle}”` : `The grower answered about “${row.lotTitle}”`,
-    greeting: `Hello ${to!.name},`,
-    lead: [toGrower ? `${from!.name} wrote to you about your lot.` : `${from!.name} answered your message about this lot.`],
-    quote: { from: from!.name, body: message.body },
-    lot: { title: row.lotTitle, facts: summary ? lotMailFacts(summary) : [] },
-    action: { label: 'Read and answer', url: `${env.PUBLIC_URL}/messages/${thread.id}` },
-    footer: 'You get this e-mail because someone wrote to you about a lot on Baleproof. Answer on Baleproof, not by replying to this e-mail.',
-  });
+  const people = { to: to!, from: from!.name, toGrower: toId === thread.growerId, body: message.body };
+  const mail = thread.orderId !== null ? await orderNotice(deps, thread.orderId, people) : await lotNotice(deps, thread.lotId!, thread.id, people);
   // Claim the notice first so two runs cannot both queue it; release the claim if queueing fails.
   const claimed = await db.update(messages).set({ noticeSentAt: deps.clock.now() }).where(and(eq(messages.id, messageId), isNull(messages.noticeSentAt))).returning({ id: messages.id });
   if (claimed.length === 0) return 'already-queued';
@@ -70,4 +58,47 @@ export async function queueMessageNotice(deps: Pick<ApiDeps, 'db' | 'jobs' | 'en
     throw error;
   }
   return 'queued';
+}
+
+interface NoticePeople {
+  to: { email: string; name: string };
+  from: string;
+  toGrower: boolean;
+  body: string;
+}
+
+async function lotNotice({ db, env }: Pick<ApiDeps, 'db' | 'env'>, lotId: number, threadId: number, p: NoticePeople) {
+  const [lot] = await db.select({ title: lots.title }).from(lots).where(eq(lots.id, lotId));
+  const summary = (await new LotsService(db).search(LotSearchSchema.parse({ page: '1', pageSize: '1' }), { lotIds: [lotId] })).items[0];
+  return lotMail({
+    to: p.to.email,
+    subject: p.toGrower ? `A buyer asks about “${lot!.title}”` : `The grower answered about “${lot!.title}”`,
+    greeting: `Hello ${p.to.name},`,
+    lead: [p.toGrower ? `${p.from} wrote to you about your lot.` : `${p.from} answered your message about this lot.`],
+    quote: { from: p.from, body: p.body },
+    lot: { title: lot!.title, facts: summary ? lotMailFacts(summary) : [] },
+    action: { label: 'Read and answer', url: `${env.PUBLIC_URL}/messages/${threadId}` },
+    footer: 'You get this e-mail because someone wrote to you about a lot on Baleproof. Answer on Baleproof, not by replying to this e-mail.',
+  });
+}
+
+async function orderNotice({ db, env }: Pick<ApiDeps, 'db' | 'env'>, orderId: number, p: NoticePeople) {
+  const [order] = await db.select({ status: orders.status, method: orders.method, totalCents: orders.totalCents }).from(orders).where(eq(orders.id, orderId));
+  return lotMail({
+    to: p.to.email,
+    subject: p.toGrower ? `The buyer wrote about order ${orderId}` : `The grower wrote about order ${orderId}`,
+    greeting: `Hello ${p.to.name},`,
+    lead: [`${p.from} wrote to you about order ${orderId}.`],
+    quote: { from: p.from, body: p.body },
+    lot: {
+      title: `Order ${orderId}`,
+      facts: [
+        ['Status', orderStatusLabel(order!.status)],
+        ['Handover', order!.method === 'delivery' ? 'delivery' : 'pickup at the farm'],
+        ['Total', formatCents(order!.totalCents)],
+      ],
+    },
+    action: { label: 'Read and answer', url: `${env.PUBLIC_URL}/orders/${orderId}#messages` },
+    footer: `You get this e-mail because you are the ${p.toGrower ? 'grower' : 'buyer'} of order ${orderId} on Baleproof. Answer on the order's page, not by replying to this e-mail.`,
+  });
 }

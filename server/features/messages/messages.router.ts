@@ -7,24 +7,28 @@ import { outboxMessageNotices, type MessageNotices } from './message-notices';
 import { MessagesService } from './messages.service';
 
 const LotParams = z.object({ lotId: z.coerce.number().int().positive('Lot id must be a positive whole number.') });
+const OrderParams = z.object({ orderId: z.coerce.number().int().positive('Order id must be a positive whole number.') });
 const ThreadParams = z.object({ id: z.coerce.number().int().positive('Conversation id must be a positive whole number.') });
 
-/** Messages between buyers and growers about lots: a buyer's thread per lot, and everyone's inbox. */
+/**
+ * Messages between buyers and growers: a buyer's thread per lot, one thread per order (its buyer and grower
+ * write; admins read), and everyone's inbox.
+ */
 export function messagesRouter(deps: ApiDeps, notices: MessageNotices = outboxMessageNotices(deps)): Router {
   const service = new MessagesService(deps.db, deps.clock);
   const router = Router();
-  router.use(requireRole('buyer', 'grower'));
+  const parties = requireRole('buyer', 'grower');
 
-  router.get('/threads', async (req, res) => {
+  router.get('/threads', parties, async (req, res) => {
     res.json({ items: await service.inbox(req.user!) });
   });
 
-  router.get('/threads/:id', async (req, res) => {
+  router.get('/threads/:id', parties, async (req, res) => {
     const { id } = ThreadParams.parse(req.params);
     res.json(await service.read(req.user!, id));
   });
 
-  router.post('/threads/:id', async (req, res) => {
+  router.post('/threads/:id', parties, async (req, res) => {
     const { id } = ThreadParams.parse(req.params);
     const { body } = MessageCreateSchema.parse(req.body);
     const posted = await service.reply(req.user!, id, body);
@@ -44,6 +48,19 @@ export function messagesRouter(deps: ApiDeps, notices: MessageNotices = outboxMe
     const posted = await service.writeAboutLot(req.user!, lotId, body);
     await notices.posted(posted);
     res.status(201).json(await service.read(req.user!, posted.threadId));
+  });
+
+  router.get('/orders/:orderId', requireRole('buyer', 'grower', 'admin'), async (req, res) => {
+    const { orderId } = OrderParams.parse(req.params);
+    res.json(await service.aboutOrder(req.user!, orderId));
+  });
+
+  router.post('/orders/:orderId', parties, async (req, res) => {
+    const { orderId } = OrderParams.parse(req.params);
+    const { body } = MessageCreateSchema.parse(req.body);
+    const posted = await service.writeAboutOrder(req.user!, orderId, body);
+    await notices.posted(posted);
+    res.status(201).json(await service.aboutOrder(req.user!, orderId));
   });
 
   return router;

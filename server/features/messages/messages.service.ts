@@ -1,9 +1,10 @@
-import { and, asc, desc, eq, isNull, ne, or, sql } from 'drizzle-orm';
-import type { MessageView, ThreadDetail, ThreadView } from '@shared/contracts/messages';
+import { and, asc, desc, eq, isNull, ne, or, sql, type SQL } from 'drizzle-orm';
+import type { MessageView, OrderThread, ThreadDetail, ThreadView } from '@shared/contracts/messages';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
-import { farms, lots, messages, messageThreads, users } from '../../db/schema';
-import { conflict, notFound } from '../../middleware/http-error';
+import { farms, lots, messages, messageThreads, orders, users } from '../../db/schema';
+import { conflict, forbidden, notFound } from '../../middleware/http-error';
+import { orderParty } from './order-party';
 
 /** What a notice e-mail needs to know; sent after the message is stored (see message-notices.ts). */
 export interface PostedMessage {
@@ -11,15 +12,19 @@ export interface PostedMessage {
   threadId: number;
 }
 
-/** A thread's people as the signed-in user is one of them. */
-interface Participant {
+/** The signed-in user as the messages see them. */
+interface Reader {
   id: number;
   role: 'buyer' | 'grower' | 'admin';
 }
 
+const UNPAID = 'Messages about an order open once it is paid. Until then, ask about the lot on its page.';
+const ADMIN_READS = 'Admins read order conversations; only the buyer and the grower write in them.';
+
 /**
- * Messages between a buyer and the grower of a lot. A buyer opens a thread by writing about a listed lot;
- * from then on both can write. Only the two people in a thread can read it.
+ * Messages between a buyer and a grower. Before a sale a buyer opens a thread by writing about a listed lot;
+ * after it either of them opens the order's thread. From then on both can write. Only the two people in a
+ * thread read it, and admins read (never write in, never mark read) the conversations about orders.
  */
 export class MessagesService {
   constructor(
@@ -28,7 +33,7 @@ export class MessagesService {
   ) {}
 
   /** A buyer writes to a lot's grower: the thread for this buyer and lot is made on the first message. */
-  async writeAboutLot(buyer: Participant, lotId: number, body: string): Promise<PostedMessage> {
+  async writeAboutLot(buyer: Reader, lotId: number, body: string): Promise<PostedMessage> {
     const [lot] = await this.db
       .select({ id: lots.id, status: lots.status, growerId: farms.ownerId })
       .from(lots)
@@ -52,20 +57,45 @@ export class MessagesService {
     });
   }
 
+  /** The order's buyer or grower writes about it: the order's one thread is made on the first message. */
+  async writeAboutOrder(user: Reader, orderId: number, body: string): Promise<PostedMessage> {
+    const party = await orderParty(this.db, orderId, user);
+    if (party.part === 'admin') throw forbidden(ADMIN_READS);
+    if (!party.paid) throw conflict('order_unpaid', UNPAID);
+    return this.db.transaction(async (tx) => {
+      const now = this.clock.now();
+      // Buyer and grower writing first at the same moment meet on the unique index and share one thread.
+      await tx
+        .insert(messageThreads)
+        .values({ orderId, buyerId: party.buyerId, growerId: party.growerId, createdAt: now, lastMessageAt: now })
+        .onConflictDoNothing({ target: messageThreads.orderId, where: sql`${messageThreads.orderId} is not null` });
+      const [thread] = await tx.select({ id: messageThreads.id }).from(messageThreads).where(eq(messageThreads.orderId, orderId));
+      return this.append(tx, thread!.id, user.id, body, now);
+    });
+  }
+
+  /** The order's thread (null before the first message) and whether this reader may write in it. */
+  async aboutOrder(user: Reader, orderId: number): Promise<OrderThread> {
+    const party = await orderParty(this.db, orderId, user);
+    const [row] = await this.db.select({ id: messageThreads.id }).from(messageThreads).where(eq(messageThreads.orderId, orderId));
+    const whyNot = party.part === 'admin' ? ADMIN_READS : party.paid ? null : UNPAID;
+    return { thread: row ? await this.read(user, row.id) : null, mayWrite: whyNot === null, whyNot };
+  }
+
   /** Either person answers in an existing thread. */
-  async reply(user: Participant, threadId: number, body: string): Promise<PostedMessage> {
+  async reply(user: Reader, threadId: number, body: string): Promise<PostedMessage> {
     await this.threadFor(user, threadId);
+    if (user.role === 'admin') throw forbidden(ADMIN_READS);
     return this.db.transaction((tx) => this.append(tx, threadId, user.id, body, this.clock.now()));
   }
 
   /** The user's threads, newest first, with the last message and how many are unread. */
-  async inbox(user: Participant): Promise<ThreadView[]> {
-    const rows = await this.threadRows(user, or(eq(messageThreads.buyerId, user.id), eq(messageThreads.growerId, user.id))!);
-    return rows;
+  async inbox(user: Reader): Promise<ThreadView[]> {
+    return this.threadRows(user, or(eq(messageThreads.buyerId, user.id), eq(messageThreads.growerId, user.id))!);
   }
 
   /** The buyer's thread about a lot, or null before the first message. */
-  async threadAboutLot(user: Participant, lotId: number): Promise<ThreadDetail | null> {
+  async threadAboutLot(user: Reader, lotId: number): Promise<ThreadDetail | null> {
     const [row] = await this.db
       .select({ id: messageThreads.id })
       .from(messageThreads)
@@ -73,13 +103,15 @@ export class MessagesService {
     return row ? this.read(user, row.id) : null;
   }
 
-  /** A whole thread; opening it marks the other person's messages read. */
-  async read(user: Participant, threadId: number): Promise<ThreadDetail> {
-    await this.threadFor(user, threadId);
-    await this.db
-      .update(messages)
-      .set({ readAt: this.clock.now() })
-      .where(and(eq(messages.threadId, threadId), ne(messages.senderId, user.id), isNull(messages.readAt)));
+  /** A whole thread; one of its two people opening it marks the other's messages read (an admin's look does not). */
+  async read(user: Reader, threadId: number): Promise<ThreadDetail> {
+    const thread = await this.threadFor(user, threadId);
+    if (user.id === thread.buyerId || user.id === thread.growerId) {
+      await this.db
+        .update(messages)
+        .set({ readAt: this.clock.now() })
+        .where(and(eq(messages.threadId, threadId), ne(messages.senderId, user.id), isNull(messages.readAt)));
+    }
     const [view] = await this.threadRows(user, eq(messageThreads.id, threadId));
     const list = await this.db
       .select({ id: messages.id, senderId: messages.senderId, senderName: users.displayName, body: messages.body, createdAt: messages.createdAt, readAt: messages.readAt })
@@ -95,10 +127,11 @@ export class MessagesService {
     };
   }
 
-  private async threadFor(user: Participant, threadId: number) {
+  private async threadFor(user: Reader, threadId: number) {
     const [thread] = await this.db.select().from(messageThreads).where(eq(messageThreads.id, threadId));
+    const mayRead = thread && (thread.buyerId === user.id || thread.growerId === user.id || (user.role === 'admin' && thread.orderId !== null));
     // Someone else's thread answers 404, not 403: its existence is nobody else's business.
-    if (!thread || (thread.buyerId !== user.id && thread.growerId !== user.id)) throw notFound('Conversation');
+    if (!mayRead) throw notFound('Conversation');
     return thread;
   }
 
@@ -108,7 +141,7 @@ export class MessagesService {
     return { messageId: message!.id, threadId };
   }
 
-  private async threadRows(user: Participant, where: ReturnType<typeof eq>): Promise<ThreadView[]> {
+  private async threadRows(user: Reader, where: SQL): Promise<ThreadView[]> {
     const rows = await this.db
       .select({
         id: messageThreads.id,
@@ -116,6 +149,7 @@ export class MessagesService {
         lotTitle: lots.title,
         orderId: messageThreads.orderId,
         buyerId: messageThreads.buyerId,
+        growerId: messageThreads.growerId,
         farmName: farms.name,
         buyerName: sql<string>`(select display_name from users where users.id = ${messageThreads.buyerId})`,
         lastMessageAt: messageThreads.lastMessageAt,
@@ -123,19 +157,24 @@ export class MessagesService {
         unread: sql<number>`(select count(*) from messages m where m.thread_id = ${messageThreads.id} and m.sender_id <> ${user.id} and m.read_at is null)`.mapWith(Number),
       })
       .from(messageThreads)
-      .innerJoin(lots, eq(lots.id, messageThreads.lotId))
-      .innerJoin(farms, eq(farms.id, lots.farmId))
+      .leftJoin(lots, eq(lots.id, messageThreads.lotId))
+      .leftJoin(orders, eq(orders.id, messageThreads.orderId))
+      // A lot's thread is with the lot's farm; an order's with the farm that sells it.
+      .innerJoin(farms, sql`${farms.id} = coalesce(${lots.farmId}, ${orders.farmId})`)
       .where(where)
       .orderBy(desc(messageThreads.lastMessageAt), desc(messageThreads.id));
-    return rows.map((r) => ({
-      id: r.id,
-      lotId: r.lotId,
-      lotTitle: r.lotTitle,
-      orderId: r.orderId,
-      withName: r.buyerId === user.id ? r.farmName : r.buyerName,
-      lastMessageAt: r.lastMessageAt.toISOString(),
-      lastMessage: r.lastMessage ?? '',
-      unread: r.unread,
-    }));
+    return rows.map((r) => {
+      const party = r.buyerId === user.id || r.growerId === user.id;
+      return {
+        id: r.id,
+        lotId: r.lotId,
+        orderId: r.orderId,
+        subject: r.orderId !== null ? `Order ${r.orderId}` : (r.lotTitle ?? ''),
+        withName: r.buyerId === user.id ? r.farmName : r.growerId === user.id ? r.buyerName : `${r.buyerName} and ${r.farmName}`,
+        lastMessageAt: r.lastMessageAt.toISOString(),
+        lastMessage: r.lastMessage ?? '',
+        unread: party ? r.unread : 0,
+      };
+    });
   }
 }

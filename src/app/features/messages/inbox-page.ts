@@ -8,7 +8,7 @@ import { MessageComposer } from './message-composer';
 import { MessageList } from './message-list';
 import { MessagesApi } from './messages-api';
 
-/** Everyone's conversations about lots: the list, and the open one with a reply box. */
+/** Everyone's conversations about lots and orders: the list, and the open one with a reply box. */
 @Component({
   selector: 'app-inbox-page',
   imports: [DatePipe, RouterLink, MessageList, MessageComposer],
@@ -22,13 +22,13 @@ import { MessagesApi } from './messages-api';
               <li [class.open]="open()?.id === t.id">
                 <a [routerLink]="['/messages', t.id]">
                   <span class="top"><strong>{{ t.withName }}</strong>@if (t.unread > 0) { <span class="unread">{{ t.unread }} new</span> }</span>
-                  <span class="lot">{{ t.lotTitle }}</span>
+                  <span class="lot">{{ t.subject }}</span>
                   <span class="last">{{ t.lastMessage }}</span>
                   <time [attr.datetime]="t.lastMessageAt">{{ t.lastMessageAt | date: 'mediumDate' }}</time>
                 </a>
               </li>
             } @empty {
-              <li class="none">No conversations yet. Buyers write from a lot's page ("Ask the grower").</li>
+              <li class="none">No conversations yet. Buyers write from a lot's page ("Ask the grower"); buyer and grower write about an order on its page.</li>
             }
           </ul>
         }
@@ -36,7 +36,7 @@ import { MessagesApi } from './messages-api';
       <section class="thread" aria-live="polite">
         @if (error(); as e) { <div class="bp-error-box" role="alert">{{ e }}</div> }
         @if (open(); as t) {
-          <h2>{{ t.withName }} · <a [routerLink]="['/hay', t.lotId]">{{ t.lotTitle }}</a></h2>
+          <h2>{{ t.withName }} · <a [routerLink]="t.orderId !== null ? ['/orders', t.orderId] : ['/hay', t.lotId]">{{ t.subject }}</a></h2>
           <app-message-list [messages]="t.messages" />
           <app-message-composer label="Your answer" action="Send" [busy]="busy()" (write)="reply(t.id, $event)" />
         } @else if (threads()?.length) {

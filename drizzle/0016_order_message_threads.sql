@@ -1,0 +1,2 @@
+ALTER TABLE "message_threads" ALTER COLUMN "lot_id" DROP NOT NULL;--> statement-breakpoint
+ALTER TABLE "message_threads" ADD CONSTRAINT "message_threads_lot_or_order" CHECK (("message_threads"."lot_id" is null) <> ("message_threads"."order_id" is null));
