@@ -8,6 +8,8 @@ export interface CachedPage {
   status: number;
   headers: [string, string][];
   body: Buffer;
+  /** The body compressed, made on the first request that asks for each encoding. */
+  encoded?: Partial<Record<'br' | 'gzip', Buffer>>;
 }
 
 /**
