@@ -188,6 +188,9 @@ export interface LotDetail {
   harvestEndedOn: string;
   storage: StorageKind;
   moistureAtBalingPct: number | null;
+  /** Growing conditions the grower reported: a drought-stressed crop; heavy nitrogen fertiliser or manure. */
+  droughtStressed: boolean;
+  heavyNitrogen: boolean;
   baleType: BaleType;
   baleCount: number;
   balesAvailable: number;

@@ -95,6 +95,10 @@ export const LotStepSchema = z
     harvestEndedOn: isoDate('Harvest end'),
     storage: z.enum(STORAGE_KINDS, { message: 'Choose how the hay is stored.' }),
     moistureAtBalingPct: number('Moisture at baling', 0, 60, '%').nullable().default(null),
+    /** Growing conditions (optional): the crop was drought-stressed; prompts a nitrate test. */
+    droughtStressed: z.boolean({ message: 'Drought-stressed is yes or no.' }).default(false),
+    /** Growing conditions (optional): heavy nitrogen fertiliser or manure on the field; prompts a nitrate test. */
+    heavyNitrogen: z.boolean({ message: 'Heavy nitrogen is yes or no.' }).default(false),
     description: prose('Description', 2000).default(''),
   })
   .strict()

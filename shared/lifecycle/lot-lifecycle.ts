@@ -140,6 +140,8 @@ export const LOT_FACTS = {
   harvestEndedOn: 'review',
   storage: 'review',
   moistureAtBalingPct: 'review',
+  droughtStressed: 'review',
+  heavyNitrogen: 'review',
   description: 'review',
   baleType: 'review',
   baleCount: 'review',

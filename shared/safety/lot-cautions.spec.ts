@@ -98,6 +98,24 @@ describe('lotCautions — sorghum-type hay and the nitrate prompt', () => {
     expect(lotCautions({ ...base, forageType: 'oat' }).find((c) => c.code === 'nitrate-test')!.message).toMatch(/veterinarian/);
   });
 
+  // Drought and heavy soil nitrogen raise nitrate in any hay (UC ANR, Mathesius, Maier & Davy: drought and nitrogen
+  // fertiliser; NC State Extension, Burch 2018: drought, reduced sunlight, excessive soil nitrogen).
+  it('prompts for a nitrate test on any hay the grower reports drought-stressed or heavily fertilised, until a result is given', () => {
+    const grass = { ...base, forageType: 'timothy' as const };
+    expect(codes(grass)).not.toContain('nitrate-test');
+    for (const conditions of [{ droughtStressed: true }, { heavyNitrogen: true }]) {
+      expect(codes({ ...grass, ...conditions })).toContain('nitrate-test');
+      expect(codes({ ...grass, ...conditions, nitrateTested: true })).not.toContain('nitrate-test');
+      expect(growerCautions({ ...grass, ...conditions }).map((c) => c.code)).toContain('nitrate-test');
+    }
+    const buyer = lotCautions({ ...grass, droughtStressed: true, heavyNitrogen: true }).find((c) => c.code === 'nitrate-test')!;
+    expect(buyer.message).toMatch(/^The grower reports this hay was drought-stressed and grown with heavy nitrogen fertiliser or manure/);
+    expect(buyer.message).toMatch(/veterinarian/);
+    const grower = growerCautions({ ...grass, heavyNitrogen: true }).find((c) => c.code === 'nitrate-test')!;
+    expect(grower.message).toMatch(/^You report this hay was grown with heavy nitrogen fertiliser or manure/);
+    expect(grower.message).toMatch(/veterinarian/);
+  });
+
   it('tells the grower of a sorghum-type lot to test for nitrate, in words written for the grower', () => {
     const grower = growerCautions({ ...base, forageType: 'forage_sorghum' });
     expect(grower.map((c) => c.code)).toEqual(expect.arrayContaining(['sorghum-type', 'nitrate-test']));

@@ -38,6 +38,27 @@ export interface CautionInput {
   forageType?: ForageType | null;
   /** Whether the current analysis includes a nitrate result. */
   nitrateTested?: boolean;
+  /** Growing conditions the grower reported: a drought-stressed crop. */
+  droughtStressed?: boolean;
+  /** Growing conditions the grower reported: heavy nitrogen fertiliser or manure on the field. */
+  heavyNitrogen?: boolean;
+}
+
+/*
+ * Growing conditions that raise nitrate in any hay, not only the usual suspects: drought slows the plant's use of the
+ * nitrate it has taken up, and plenty of soil nitrogen (heavy fertiliser or manure) gives it more to store
+ * (UC ANR, Mathesius, Maier & Davy, "Drought conditions may increase the chances for risky levels of nitrate in
+ * forages"; NC State Extension, Burch 2018, "Testing your hay is money well spent": drought, reduced sunlight and
+ * excessive soil nitrogen; UConn Extension 2022: under 1,000 ppm nitrate-N on DM is considered safe).
+ */
+function growingConditions(lot: CautionInput): string | null {
+  const said = [lot.droughtStressed ? 'drought-stressed' : null, lot.heavyNitrogen ? 'grown with heavy nitrogen fertiliser or manure' : null].filter((s) => s !== null);
+  return said.length === 0 ? null : said.join(' and ');
+}
+
+function nitratePromptApplies(lot: CautionInput): boolean {
+  if (lot.nitrateTested) return false;
+  return nitrateTestAdvised({ forageType: lot.forageType ?? '', drought: lot.droughtStressed, heavyNitrogen: lot.heavyNitrogen });
 }
 
 /**
@@ -102,11 +123,14 @@ export function lotCautions(lot: CautionInput): Caution[] {
         'Do not feed it to horses without your veterinarian\'s advice.',
     });
   }
-  if (lot.forageType && !lot.nitrateTested && nitrateTestAdvised({ forageType: lot.forageType })) {
+  if (nitratePromptApplies(lot)) {
+    const conditions = growingConditions(lot);
     out.push({
       code: 'nitrate-test',
       title: 'No nitrate result for a hay that can carry it',
-      message: `${NITRATE_TEST_PROMPT} Ask the grower for a nitrate result, and your veterinarian before feeding it, especially to pregnant mares.`,
+      message:
+        (conditions ? `The grower reports this hay was ${conditions}, which can raise its nitrate. ` : '') +
+        `${NITRATE_TEST_PROMPT} Ask the grower for a nitrate result, and your veterinarian before feeding it, especially to pregnant mares.`,
     });
   }
   if (lot.forageClass !== 'grass') {
@@ -197,8 +221,9 @@ export function growerCautions(lot: CautionInput): Caution[] {
       ...c,
       title: 'Test this hay for nitrate',
       message:
+        (growingConditions(lot) ? `You report this hay was ${growingConditions(lot)}, which can raise its nitrate. ` : '') +
         `${NITRATE_TEST_PROMPT} Buyers are told when a lot of this kind has no nitrate result; enter it with the lab values ` +
-        '(most labs run it on the same sample).',
+        '(most labs run it on the same sample). Buyers are also told to ask their veterinarian before feeding it to pregnant mares.',
     }),
     'mould-dust': (c) => ({
       ...c,

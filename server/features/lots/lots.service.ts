@@ -196,6 +196,8 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: C
     harvestEndedOn: lot.harvestEndedOn,
     storage: lot.storage,
     moistureAtBalingPct: lot.moistureAtBalingPct,
+    droughtStressed: lot.droughtStressed,
+    heavyNitrogen: lot.heavyNitrogen,
     baleType: lot.baleType,
     baleCount: lot.baleCount,
     balesAvailable: lot.balesAvailable,

@@ -194,6 +194,8 @@ export class LotStepsService {
       harvestEndedOn: input.harvestEndedOn,
       storage: input.storage,
       moistureAtBalingPct: input.moistureAtBalingPct,
+      droughtStressed: input.droughtStressed,
+      heavyNitrogen: input.heavyNitrogen,
       description: input.description,
     };
   }

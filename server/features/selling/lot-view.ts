@@ -40,6 +40,8 @@ export async function editableLot(db: Db, lotId: number, clock: Clock): Promise<
       harvestEndedOn: lot.harvestEndedOn,
       storage: lot.storage,
       moistureAtBalingPct: lot.moistureAtBalingPct,
+      droughtStressed: lot.droughtStressed,
+      heavyNitrogen: lot.heavyNitrogen,
       description: lot.description,
     },
     quantity: saved('quantity')

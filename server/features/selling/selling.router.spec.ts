@@ -146,6 +146,26 @@ describe('selling API', () => {
     expect((await t.agent().get(`/lots/${id}`)).status).toBe(404);
   }, 30_000);
 
+  it('records optional growing conditions, shows them to buyers on the listed lot, and sends a listed lot back to review when they change', async () => {
+    const unset = await grower.agent.post('/selling/lots', LOT_STEP);
+    expect(unset.body.lot).toMatchObject({ droughtStressed: false, heavyNitrogen: false });
+    const bad = await grower.agent.put(`/selling/lots/${unset.body.id}/lot`, { ...LOT_STEP, droughtStressed: 'very' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.details.map((d: { path: string }) => d.path)).toContain('droughtStressed');
+
+    const id = await completeLot(grower.agent, { lot: { droughtStressed: true } });
+    await grower.agent.post(`/selling/lots/${id}/submit`);
+    const admin = await signedInUser(t, 'admin');
+    await admin.agent.post(`/review/lots/${id}/approve`);
+    const listed = await t.agent().get(`/lots/${id}`);
+    expect(listed.body).toMatchObject({ droughtStressed: true, heavyNitrogen: false });
+
+    // Buyers rely on them (they prompt a nitrate test), so a change is a fact the admin looks at again.
+    const changed = await grower.agent.put(`/selling/lots/${id}/lot`, { ...LOT_STEP, droughtStressed: true, heavyNitrogen: true });
+    expect(changed.status).toBe(200);
+    expect(changed.body).toMatchObject({ status: 'in_review', lot: { droughtStressed: true, heavyNitrogen: true } });
+  }, 30_000);
+
   it('after approval: a change of the description, storage or bale type sends the lot back to review (lot life-cycle, README)', async () => {
     const approve = async () => {
       const id = await completeLot(grower.agent);

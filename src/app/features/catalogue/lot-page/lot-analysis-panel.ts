@@ -56,6 +56,8 @@ export class LotAnalysisPanel {
       dryMatterPct: this.analysis().dryMatterPct,
       forageType: lot.forageType,
       nitrateTested: this.analysis().nitrateNo3PctDm !== null,
+      droughtStressed: lot.droughtStressed,
+      heavyNitrogen: lot.heavyNitrogen,
     });
   });
   protected readonly usdaRule = computed(() => usdaGradeRule(this.evaluation().grades.usda));

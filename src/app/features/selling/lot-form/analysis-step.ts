@@ -66,8 +66,11 @@ export class AnalysisStep {
   protected readonly fields = VALUE_FIELDS;
   protected readonly safetyFields = SAFETY_FIELDS;
   protected readonly mouldScores = VISUAL_MOULD_SCORES.map((value) => ({ value, label: VISUAL_MOULD_LABELS[value] }));
-  /** Small-grain and sorghum-type hays get the nitrate prompt beside the nitrate field. */
-  protected readonly nitratePrompt = computed(() => (nitrateTestAdvised({ forageType: this.lot().lot?.forageType ?? '' }) ? NITRATE_TEST_PROMPT : null));
+  /** Small-grain and sorghum-type hays, and hay the grower reports drought-stressed or heavily fertilised, get the nitrate prompt beside the nitrate field. */
+  protected readonly nitratePrompt = computed(() => {
+    const l = this.lot().lot;
+    return nitrateTestAdvised({ forageType: l?.forageType ?? '', drought: l?.droughtStressed, heavyNitrogen: l?.heavyNitrogen }) ? NITRATE_TEST_PROMPT : null;
+  });
   protected readonly templateUrl = this.api.templateUrl;
   protected readonly saving = new StepSave();
   protected readonly preview = signal<ForageEvaluation | null>(null);

@@ -2,6 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, effect, inject, input, ou
 import { toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
+import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
@@ -16,7 +17,7 @@ import { numberOrNull, StepSave } from './step-save';
 /** Step 1: which hay this is — field, cutting, forage, harvest dates, storage and baling moisture. */
 @Component({
   selector: 'app-lot-step',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton, CautionsList],
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatButton, MatCheckbox, CautionsList],
   template: `
     <form [formGroup]="form" (ngSubmit)="save()">
       <div class="grid">
@@ -41,6 +42,12 @@ import { numberOrNull, StepSave } from './step-save';
           </mat-select>
         </mat-form-field>
         <mat-form-field appearance="outline"><mat-label>Moisture at baling</mat-label><input matInput type="number" step="0.1" formControlName="moistureAtBalingPct" /><span matTextSuffix>%</span></mat-form-field>
+        <fieldset class="wide growing">
+          <legend>Growing conditions (optional)</legend>
+          <mat-checkbox formControlName="droughtStressed">The crop was drought-stressed</mat-checkbox>
+          <mat-checkbox formControlName="heavyNitrogen">The field had heavy nitrogen fertiliser or manure</mat-checkbox>
+          <p class="hint">Either can raise nitrate in the hay; buyers are asked to look for a nitrate result.</p>
+        </fieldset>
         <mat-form-field appearance="outline" class="wide"><mat-label>Title</mat-label><input matInput formControlName="title" [placeholder]="suggestedTitle()" /><mat-hint>Leave empty for “{{ suggestedTitle() }}”</mat-hint></mat-form-field>
         <mat-form-field appearance="outline" class="wide"><mat-label>Description for buyers</mat-label><textarea matInput rows="3" formControlName="description"></textarea></mat-form-field>
       </div>
@@ -72,6 +79,8 @@ export class LotStep {
     harvestEndedOn: ['', Validators.required],
     storage: ['barn', Validators.required],
     moistureAtBalingPct: ['' as number | string],
+    droughtStressed: [false],
+    heavyNitrogen: [false],
     title: [''],
     description: [''],
   });
@@ -99,6 +108,8 @@ export class LotStep {
       nscFlag: this.lot()?.evaluation?.nscFlag ?? null,
       forageType: (v.forageType ?? null) as ForageType | null,
       nitrateTested: this.lot()?.analysis?.values['nitrateNo3PctDm'] !== undefined,
+      droughtStressed: v.droughtStressed ?? false,
+      heavyNitrogen: v.heavyNitrogen ?? false,
     };
   });
 

@@ -13,6 +13,8 @@ export function cautionInputOf(l: EditableLot): CautionInput | null {
     nscFlag: l.evaluation?.nscFlag ?? null,
     forageType: l.lot.forageType,
     nitrateTested: l.analysis?.values['nitrateNo3PctDm'] !== undefined,
+    droughtStressed: l.lot.droughtStressed,
+    heavyNitrogen: l.lot.heavyNitrogen,
   };
 }
 
