@@ -43,17 +43,6 @@ describe('horseRequirements — mature horses', () => {
     ]);
   });
 
-  it('1,100 lb (499.0 kg): DE 16.6 maintenance and 19.9 / 23.3 / 26.6 / 34.4 Mcal work; CP 628.7 g (domain brief §6 worked example)', () => {
-    const kg = lbToKg(1100);
-    expect(roundTo(at(kg, 'maintenance').deMcalPerDay, 1)).toBe(16.6);
-    expect(roundTo(at(kg, 'light-work').deMcalPerDay, 1)).toBe(19.9);
-    expect(roundTo(at(kg, 'moderate-work').deMcalPerDay, 1)).toBe(23.3);
-    expect(roundTo(at(kg, 'heavy-work').deMcalPerDay, 1)).toBe(26.6);
-    expect(roundTo(at(kg, 'very-heavy-work').deMcalPerDay, 1)).toBe(34.4);
-    expect(roundTo(at(kg, 'maintenance').crudeProteinGPerDay, 1)).toBe(628.7);
-    expect(roundTo(at(kg, 'light-work').crudeProteinGPerDay, 1)).toBe(697.5); // 699/500 g/kg; the brief's 698.5 g uses the rounded 1.40 g/kg
-  });
-
   it('1,000 / 1,100 / 1,200 lb maintenance: Ca 18/20/22 g, P 13/14/15 g, DE ≈ 15/16.5/18 Mcal (verified, Sparrow Valley Ranch fact sheet from NRC 2007)', () => {
     const rows = [1000, 1100, 1200].map((lb) => {
       const r = at(lbToKg(lb), 'maintenance');

@@ -12,10 +12,11 @@ import {
 import { roundTo } from './rounding';
 
 describe('mass conversions', () => {
-  it('uses 2.2046 lb per kg, so 1,100 lb is 499.0 kg (domain brief §6 worked example)', () => {
-    expect(LB_PER_KG).toBe(2.2046);
-    expect(roundTo(lbToKg(1100), 1)).toBe(499.0);
-    expect(kgToLb(500)).toBeCloseTo(1102.3, 10);
+  // NIST Handbook 44, Appendix C: 1 lb = 0.453 592 37 kg exactly, so 1 kg = 2.204 622 6 lb and 1,100 lb = 498.95 kg.
+  it('converts pounds and kilograms within 0.002 % of the NIST definition (1,100 lb → 499.0 kg; 500 kg → 1,102.3 lb)', () => {
+    expect(Math.abs(LB_PER_KG - 1 / 0.45359237) / (1 / 0.45359237)).toBeLessThan(0.00002);
+    expect(roundTo(lbToKg(1100), 1)).toBe(roundTo(1100 * 0.45359237, 1));
+    expect(Math.abs(kgToLb(500) - 500 / 0.45359237)).toBeLessThan(0.02);
   });
 
   it('uses the 2,000 lb short ton (domain brief §11: 32,120 lb ≈ 16.1 t)', () => {
@@ -29,7 +30,8 @@ describe('mass conversions', () => {
     // 2,000 × 0.45359237 = 907.18474 kg (NIST Handbook 44), differs by 0.001 %.)
     expect(shortTonsToKg(1)).toBeCloseTo(907.19405, 4);
     expect(Math.abs(shortTonsToKg(1) - 907.18474) / 907.18474).toBeLessThan(0.00002);
-    expect(kgToShortTons(2721.58215)).toBeCloseTo(3, 6);
+    // NIST: 3 short tons = 6,000 × 0.453 592 37 = 2,721.554 kg.
+    expect(Math.abs(kgToShortTons(2721.55422) - 3) / 3).toBeLessThan(0.00002);
   });
 
   it('round-trips any weight (property)', () => {
