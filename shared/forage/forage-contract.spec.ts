@@ -126,7 +126,7 @@ describe('forage-contract', () => {
     });
 
     it('rejects unknown fields', () => {
-      expect(SamplingRecordSchema.safeParse({ ...record, lab: 'Dairyland' }).success).toBe(false);
+      expect(SamplingRecordSchema.safeParse({ ...record, lab: 'Fieldside Lab' }).success).toBe(false);
     });
   });
 });

@@ -60,7 +60,8 @@ describe('order total', () => {
   it('charges no freight for pickup at the farm', () => {
     const total = orderTotal(smallSquares, { bales: 100, method: 'pickup', distanceMi: null }, FEE_3_PCT);
     expect(total.freightCents).toBe(0);
-    expect(total.totalCents).toBe(total.goodsCents + total.platformFeeCents);
+    // By hand: 100 × 60 lb / 2,000 = 3 t × $400 = $1,200 of hay + 3 % fee $36 = $1,236.
+    expect(total.totalCents).toBe(123_600);
   });
 
   it('keeps every amount a whole number of cents for awkward weights (conventions: integer cents)', () => {

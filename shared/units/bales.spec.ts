@@ -1,4 +1,4 @@
-import { balesForTons, balesToTons } from './bales';
+import { balesForTons, balesToTons, balesWithinTons } from './bales';
 
 describe('bales and tons', () => {
   it('turns 16.9 t of 60 lb small squares into 564 bales (domain brief §11 worked example: 563.5 → 564)', () => {
@@ -15,6 +15,11 @@ describe('bales and tons', () => {
 
   it('does not round an exact whole number of bales up from float noise (common practice)', () => {
     expect(balesForTons(balesToTons(7, 0.3 * 3 * 1000), 900)).toBe(7);
+  });
+
+  it('fits whole bales within a weight: 10 t holds 15 bales of 1,300 lb (15.4 by hand), 5.85 t exactly 9 (domain brief §11)', () => {
+    expect(balesWithinTons(10, 1300)).toBe(15);
+    expect(balesWithinTons(5.85, 1300)).toBe(9);
   });
 
   it('refuses fractions of a bale and weightless bales', () => {
