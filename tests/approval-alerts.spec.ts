@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { and, eq, isNull } from 'drizzle-orm';
 import { savedSearches, users } from '../server/db/schema';
 import { caughtMails, waitForMail, type CaughtMail } from '../e2e/support/mail-catcher';
-import { completeLot, signedInGrower, signedInUser } from './support/grower-lot';
+import { approveLot, completeLot, signedInGrower, signedInUser } from './support/grower-lot';
 import { startTestApi, type TestApi } from './support/test-api';
 
 // Spans selling, review and saved searches: approving a lot is what makes it public, and that is
@@ -44,7 +44,7 @@ describe('approving a lot alerts matching saved searches', () => {
 
     const admin = await signedInUser(t, 'admin');
     const before = new Set((await caughtMails()).map((m) => m.id));
-    expect((await admin.agent.post(`/review/lots/${lotId}/approve`)).status).toBe(200);
+    expect((await approveLot(admin.agent, lotId)).status).toBe(200);
     // The outbox holds the e-mails until its jobs run (workers are off in tests).
     await t.drainJobs();
 

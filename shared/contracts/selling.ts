@@ -226,6 +226,12 @@ export type PhotoOrder = z.infer<typeof PhotoOrderSchema>;
 export const ReturnLotSchema = z.object({ reason: multiLineText('Reason', 2000, { min: 5, minMessage: 'Give the grower a reason they can act on.' }) }).strict();
 export type ReturnLot = z.infer<typeof ReturnLotSchema>;
 
+/** An approval names the lot revision the admin reviewed (`ReviewLotView.revision`); a later change makes it 409. */
+export const ApproveLotSchema = z
+  .object({ revision: z.number({ error: 'Say which revision of the lot you reviewed (reload the lot).' }).int().positive().max(2 ** 31 - 1) })
+  .strict();
+export type ApproveLot = z.infer<typeof ApproveLotSchema>;
+
 // ---------------------------------------------------------------- views
 
 export type { LotStatus };
@@ -302,6 +308,8 @@ export interface ReviewQueueRow {
 
 export interface ReviewLotView {
   lot: EditableLot;
+  /** The lot's revision when this view was read: facts, sampling, analysis and report as shown belong to it (or a later one). */
+  revision: number;
   farm: { name: string; city: string; state: string; growerEmail: string; payoutsReady: boolean };
   /** Each entered value beside the value read from the PDF, mismatches flagged. */
   comparison: ReadingComparison[];

@@ -68,3 +68,9 @@ export async function completeLot(agent: Agent, overrides: { lot?: object; sampl
   if (price.status !== 200) throw new Error(`price failed: ${JSON.stringify(price.body)}`);
   return id;
 }
+
+/** Approves a lot as the admin review desk does: reads the review view, then approves the revision it showed. */
+export async function approveLot(admin: Agent, lotId: number) {
+  const view = await admin.get(`/review/lots/${lotId}`);
+  return admin.post(`/review/lots/${lotId}/approve`, { revision: view.body.revision });
+}

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
-import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { approveLot, completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { TEST_NOW } from '../../../tests/support/test-clock';
 
@@ -100,7 +100,7 @@ describe('lots API', () => {
     const listed = async (cores: number) => {
       const id = await completeLot(grower.agent, { lot: { title: `${own} cores ${cores}` }, sampling: { coresTaken: cores, balesSampled: cores } });
       expect((await grower.agent.post(`/selling/lots/${id}/submit`)).status).toBe(200);
-      expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+      expect((await approveLot(admin.agent, id)).status).toBe(200);
       return (await t.agent().get(`/lots/${id}`)).body;
     };
     const twenty = await listed(20);
@@ -126,7 +126,7 @@ describe('lots API', () => {
     expect((await grower.agent.post(`/selling/lots/${id}/submit`)).status).toBe(200);
     try {
       t.clock.set(new Date(Date.parse(TEST_NOW) + 120 * 86_400_000));
-      expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+      expect((await approveLot(admin.agent, id)).status).toBe(200);
     } finally {
       t.clock.set(TEST_NOW);
     }

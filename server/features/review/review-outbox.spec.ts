@@ -1,5 +1,5 @@
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { approveLot, completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 
 // The review desk's e-mails go through the outbox: an SMTP outage neither fails nor slows the admin's
 // request, and the grower still gets the e-mail once SMTP is back.
@@ -17,7 +17,7 @@ describe('review e-mails through the outbox', () => {
     const admin = await signedInUser(t, 'admin');
 
     t.smtp.down = true;
-    const approved = await admin.agent.post(`/review/lots/${id}/approve`);
+    const approved = await approveLot(admin.agent, id);
     expect(approved.status).toBe(200);
     expect(approved.body.lot.status).toBe('listed');
     const outage = await t.drainJobs();

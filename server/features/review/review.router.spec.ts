@@ -1,8 +1,8 @@
 import { and, eq } from 'drizzle-orm';
-import { auditEvents } from '../../db/schema';
+import { auditEvents, labAnalyses, lots } from '../../db/schema';
 import type { TestApi } from '../../../tests/support/test-api';
 import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
-import { completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { ANALYSIS_STEP, approveLot, completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { addLotApprovedListener } from './lot-approved';
 import { simplePdf } from '../../../tests/support/simple-pdf';
 
@@ -44,7 +44,7 @@ describe('review API', () => {
       throw new Error('a listener that breaks must not undo the approval');
     });
     const stop = addLotApprovedListener((_deps, lotId) => void heard.push(lotId));
-    const res = await admin.agent.post(`/review/lots/${id}/approve`);
+    const res = await approveLot(admin.agent, id);
     failing();
     stop();
     expect(res.status).toBe(200);
@@ -65,8 +65,54 @@ describe('review API', () => {
       after: { status: 'listed', analysisVerification: 'verified', publishedAt: t.clock.now().toISOString() },
       createdAt: t.clock.now(),
     });
-    expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(409);
+    expect((await approveLot(admin.agent, id)).status).toBe(409);
   }, 60_000);
+
+  it('approves only the revision the admin reviewed: a changed analysis or a swapped PDF answers 409 and nothing is approved', async () => {
+    const id = await submitted();
+    const seen = (await admin.agent.get(`/review/lots/${id}`)).body.revision as number;
+    expect(seen).toEqual(expect.any(Number));
+    // Meanwhile the grower changes the analysis.
+    expect((await grower.agent.put(`/selling/lots/${id}/analysis`, { ...ANALYSIS_STEP, values: { ...ANALYSIS_STEP.values, crudeProteinPct: 24 } })).status).toBe(200);
+    const stale = await admin.agent.post(`/review/lots/${id}/approve`, { revision: seen });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.code).toBe('lot_changed');
+    expect(stale.body.error.message).toMatch(/changed this lot while you were reviewing it/);
+    const [lot] = await t.deps.db.select().from(lots).where(eq(lots.id, id));
+    expect(lot!.status).toBe('in_review');
+    const [current] = await t.deps.db.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, id), eq(labAnalyses.isCurrent, true)));
+    expect(current!.verification).toBe('pending');
+    // The same after a PDF swap.
+    const fresh = (await admin.agent.get(`/review/lots/${id}`)).body.revision as number;
+    expect(fresh).toBeGreaterThan(seen);
+    const token = await grower.agent.token();
+    const swap = await grower.agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', simplePdf(['Another report']), 'other.pdf');
+    expect(swap.status).toBe(201);
+    expect((await admin.agent.post(`/review/lots/${id}/approve`, { revision: fresh })).status).toBe(409);
+    expect((await admin.agent.post(`/review/lots/${id}/approve`, {})).status).toBe(400);
+    // Reviewing again and approving what was seen works.
+    expect((await approveLot(admin.agent, id)).status).toBe(200);
+  }, 60_000);
+
+  it('a grower edit racing the approval never leaves unseen values listed (real concurrency against PostgreSQL)', async () => {
+    const outcomes = new Set<string>();
+    for (let round = 0; round < 6; round += 1) {
+      const id = await submitted();
+      const seen = (await admin.agent.get(`/review/lots/${id}`)).body.revision as number;
+      const [approve, edit] = await Promise.all([
+        admin.agent.post(`/review/lots/${id}/approve`, { revision: seen }),
+        grower.agent.put(`/selling/lots/${id}/analysis`, { ...ANALYSIS_STEP, reportNumber: 'R-CHANGED', values: { ...ANALYSIS_STEP.values, crudeProteinPct: 24 } }),
+      ]);
+      expect(edit.status).toBe(200);
+      expect([200, 409]).toContain(approve.status);
+      outcomes.add(String(approve.status));
+      if (round === 5) console.log(`approval outcomes over 6 races: ${[...outcomes].join(", ")}`);
+      const [lot] = await t.deps.db.select().from(lots).where(eq(lots.id, id));
+      const [current] = await t.deps.db.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, id), eq(labAnalyses.isCurrent, true)));
+      // Whichever came first, the changed analysis is pending and the lot waits for review; nothing unseen is verified.
+      expect([lot!.status, current!.reportNumber, current!.verification]).toEqual(['in_review', 'R-CHANGED', 'pending']);
+    }
+  }, 120_000);
 
   it('returns a lot with a reason the grower receives, and takes it back after a fix', async () => {
     const id = await submitted();

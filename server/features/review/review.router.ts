@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { ReturnLotSchema } from '@shared/contracts/selling';
+import { ApproveLotSchema, ReturnLotSchema } from '@shared/contracts/selling';
 import type { ApiDeps } from '../../api-deps';
 import { idParams } from '../../middleware/id-params';
 import { requireRole } from '../../middleware/require-role';
@@ -23,7 +23,8 @@ export function reviewRouter(deps: ApiDeps): Router {
 
   router.post('/lots/:id/approve', async (req, res) => {
     const { id } = idParams(req.params, { id: 'That lot' });
-    await service.approve(req.user!, id);
+    const { revision } = ApproveLotSchema.parse(req.body);
+    await service.approve(req.user!, id, revision);
     res.json(await service.lot(id));
   });
 

@@ -45,7 +45,8 @@ export class ReviewService {
 
   async lot(lotId: number): Promise<ReviewLotView> {
     const { db } = this.deps;
-    const { farm } = await findLotWithFarm(db, lotId);
+    // The revision is read first: everything read after it is that revision or a later one, never an earlier one.
+    const { lot: row, farm } = await findLotWithFarm(db, lotId);
     const [owner] = await db.select({ email: users.email }).from(users).where(eq(users.id, farm.ownerId));
     const history = await db
       .select({ action: auditEvents.action, at: auditEvents.createdAt, before: auditEvents.before, after: auditEvents.after, data: auditEvents.data, actorName: users.displayName, actorRole: users.role })
@@ -59,6 +60,7 @@ export class ReviewService {
     const reading = lot.analysis?.reportFile?.reading ?? null;
     return {
       lot,
+      revision: row.revision,
       farm: { name: farm.name, city: farm.city, state: farm.state, growerEmail: owner?.email ?? '', payoutsReady: farm.payoutsEnabled },
       comparison: analysis ? compareWithReading(analysis, reading) : [],
       readingSummary: !lot.analysis?.reportFile ? 'No report PDF is attached.' : reading ? readingSummary(reading) : 'This PDF was stored before reports were read; compare it by eye.',
@@ -73,14 +75,26 @@ export class ReviewService {
     };
   }
 
-  async approve(admin: Express.User, lotId: number): Promise<void> {
+  /**
+   * Approves the revision the admin reviewed. The lot's row is locked while the approval is written, and every
+   * grower change bumps the revision under the same lock, so values the admin never saw are never approved.
+   */
+  async approve(admin: Express.User, lotId: number, revision: number): Promise<void> {
     const { db, env } = this.deps;
-    const { lot, farm } = await findLotWithFarm(db, lotId);
-    const next = approvedStatus(lot.status, lot.balesAvailable);
+    const { farm } = await findLotWithFarm(db, lotId);
     const view = await editableLot(db, lotId, this.deps.clock);
     if (view.missing.length > 0) throw conflict('lot_incomplete', `This lot still lacks ${view.missing.join(', ')}.`);
     const now = this.deps.clock.now();
-    await db.transaction(async (tx) => {
+    const lot = await db.transaction(async (tx) => {
+      const [row] = await tx.select().from(lots).where(eq(lots.id, lotId)).for('update');
+      const lot = row!;
+      if (lot.revision !== revision) {
+        throw conflict(
+          'lot_changed',
+          `The grower changed this lot while you were reviewing it (you reviewed revision ${revision}; it is now revision ${lot.revision}). Reload the lot and check it again before approving.`,
+        );
+      }
+      const next = approvedStatus(lot.status, lot.balesAvailable);
       const publishedAt = lot.publishedAt ?? now;
       await tx.update(lots).set({ status: next, publishedAt, reviewedBy: admin.id, reviewedAt: now, reviewNote: null, updatedAt: now }).where(eq(lots.id, lotId));
       const [analysis] = await tx.select({ verification: labAnalyses.verification }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lotId), eq(labAnalyses.isCurrent, true)));
@@ -97,9 +111,10 @@ export class ReviewService {
         entityId: lotId,
         before: { status: lot.status, analysisVerification: analysis?.verification ?? null, publishedAt: lot.publishedAt?.toISOString() ?? null },
         after: { status: next, analysisVerification: 'verified', publishedAt: publishedAt.toISOString() },
-        data: { title: lot.title },
+        data: { title: lot.title, revision },
         at: now,
       });
+      return lot;
     });
     await this.mailGrower(farm.ownerId, (to) => approvedMail(to, lot, env.PUBLIC_URL));
     await onLotApproved(this.deps, lotId);

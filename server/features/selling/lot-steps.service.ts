@@ -69,27 +69,29 @@ export class LotStepsService {
     assertLotDates({ ...(await this.storedDates(lotId)), ...input }, this.clock.now(), HARVEST);
     const columns = this.lotColumns(input);
     const { forageClass: _derived, ...facts } = columns;
-    const needsReview = factsNeedingReview(lot, facts).length > 0;
     await this.db.transaction(async (tx) => {
-      await tx.update(lots).set({ ...columns, ...this.progress(lot, 'lot') }).where(eq(lots.id, lotId));
-      if (columns.forageClass !== lot.forageClass) await this.reevaluate(tx, lotId, columns.forageClass);
+      const now = await this.nextRevision(tx, lot.id);
+      const needsReview = factsNeedingReview(now, facts).length > 0;
+      await tx.update(lots).set({ ...columns, ...this.progress(now, 'lot') }).where(eq(lots.id, lotId));
+      if (columns.forageClass !== now.forageClass) await this.reevaluate(tx, lotId, columns.forageClass);
       // The sampling verdict depends on the harvest dates.
       await this.recheckSampling(tx, lotId);
-      if (needsReview) await this.backToReview(tx, lot);
+      if (needsReview) await this.backToReview(tx, now);
     });
   }
 
   async saveQuantity(user: Express.User, lotId: number, input: QuantityStep): Promise<void> {
-    const { lot } = await this.editable(user, lotId, 'quantity');
+    await this.editable(user, lotId, 'quantity');
     const q = deriveQuantity(input)!;
-    const firstTime = lot.draftStep < stepIndex('quantity');
-    const sold = firstTime ? 0 : lot.baleCount - lot.balesAvailable;
-    const balesAvailable = input.balesAvailable ?? Math.max(0, q.baleCount - sold);
-    const perTon = listedPricePerTonCents(lot, q.avgBaleWeightLb);
-    const shape = { baleType: input.baleType, baleCount: q.baleCount, avgBaleWeightLb: Math.round(q.avgBaleWeightLb * 10) / 10 };
-    const needsReview = !firstTime && factsNeedingReview(lot, shape).length > 0;
-    const status = statusAfterStockChange(lot.status, balesAvailable);
     await this.db.transaction(async (tx) => {
+      const lot = await this.nextRevision(tx, lotId);
+      const firstTime = lot.draftStep < stepIndex('quantity');
+      const sold = firstTime ? 0 : lot.baleCount - lot.balesAvailable;
+      const balesAvailable = input.balesAvailable ?? Math.max(0, q.baleCount - sold);
+      const perTon = listedPricePerTonCents(lot, q.avgBaleWeightLb);
+      const shape = { baleType: input.baleType, baleCount: q.baleCount, avgBaleWeightLb: Math.round(q.avgBaleWeightLb * 10) / 10 };
+      const needsReview = !firstTime && factsNeedingReview(lot, shape).length > 0;
+      const status = statusAfterStockChange(lot.status, balesAvailable);
       await tx
         .update(lots)
         .set({
@@ -109,12 +111,13 @@ export class LotStepsService {
   async saveSampling(user: Express.User, lotId: number, input: SamplingStep): Promise<void> {
     const { lot } = await this.editable(user, lotId, 'sampling');
     assertLotDates({ ...(await this.storedDates(lotId)), harvestStartedOn: lot.harvestStartedOn, sampledOn: input.sampledOn }, this.clock.now(), ['sampledOn']);
-    const verdict = samplingVerdictOf(lot, input, this.clock.now());
     await this.db.transaction(async (tx) => {
+      const now = await this.nextRevision(tx, lot.id);
+      const verdict = samplingVerdictOf(now, input, this.clock.now());
       const values = { ...input, compliant: verdict.compliant, findings: verdict.findings, updatedAt: this.clock.now() };
       await tx.insert(samplingRecords).values({ lotId, ...values }).onConflictDoUpdate({ target: samplingRecords.lotId, set: values });
-      await tx.update(lots).set(this.progress(lot, 'sampling')).where(eq(lots.id, lotId));
-      await this.backToReview(tx, lot);
+      await tx.update(lots).set(this.progress(now, 'sampling')).where(eq(lots.id, lotId));
+      await this.backToReview(tx, now);
     });
   }
 
@@ -129,13 +132,15 @@ export class LotStepsService {
     }
     const lab = { labName: input.labName, labCertified: input.labCertified, reportNumber: input.reportNumber, reportDate: input.reportDate, method: input.method };
     await this.db.transaction(async (tx) => {
-      await this.writeAnalysis(tx, lot, { ...lab, ...columns });
-      await tx.update(lots).set(this.progress(lot, 'analysis')).where(eq(lots.id, lotId));
+      const now = await this.nextRevision(tx, lot.id);
+      await this.writeAnalysis(tx, now, { ...lab, ...columns });
+      await tx.update(lots).set(this.progress(now, 'analysis')).where(eq(lots.id, lotId));
     });
   }
 
   /** Links an uploaded lab report (already stored) to the lot's current analysis, inside the caller's transaction. */
-  async attachReport(tx: Tx, lot: LotRow, fileId: number): Promise<void> {
+  async attachReport(tx: Tx, stale: LotRow, fileId: number): Promise<void> {
+    const lot = await this.nextRevision(tx, stale.id);
     const [current] = await tx.select({ id: labAnalyses.id }).from(labAnalyses).where(and(eq(labAnalyses.lotId, lot.id), eq(labAnalyses.isCurrent, true)));
     if (!current) throw new HttpError(409, 'analysis_required', 'Save the lab analysis values first, then attach the report PDF.');
     await this.writeAnalysis(tx, lot, { reportFileId: fileId });
@@ -166,6 +171,16 @@ export class LotStepsService {
   }
 
   /** The owner's lot, when the step before `step` has been saved. */
+  /**
+   * Takes the lot's row lock and bumps its revision, returning the row as it is now. An approval holds the
+   * same lock: it either sees this change's revision (and refuses, 409) or commits first, and then this
+   * change sees the listed lot and sends it back to review.
+   */
+  private async nextRevision(tx: Tx, lotId: number): Promise<LotRow> {
+    const [row] = await tx.update(lots).set({ revision: sql`${lots.revision} + 1` }).where(eq(lots.id, lotId)).returning();
+    return row!;
+  }
+
   /** The sample and current lab report dates already saved, to check a step's dates against. */
   private async storedDates(lotId: number): Promise<LotDates> {
     const [sampling] = await this.db.select({ sampledOn: samplingRecords.sampledOn }).from(samplingRecords).where(eq(samplingRecords.lotId, lotId));

@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray } from 'drizzle-orm';
 import { auditEvents, labAnalyses, lots } from '../../db/schema';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { approveLot, ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 
 describe('selling API', () => {
   let t: TestApi;
@@ -130,7 +130,7 @@ describe('selling API', () => {
     const id = await completeLot(grower.agent);
     await grower.agent.post(`/selling/lots/${id}/submit`);
     const admin = await signedInUser(t, 'admin');
-    await admin.agent.post(`/review/lots/${id}/approve`);
+    await approveLot(admin.agent, id);
 
     const price = await grower.agent.put(`/selling/lots/${id}/price`, { ...PRICE_STEP, priceCentsPerTon: 30000 });
     expect(price.body.status).toBe('listed');
@@ -171,7 +171,7 @@ describe('selling API', () => {
       const id = await completeLot(grower.agent);
       await grower.agent.post(`/selling/lots/${id}/submit`);
       const admin = await signedInUser(t, 'admin');
-      expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+      expect((await approveLot(admin.agent, id)).status).toBe(200);
       return id;
     };
     const a = await approve();
@@ -215,7 +215,7 @@ describe('selling API', () => {
     const id = await completeLot(grower.agent);
     await grower.agent.post(`/selling/lots/${id}/submit`);
     const admin = await signedInUser(t, 'admin');
-    await admin.agent.post(`/review/lots/${id}/approve`);
+    await approveLot(admin.agent, id);
 
     expect((await grower.agent.post(`/selling/lots/${id}/withdraw`)).body.status).toBe('withdrawn');
     expect((await t.agent().get(`/lots/${id}`)).status).toBe(404);

@@ -6,7 +6,7 @@ import type { FileStorage } from '../../adapters/storage/file-storage';
 import { createApi } from '../../api';
 import { photos, storedFiles } from '../../db/schema';
 import { csrfAgent, startTestApi, type TestApi } from '../../../tests/support/test-api';
-import { ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, makePdf, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
+import { approveLot, ANALYSIS_STEP, completeLot, LOT_STEP, makeJpeg, makePdf, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { PDF_MAX_BYTES, PHOTO_MAX_BYTES } from './upload-limits';
 import { simplePdf } from '../../../tests/support/simple-pdf';
 
@@ -244,7 +244,7 @@ describe('uploads API', () => {
     expect((await t.agent().get(`/uploads/lots/${id}/report`)).status).toBe(401);
 
     await owner.agent.post(`/selling/lots/${id}/submit`);
-    expect((await admin.agent.post(`/review/lots/${id}/approve`)).status).toBe(200);
+    expect((await approveLot(admin.agent, id)).status).toBe(200);
     const pdf = await buyer.agent.raw.get(`/uploads/lots/${id}/report`).buffer(true);
     expect(pdf.status).toBe(200);
     expect(Buffer.from(pdf.body).subarray(0, 5).toString()).toBe('%PDF-');

@@ -14,8 +14,9 @@ export class ReviewApi {
   lot(id: number): Observable<ReviewLotView> {
     return this.http.get<ReviewLotView>(`/api/review/lots/${id}`);
   }
-  approve(id: number): Observable<ReviewLotView> {
-    return this.http.post<ReviewLotView>(`/api/review/lots/${id}/approve`, {});
+  /** Approves the revision the admin was shown; the API answers 409 if the grower changed the lot since. */
+  approve(id: number, revision: number): Observable<ReviewLotView> {
+    return this.http.post<ReviewLotView>(`/api/review/lots/${id}/approve`, { revision });
   }
   returnToGrower(id: number, reason: string): Observable<ReviewLotView> {
     return this.http.post<ReviewLotView>(`/api/review/lots/${id}/return`, { reason });

@@ -78,7 +78,16 @@ export class ReviewLotPage implements OnInit {
     const decision = this.confirming();
     this.confirming.set(null);
     const id = Number(this.id());
-    if (decision === 'approve') await this.run(() => firstValueFrom(this.api.approve(id)));
+    const revision = this.view()?.revision;
+    if (decision === 'approve' && revision !== undefined) {
+      await this.run(() => firstValueFrom(this.api.approve(id, revision)));
+      // Refused (e.g. the grower changed the lot meanwhile): show the lot as it is now, keeping the reason.
+      const refused = this.error();
+      if (refused) {
+        await this.run(() => firstValueFrom(this.api.lot(id)));
+        this.error.set(refused);
+      }
+    }
     if (decision === 'return') await this.run(() => firstValueFrom(this.api.returnToGrower(id, this.reason.value)));
   }
 
