@@ -1,6 +1,6 @@
 import { evaluateForage, type ForageEvaluationRequest } from '../forage';
 import { CLAIM_NUTRIENTS, type ClaimNutrient } from '../contracts/platform-settings';
-import { READABLE_FIELD_LABELS } from '../contracts/report-reading';
+import { analysisField } from '../forage/analysis-fields';
 
 export interface NutrientJudgement {
   field: ClaimNutrient;
@@ -42,7 +42,7 @@ export function judgeRetest(listed: ForageEvaluationRequest, retest: ForageEvalu
     const r = value(retest, b, field);
     const difference = l === null || r === null ? null : Math.round((r - l) * 100) / 100;
     const tolerance = tolerances[field];
-    return { field, label: READABLE_FIELD_LABELS[field].label, unit: READABLE_FIELD_LABELS[field].unit, listed: l, retest: r, difference, tolerance, outside: difference !== null && Math.abs(difference) > tolerance + 1e-9 };
+    return { field, label: analysisField(field).label, unit: analysisField(field).unit, listed: l, retest: r, difference, tolerance, outside: difference !== null && Math.abs(difference) > tolerance + 1e-9 };
   }).filter((n) => n.listed !== null || n.retest !== null);
   const grades = (ev: ReturnType<typeof evaluateForage>) => ({ rfv: Math.round(ev.rfv), usdaGrade: ev.grades.usda.name, afgcGrade: ev.grades.afgc?.name ?? null });
   return {

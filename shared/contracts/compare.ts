@@ -1,3 +1,4 @@
+import type { StoredField } from '../forage/analysis-fields';
 import { z } from 'zod';
 import { MAX_COMPARED_LOTS } from './compare-limits';
 import type { BaleType, ForageType } from './lots';
@@ -25,6 +26,9 @@ export const LotCompareQuerySchema = z
   })
   .strict();
 export type LotCompareQuery = z.infer<typeof LotCompareQuerySchema>;
+
+/** The lab fields the compare sheet sets side by side, in the analysis-field table's order. */
+export const COMPARED_LAB_FIELDS = ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct', 'fatPct', 'ashPct', 'calciumPct', 'phosphorusPct'] as const satisfies readonly StoredField[];
 
 /** Nutrients on a dry-matter basis (%), with the engine's computed figures stored at save time. */
 export interface ComparedNutrients {

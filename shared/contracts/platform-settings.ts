@@ -1,8 +1,9 @@
 import { z } from 'zod';
+import { CLAIM_FIELD_ROWS, type ClaimNutrient } from '../forage/analysis-fields';
 
 /** Nutrients a quality claim's retest is judged on (dry-matter basis, dry matter itself as fed). */
-export const CLAIM_NUTRIENTS = ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct', 'ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct'] as const;
-export type ClaimNutrient = (typeof CLAIM_NUTRIENTS)[number];
+export const CLAIM_NUTRIENTS = CLAIM_FIELD_ROWS.map((f) => f.key);
+export type { ClaimNutrient };
 
 /**
  * How far a retest at another lab may sit from the listed analysis, in percentage units, before the

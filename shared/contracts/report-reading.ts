@@ -1,27 +1,13 @@
+import { READABLE_FIELD_ROWS, type ReadableField } from '../forage/analysis-fields';
+
 /**
- * What Baleproof read from a lab report PDF's text layer when it was uploaded. Values are percent as
- * printed, on the basis of the column or section they were printed in (`asFed` and/or `dm`); `null`
+ * What Baleproof read from a lab report PDF's text layer when it was uploaded. Values are in the field's unit
+ * (percent for nutrients), on the basis of the column or section they were printed in (`asFed` and/or `dm`); `null`
  * where the report does not give that basis. The grower confirms them in the lot form; the review desk
  * shows them beside the values entered.
  */
-export const READABLE_FIELDS = [
-  'dryMatterPct',
-  'crudeProteinPct',
-  'adfPct',
-  'ndfPct',
-  'ndfd48Pct',
-  'fatPct',
-  'ashPct',
-  'escPct',
-  'wscPct',
-  'starchPct',
-  'calciumPct',
-  'phosphorusPct',
-  'potassiumPct',
-  'magnesiumPct',
-  'reportedRfv',
-] as const;
-export type ReadableField = (typeof READABLE_FIELDS)[number];
+export const READABLE_FIELDS = READABLE_FIELD_ROWS.map((f) => f.key);
+export type { ReadableField };
 
 export interface ReadValue {
   asFed: number | null;
@@ -45,24 +31,8 @@ export type ReportReading =
   | { status: 'no_values' }
   | { status: 'unreadable'; message: string };
 
-/** How the review desk and the lot form name each readable field, with its unit. */
-export const READABLE_FIELD_LABELS: Record<ReadableField, { label: string; unit: string }> = {
-  dryMatterPct: { label: 'Dry matter', unit: '% as fed' },
-  crudeProteinPct: { label: 'Crude protein (CP)', unit: '% of DM' },
-  adfPct: { label: 'Acid detergent fibre (ADF)', unit: '% of DM' },
-  ndfPct: { label: 'Neutral detergent fibre (NDF)', unit: '% of DM' },
-  ndfd48Pct: { label: 'NDF digestibility, 48 h', unit: '% of NDF' },
-  fatPct: { label: 'Crude fat', unit: '% of DM' },
-  ashPct: { label: 'Ash', unit: '% of DM' },
-  escPct: { label: 'ESC (simple sugars)', unit: '% of DM' },
-  wscPct: { label: 'WSC (water-soluble carbohydrate)', unit: '% of DM' },
-  starchPct: { label: 'Starch', unit: '% of DM' },
-  calciumPct: { label: 'Calcium (Ca)', unit: '% of DM' },
-  phosphorusPct: { label: 'Phosphorus (P)', unit: '% of DM' },
-  potassiumPct: { label: 'Potassium (K)', unit: '% of DM' },
-  magnesiumPct: { label: 'Magnesium (Mg)', unit: '% of DM' },
-  reportedRfv: { label: 'RFV printed on the report', unit: 'index' },
-};
+/** How the review desk and the lot form name each readable field, with its unit (from the analysis-field table). */
+export const READABLE_FIELD_LABELS = Object.fromEntries(READABLE_FIELD_ROWS.map((f) => [f.key, { label: f.label, unit: f.unit }])) as Record<ReadableField, { label: string; unit: string }>;
 
 /** One line of the review desk's comparison: the entered value beside the value read from the PDF. */
 export interface ReadingComparison {

@@ -1,7 +1,7 @@
 import fc from 'fast-check';
 import { evaluateForage } from './evaluate';
+import { BASIS_DEPENDENT_FIELDS } from './analysis-fields';
 import {
-  BASIS_DEPENDENT_FIELDS,
   ForageEvaluationRequestSchema,
   ForageEvaluationSchema,
   type ForageEvaluation,

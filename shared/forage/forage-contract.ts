@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { VISUAL_MOULD_SCORES } from './mould-scores';
 import { AFGC_GRADES, USDA_ALFALFA_GRADES, USDA_GRASS_GRADES } from './grade-names';
+import { BASIS_DEPENDENT_FIELDS } from './analysis-fields';
 import { CORE_POSITIONS, FORAGE_CLASSES, type CorePosition, type ForageClass } from '../contracts/enums';
 
 /**
@@ -30,23 +31,6 @@ function percent(field: string, meaning: string) {
     .max(100, { error: `${field} (${meaning}) cannot exceed 100%` });
 }
 
-/**
- * Lab fields that are a share of the sample and so change with the basis (DM ↔ as-fed).
- * `ndfd48Pct` (% of NDF) and `reportedRfv` (an index) are deliberately absent.
- */
-export const BASIS_DEPENDENT_FIELDS = [
-  'crudeProteinPct',
-  'adfPct',
-  'ndfPct',
-  'fatPct',
-  'ashPct',
-  'escPct',
-  'wscPct',
-  'starchPct',
-  'calciumPct',
-  'phosphorusPct',
-] as const;
-export type BasisDependentField = (typeof BASIS_DEPENDENT_FIELDS)[number];
 
 /**
  * A lab analysis of one hay lot, as entered by a grower or read off a lab report.

@@ -12,3 +12,4 @@ export * from './evaluate';
 export * from './mould';
 export * from './mould-scores';
 export * from './nitrate';
+export * from './analysis-fields';

@@ -5,9 +5,12 @@ import {
   type ReadingComparison,
   type ReportReading,
 } from '../contracts/report-reading';
+import { analysisField, ENTERED_FIELDS, isShareOfSample, READABLE_FIELD_ROWS } from '../forage/analysis-fields';
 
 /** Fields whose as-fed and dry-matter figures differ by the dry-matter share. */
-const PER_SAMPLE = new Set<ReadableField>(['crudeProteinPct', 'adfPct', 'ndfPct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'potassiumPct', 'magnesiumPct']);
+const PER_SAMPLE = new Set<ReadableField>(READABLE_FIELD_ROWS.filter((f) => f.key !== 'dryMatterPct' && isShareOfSample(f)).map((f) => f.key));
+/** Readable fields the lot form takes (potassium and magnesium are only shown to the reviewer). */
+const ENTERED = new Set<string>(ENTERED_FIELDS.map((f) => f.key));
 
 /**
  * Compares the values a grower entered (dry-matter basis, dry matter as fed) with those read from the
@@ -53,14 +56,21 @@ export function compareWithReading(entered: Partial<Record<ReadableField, number
 export function prefillFromReading(reading: ReportReading): Record<string, number | string> | null {
   if (reading.status !== 'read') return null;
   const v = reading.values;
-  const count = (basis: 'asFed' | 'dm') => [...PER_SAMPLE].filter((f) => v[f]?.[basis] != null).length;
+  const typedOnBasis = [...PER_SAMPLE].filter((f) => analysisField(f).basis === 'entered');
+  const count = (basis: 'asFed' | 'dm') => typedOnBasis.filter((f) => v[f]?.[basis] != null).length;
   const basis = count('dm') >= count('asFed') ? 'dm' : 'asFed';
   const out: Record<string, number | string> = { basis };
   if (v.dryMatterPct?.asFed != null) out['dryMatterPct'] = v.dryMatterPct.asFed;
+  const dmShare = v.dryMatterPct?.asFed ?? null;
   for (const field of READABLE_FIELDS) {
     const got = v[field];
-    if (!got || field === 'dryMatterPct' || field === 'potassiumPct' || field === 'magnesiumPct') continue;
-    const value = PER_SAMPLE.has(field) ? got[basis] : (got.dm ?? got.asFed);
+    if (!got || field === 'dryMatterPct' || !ENTERED.has(field)) continue;
+    let value: number | null;
+    if (analysisField(field).basis === 'entered') value = got[basis];
+    else if (analysisField(field).basis === 'dm') {
+      // Typed on dry matter whatever the basis of the rest: an as-fed figure is converted.
+      value = got.dm ?? (got.asFed !== null && dmShare ? Math.round(((got.asFed * 100) / dmShare) * 1000) / 1000 : null);
+    } else value = got.dm ?? got.asFed;
     if (value != null) out[field] = value;
   }
   return out;

@@ -77,6 +77,36 @@ describe('readReportText', () => {
     expect(r.values.crudeProteinPct?.dm).toBe(17);
   });
 
+  it('reads nitrate, mould count and mycotoxins in the units labs print them', () => {
+    const r = read([
+      'Results on a dry matter basis',
+      'Crude protein  12.0 %',
+      'Nitrate (NO3-N), ppm  1200',
+      'Mold count, CFU/g  45,000',
+      'Aflatoxin B1, ppb  12',
+      'DON (vomitoxin), ppb  800',
+      'Fumonisin, ppm  0.4',
+    ]);
+    if (r.status !== 'read') throw new Error(r.status);
+    // ppm NO3-N × 62.004/14.007 ÷ 10,000 = % NO3 (IUPAC atomic weights N 14.007, O 15.999).
+    expect(r.values.nitrateNo3PctDm?.dm).toBeCloseTo(0.5312, 4);
+    expect(r.values.mouldCfuPerG?.dm).toBe(45_000);
+    expect(r.values.aflatoxinPpb?.dm).toBe(12);
+    expect(r.values.donPpm?.dm).toBe(0.8); // 1 ppm = 1,000 ppb (SI: mg/kg vs µg/kg)
+    expect(r.values.fumonisinPpm?.dm).toBe(0.4);
+    expect(prefillFromReading(r)).toMatchObject({ nitrateNo3PctDm: 0.5312, mouldCfuPerG: 45_000, aflatoxinPpb: 12, donPpm: 0.8, fumonisinPpm: 0.4 });
+  });
+
+  it('reads counts written out or in powers of ten, nitrate as % NO3, and skips results below detection', () => {
+    const r = read(['Dry matter basis', 'Nitrate, % NO3  0.45', 'Mould count  1.2 x 10^5 CFU/g', 'Aflatoxin, ppb  < 5', 'Crude protein 10.0 %']);
+    if (r.status !== 'read') throw new Error(r.status);
+    expect(r.values.nitrateNo3PctDm?.dm).toBe(0.45);
+    expect(r.values.mouldCfuPerG?.dm).toBe(120_000);
+    expect(r.values.aflatoxinPpb).toBeUndefined();
+    expect(read(['Mould count 250000 CFU/g'])).toMatchObject({ status: 'read', values: { mouldCfuPerG: { dm: 250_000 } } });
+    expect(read(['Yeast and mold count  250000'])).toEqual({ status: 'no_values' }); // yeasts are not the mould count
+  });
+
   it('says plainly when there is no text, or no values in the text', () => {
     expect(readReportText([])).toEqual({ status: 'no_text' });
     expect(read(['Thank you for your order', 'Invoice 2026-0042'])).toEqual({ status: 'no_values' });

@@ -1,4 +1,7 @@
 import type { ReadableField, ReadValue, ReportReading } from '../contracts/report-reading';
+import { analysisField } from '../forage/analysis-fields';
+import { ForageEvaluationRequestSchema } from '../forage/forage-contract';
+import { nitratePctNo3 } from '../forage/nitrate';
 
 /** One run of text on a PDF page, as a text extractor returns it (x, y in PDF points; y grows upwards). */
 export interface TextItem {
@@ -12,6 +15,8 @@ export interface TextItem {
 
 type Basis = 'asFed' | 'dm';
 
+const MOULD = /\bmou?lds?\b/;
+
 /**
  * How each analysis line is recognised, most specific first: a line is claimed by the first pattern
  * that matches its label (the text before its first value), so "NDFD" wins over "NDF" and
@@ -19,7 +24,12 @@ type Basis = 'asFed' | 'dm';
  */
 const LABELS: [ReadableField | 'moisture' | null, RegExp][] = [
   // Lines that look like a field but are something else: skipped.
-  [null, /adjusted (crude )?protein|soluble protein|bound protein|adicp|ndicp|degradab|\bnsc\b|non[- ]?(structural|fib(re|er))|\bnfc\b|\btdn\b|net energy|\bne[lmg]\b|digestible energy|\bde\b|relative feed quality|\brfq\b|lignin|sulfur|sulphur|sodium|iron|zinc|copper|manganese|nitrate|chloride|\bdcad\b|\bph\b|lactic|acetic|ammonia/],
+  [null, /adjusted (crude )?protein|soluble protein|bound protein|adicp|ndicp|degradab|\bnsc\b|non[- ]?(structural|fib(re|er))|\bnfc\b|\btdn\b|net energy|\bne[lmg]\b|digestible energy|\bde\b|relative feed quality|\brfq\b|lignin|sulfur|sulphur|sodium|iron|zinc|copper|manganese|chloride|\bdcad\b|\bph\b|lactic|acetic|ammonia|yeast|zearalenone|ochratoxin|\bt-?2\b/],
+  ['nitrateNo3PctDm', /nitrate|\bno3\b/],
+  ['aflatoxinPpb', /aflatoxin/],
+  ['donPpm', /\bdon\b|deoxynivalenol|vomitoxin/],
+  ['fumonisinPpm', /fumonisin/],
+  ['mouldCfuPerG', MOULD],
   ['ndfd48Pct', /\bndfd\b|\bndfd\d+|ndf digestib|digestible ndf|\bdndf\b/],
   ['moisture', /moisture|\bwater\b(?![- ]soluble)|\bh2o\b/],
   ['dryMatterPct', /^\s*(total )?dry matter\b|^\s*\bdm\b|^\s*dry substance/],
@@ -73,6 +83,9 @@ export function readReportText(items: TextItem[]): ReportReading {
   for (const line of lines) {
     const lower = line.text.toLowerCase().replace(HOURS, (m) => ' '.repeat(m.length));
     const numbers = [...lower.matchAll(NUMBER)].map((m) => ({ raw: m[0], at: m.index }));
+    // A mould count may be printed with more digits than any analysis value ("120000", "1.2e5").
+    const digit = /\d+/.exec(lower);
+    if (numbers.length === 0 && digit && MOULD.test(lower.slice(0, digit.index))) numbers.push({ raw: digit[0], at: digit.index });
     const firstAt = numbers[0]?.at ?? lower.length;
     const label = lower.slice(0, firstAt);
 
@@ -97,8 +110,6 @@ export function readReportText(items: TextItem[]): ReportReading {
     const field = LABELS.find(([, re]) => re.test(label))![0];
     if (field === null) continue;
     const parsed = numbers.map((n) => ({ value: Number(n.raw.replace(',', '.')), decimals: n.raw.split(/[.,]/)[1]?.length ?? 0, x: line.xAt(n.at), at: n.at }));
-    const ppm = /\bppm\b|mg\/kg/.test(lower);
-    const scale = ppm ? 1 / 10_000 : 1;
 
     if (field === 'moisture') {
       moisture = { value: parsed[0]!.value, decimals: parsed[0]!.decimals, line: line.text.trim() };
@@ -108,6 +119,14 @@ export function readReportText(items: TextItem[]): ReportReading {
       // Dry matter is a share of the sample as fed; a "100" in the dry-matter column says nothing.
       const dm = parsed.find((p) => p.value < 99.95 && p.value > 0);
       if (dm) values.dryMatterPct = { asFed: dm.value, dm: null, decimals: dm.decimals, line: line.text.trim() };
+      continue;
+    }
+    const convert = unitConversion(field, lower);
+    if (field === 'mouldCfuPerG' || analysisField(field).unit === 'ppb' || analysisField(field).unit === 'ppm') {
+      // Counts and toxins as the lab prints them; "<" is a result below the lab's limit of detection: nothing read.
+      if (/<\s*$/.test(lower.slice(0, firstAt))) continue;
+      const count = field === 'mouldCfuPerG' ? colonyCount(lower.slice(firstAt)) : { value: convert(parsed[0]!.value, parsed[0]!.decimals), decimals: parsed[0]!.decimals };
+      if (count) values[field] = { asFed: null, dm: count.value, decimals: count.decimals, line: line.text.trim() };
       continue;
     }
     if (field === 'reportedRfv' || field === 'ndfd48Pct') {
@@ -122,14 +141,14 @@ export function readReportText(items: TextItem[]): ReportReading {
     if (columns.length === 2 && !lineBasis) {
       for (const p of parsed.slice(0, 2)) {
         const nearest = columns.reduce((best, c) => (Math.abs(c.x - p.x) < Math.abs(best.x - p.x) ? c : best));
-        if (read[nearest.basis] === null) read[nearest.basis] = round(p.value * scale, p.decimals);
-        else read[nearest.basis === 'asFed' ? 'dm' : 'asFed'] = round(p.value * scale, p.decimals);
+        if (read[nearest.basis] === null) read[nearest.basis] = convert(p.value, p.decimals);
+        else read[nearest.basis === 'asFed' ? 'dm' : 'asFed'] = convert(p.value, p.decimals);
       }
       read.decimals = Math.max(...parsed.slice(0, 2).map((p) => p.decimals));
     } else {
       const basis = lineBasis ?? sectionBasis ?? 'dm';
       const p = parsed[0]!;
-      read[basis] = round(p.value * scale, p.decimals);
+      read[basis] = convert(p.value, p.decimals);
       read.decimals = p.decimals;
       if (lineBasis) basisStated = true;
     }
@@ -157,9 +176,41 @@ function basisOnLine(lower: string, label: string, firstNumberAt: number): Basis
   return null;
 }
 
+/** Within the range the engine's contract accepts for the field (0–100 % for the minerals it does not take). */
 function plausible(field: ReadableField, v: ReadValue): boolean {
-  const max = field === 'reportedRfv' ? 999 : 100;
-  return [v.asFed, v.dm].every((n) => n === null || (n >= 0 && n <= max)) && (v.asFed !== null || v.dm !== null);
+  const shape = ForageEvaluationRequestSchema.shape as Record<string, { safeParse(x: unknown): { success: boolean } } | undefined>;
+  const ok = (n: number) => (shape[field] ? shape[field].safeParse(n).success : n >= 0 && n <= 100);
+  return [v.asFed, v.dm].every((n) => n === null || ok(n)) && (v.asFed !== null || v.dm !== null);
+}
+
+const PPM_PER = { '%': 10_000, ppm: 1, ppb: 0.001 } as const;
+
+/**
+ * Turns a printed figure into the field's unit: ppm or mg/kg on a percent line (1 % = 10,000 ppm), ppb ↔ ppm for
+ * toxins (1 ppm = 1,000 ppb), and nitrate printed as nitrate-N (ppm NO3-N × 62.004/14.007 = ppm NO3).
+ */
+function unitConversion(field: ReadableField, lower: string): (value: number, decimals: number) => number {
+  const unit = analysisField(field).unit;
+  const target = unit === 'ppb' || unit === 'ppm' ? unit : unit.startsWith('%') ? '%' : null;
+  if (target === null) return (value, decimals) => round(value, decimals);
+  const printed = /\bppb\b|[µu]g\/kg/.test(lower) ? 'ppb' : /\bppm\b|mg\/kg/.test(lower) ? 'ppm' : target;
+  if (field === 'nitrateNo3PctDm') {
+    const asN = /nitrate[- ]?n\b|no3[- ]?n\b|\bn[- ]?no3\b|nitrate nitrogen/.test(lower);
+    const unitOf = asN ? 'ppm-no3-n' : printed === '%' ? 'pct-no3' : 'ppm-no3';
+    const factor = printed === 'ppb' ? 0.001 : 1;
+    return (value) => Math.round(nitratePctNo3(value * factor, unitOf) * 10_000) / 10_000;
+  }
+  if (printed === target) return (value, decimals) => round(value, decimals);
+  const factor = PPM_PER[printed] / PPM_PER[target];
+  return target === '%' ? (value, decimals) => round(value * factor, decimals) : (value) => Math.round(value * factor * 10_000) / 10_000;
+}
+
+/** A mould count as labs print it: "45,000", "45 000", "120000", "1.2 x 10^5", "1.2E5" colony-forming units per gram. */
+function colonyCount(text: string): { value: number; decimals: number } | null {
+  const m = /(\d{1,3}(?:[, ]\d{3})+|\d+(?:\.\d+)?)(?:\s*(?:[x×*]\s*10\s*\^?\s*|e\+?)(\d{1,2}))?/.exec(text);
+  if (!m) return null;
+  const mantissa = Number(m[1]!.replace(/[, ]/g, ''));
+  return { value: m[2] ? Math.round(mantissa * 10 ** Number(m[2])) : mantissa, decimals: 0 };
 }
 
 function round(value: number, decimals: number): number {

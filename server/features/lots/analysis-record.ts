@@ -1,4 +1,5 @@
 import { evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '@shared/forage';
+import { STORED_FIELDS, type StoredField } from '@shared/forage/analysis-fields';
 import type { labAnalyses } from '../../db/schema';
 
 /**
@@ -12,28 +13,9 @@ export function analysisColumns(request: ForageEvaluationRequest): { columns: An
     evaluation,
     columns: {
       enteredBasis: request.basis,
-      dryMatterPct: request.dryMatterPct,
-      crudeProteinPct: dm.crudeProteinPct,
-      adfPct: dm.adfPct,
-      ndfPct: dm.ndfPct,
-      // NDFD is a share of NDF, the same on any basis.
-      ndfd48Pct: request.ndfd48Pct ?? null,
-      fatPct: dm.fatPct,
-      ashPct: dm.ashPct,
-      escPct: dm.escPct,
-      wscPct: dm.wscPct,
-      starchPct: dm.starchPct,
-      calciumPct: dm.calciumPct,
-      phosphorusPct: dm.phosphorusPct,
-      reportedRfv: request.reportedRfv ?? null,
-      // Labs report nitrate on dry matter whatever basis the rest was typed in.
-      nitrateNo3PctDm: request.nitrateNo3PctDm ?? null,
-      // Mould counts and mycotoxins are kept as the lab reported them.
-      mouldCfuPerG: request.mouldCfuPerG ?? null,
+      ...storedValues(request, evaluation),
+      // Seen by the grower, not measured by the lab: kept beside the table's fields.
       visualMouldScore: request.visualMouldScore ?? null,
-      aflatoxinPpb: request.aflatoxinPpb ?? null,
-      donPpm: request.donPpm ?? null,
-      fumonisinPpm: request.fumonisinPpm ?? null,
       rfv: evaluation.rfv,
       rfq: evaluation.rfq,
       tdnPct: evaluation.tdnPct,
@@ -46,6 +28,20 @@ export function analysisColumns(request: ForageEvaluationRequest): { columns: An
       findings: evaluation.findings,
     },
   };
+}
+
+/**
+ * One column per stored field of the analysis-field table: shares of the sample on dry matter (converted by
+ * the engine), dry matter as fed, and the rest (NDFD as a share of NDF, nitrate on DM, counts and toxins) as
+ * the lab reported them.
+ */
+function storedValues(request: ForageEvaluationRequest, evaluation: ForageEvaluation): Pick<AnalysisColumns, StoredField> {
+  const out: Record<string, number | null> = {};
+  for (const field of STORED_FIELDS) {
+    if (field.basis === 'entered') out[field.key] = evaluation.dm[field.key];
+    else out[field.key] = request[field.key] ?? null;
+  }
+  return out as Pick<AnalysisColumns, StoredField>;
 }
 
 /** The lab_analyses columns this module fills, typed from the Drizzle schema (the single source of truth). */

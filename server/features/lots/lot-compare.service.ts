@@ -1,5 +1,6 @@
 import { and, eq, inArray, sql } from 'drizzle-orm';
-import type { ComparedLot, ComparedPricing, LotCompareQuery, LotComparison } from '@shared/contracts/compare';
+import { COMPARED_LAB_FIELDS, type ComparedLot, type ComparedPricing, type LotCompareQuery, type LotComparison } from '@shared/contracts/compare';
+import { pickFields } from '@shared/forage/analysis-fields';
 import { PUBLIC_LOT_STATUSES } from '@shared/lifecycle/lot-lifecycle';
 import { costPerLbCrudeProteinCents, costPerMcalDeCents, costPerTonDryMatterCents, deliveredPrice, DEFAULT_TONS_PER_LOAD } from '@shared/pricing';
 import type { Db } from '../../db/client';
@@ -47,15 +48,8 @@ export async function compareLots(db: Db, query: LotCompareQuery): Promise<LotCo
       labCertified: analysis.labCertified,
       analysisVerified: analysis.verification === 'verified',
       nutrients: {
-        dryMatterPct: analysis.dryMatterPct,
-        crudeProteinPct: analysis.crudeProteinPct,
-        adfPct: analysis.adfPct,
-        ndfPct: analysis.ndfPct,
+        ...pickFields(analysis, COMPARED_LAB_FIELDS),
         nscPct: analysis.nscPct,
-        fatPct: analysis.fatPct,
-        ashPct: analysis.ashPct,
-        calciumPct: analysis.calciumPct,
-        phosphorusPct: analysis.phosphorusPct,
         rfv: analysis.rfv,
         rfq: analysis.rfq,
         tdnPct: analysis.tdnPct,

@@ -10,6 +10,7 @@ import { samplingFactsOf } from '@shared/contracts/sampling-record';
 import { storedSamplingVerdict } from './sampling-report';
 import { costPerTonDryMatterCents } from '@shared/pricing/cost-per-nutrient';
 import { balesToTons, roundCents } from '@shared/units';
+import { pickFields, STORED_KEYS } from '@shared/forage/analysis-fields';
 
 export function photoView(row: { id: number; altText: string; width: number; height: number; isCover: boolean; variants: PhotoVariant[] }): PhotoView {
   return {
@@ -231,25 +232,8 @@ export async function findLotDetail(db: Db, id: number, viewer: Viewer, clock: C
           enteredBasis: analysis.enteredBasis,
           verification: analysis.verification,
           hasReportFile: analysis.reportFileId !== null,
-          dryMatterPct: analysis.dryMatterPct,
-          crudeProteinPct: analysis.crudeProteinPct,
-          adfPct: analysis.adfPct,
-          ndfPct: analysis.ndfPct,
-          ndfd48Pct: analysis.ndfd48Pct,
-          fatPct: analysis.fatPct,
-          ashPct: analysis.ashPct,
-          escPct: analysis.escPct,
-          wscPct: analysis.wscPct,
-          starchPct: analysis.starchPct,
-          calciumPct: analysis.calciumPct,
-          phosphorusPct: analysis.phosphorusPct,
-          reportedRfv: analysis.reportedRfv,
-          nitrateNo3PctDm: analysis.nitrateNo3PctDm,
-          mouldCfuPerG: analysis.mouldCfuPerG,
+          ...pickFields(analysis, STORED_KEYS),
           visualMouldScore: analysis.visualMouldScore,
-          aflatoxinPpb: analysis.aflatoxinPpb,
-          donPpm: analysis.donPpm,
-          fumonisinPpm: analysis.fumonisinPpm,
         }
       : null,
     evaluation: analysis ? evaluationOf(analysis, lot.forageClass) : null,

@@ -1,8 +1,8 @@
-import { BASIS_DEPENDENT_FIELDS, evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '@shared/forage';
+import { evaluateForage, type ForageEvaluation, type ForageEvaluationRequest } from '@shared/forage';
+import { analysisField, OPTIONAL_STORED_KEYS, STORED_KEYS } from '@shared/forage/analysis-fields';
 import type { labAnalyses } from '../../db/schema';
 
 type AnalysisRow = typeof labAnalyses.$inferSelect;
-const OPTIONAL = ['ndfd48Pct', 'fatPct', 'ashPct', 'escPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'reportedRfv', 'nitrateNo3PctDm', 'mouldCfuPerG', 'aflatoxinPpb', 'donPpm', 'fumonisinPpm'] as const;
 
 /** The stored (dry-matter) analysis as an engine request on the DM basis. */
 export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationRequest['forageClass']): ForageEvaluationRequest {
@@ -14,7 +14,7 @@ export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationReque
     adfPct: row.adfPct,
     ndfPct: row.ndfPct,
   };
-  for (const field of OPTIONAL) {
+  for (const field of OPTIONAL_STORED_KEYS) {
     const value = row[field];
     if (value !== null) request[field] = value;
   }
@@ -25,11 +25,10 @@ export function dmRequestOf(row: AnalysisRow, forageClass: ForageEvaluationReque
 /** The values as the grower typed them: DM figures turned back to as-fed when that was the basis. */
 export function enteredValuesOf(row: AnalysisRow): Record<string, number | string> {
   const out: Record<string, number | string> = { basis: row.enteredBasis, dryMatterPct: row.dryMatterPct };
-  const dependent = new Set<string>(BASIS_DEPENDENT_FIELDS);
-  for (const field of ['crudeProteinPct', 'adfPct', 'ndfPct', ...OPTIONAL] as const) {
+  for (const field of STORED_KEYS) {
     const value = row[field];
-    if (value === null) continue;
-    const asEntered = row.enteredBasis === 'asFed' && dependent.has(field) ? (value * row.dryMatterPct) / 100 : value;
+    if (value === null || field === 'dryMatterPct') continue;
+    const asEntered = row.enteredBasis === 'asFed' && analysisField(field).basis === 'entered' ? (value * row.dryMatterPct) / 100 : value;
     out[field] = Math.round(asEntered * 1000) / 1000;
   }
   if (row.visualMouldScore !== null) out['visualMouldScore'] = row.visualMouldScore;

@@ -1,4 +1,5 @@
-import type { ComparedLot } from '@shared/contracts/compare';
+import { COMPARED_LAB_FIELDS, type ComparedLot } from '@shared/contracts/compare';
+import { analysisField } from '@shared/forage/analysis-fields';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import { inLocale } from '../format';
 
@@ -32,7 +33,7 @@ function costRow(dollars: (cents: number, digits: number) => string, label: stri
 /** The table's sections, built once per comparison. Nutrients are % of dry matter. */
 export function compareSections(lots: ComparedLot[], locale = 'en-US'): CompareSection[] {
   const { fixed, dollars } = inLocale(locale);
-  const pct = (v: number | null) => (v === null ? '—' : `${fixed(v)}%`);
+  const pct = (v: number | null, digits = 1) => (v === null ? '—' : `${fixed(v, digits)}%`);
   const row = (label: string, pick: (l: ComparedLot) => string, hint?: string): CompareRow => ({ label, hint, values: lots.map(pick) });
   return [
     {
@@ -49,15 +50,11 @@ export function compareSections(lots: ComparedLot[], locale = 'en-US'): CompareS
     {
       title: 'Nutrients (dry-matter basis)',
       rows: [
-        row('Dry matter', (l) => pct(l.nutrients.dryMatterPct), 'as-fed weight that is not water'),
-        row('Crude protein (CP)', (l) => pct(l.nutrients.crudeProteinPct)),
-        row('ADF', (l) => pct(l.nutrients.adfPct)),
-        row('NDF', (l) => pct(l.nutrients.ndfPct)),
+        ...COMPARED_LAB_FIELDS.map((key) => {
+          const f = analysisField(key);
+          return row(f.short, (l) => pct(l.nutrients[key], f.precision), key === 'dryMatterPct' ? 'as-fed weight that is not water' : undefined);
+        }),
         row('NSC (sugar + starch)', (l) => pct(l.nutrients.nscPct)),
-        row('Fat', (l) => pct(l.nutrients.fatPct)),
-        row('Ash', (l) => pct(l.nutrients.ashPct)),
-        row('Calcium', (l) => (l.nutrients.calciumPct === null ? '—' : `${fixed(l.nutrients.calciumPct, 2)}%`)),
-        row('Phosphorus', (l) => (l.nutrients.phosphorusPct === null ? '—' : `${fixed(l.nutrients.phosphorusPct, 2)}%`)),
         row('RFV', (l) => fixed(l.nutrients.rfv, 0)),
         row('RFQ', (l) => (l.nutrients.rfq === null ? '—' : fixed(l.nutrients.rfq, 0))),
         row('TDN', (l) => pct(l.nutrients.tdnPct)),

@@ -3,6 +3,7 @@ import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID 
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
 import type { LotAnalysisView, LotDetail } from '@shared/contracts/lots';
 import { afgcGradeRule, type ForageEvaluation, nitrateNPpm, type Nutrients, usdaGradeRule, VISUAL_MOULD_LABELS } from '@shared/forage';
+import { STORED_FIELDS } from '@shared/forage/analysis-fields';
 import { lotCautions } from '@shared/safety/lot-cautions';
 import { inLocale } from '../format';
 import { FeedValueScale } from './figures/feed-value-scale';
@@ -12,19 +13,11 @@ import { GradeMark } from '../../../shared/ui/grade-mark';
 import { usdaScaleFor } from '@shared/forage/grade-scale';
 import { DE_METHOD_LABELS, FIGURE_MEANINGS, NSC_FLAG_TEXT, NSC_METHOD_LABELS, TDN_METHOD_LABELS } from './figure-notes';
 
-const NUTRIENT_ROWS: [keyof Nutrients, string][] = [
-  ['crudeProteinPct', 'Crude protein (CP)'],
-  ['adfPct', 'Acid detergent fibre (ADF)'],
-  ['ndfPct', 'Neutral detergent fibre (NDF)'],
-  ['fatPct', 'Crude fat (EE)'],
-  ['ashPct', 'Ash'],
-  ['escPct', 'Ethanol-soluble carbohydrate (ESC)'],
-  ['wscPct', 'Water-soluble carbohydrate (WSC)'],
-  ['starchPct', 'Starch'],
-  ['nscPct', 'Non-structural carbohydrate (NSC)'],
-  ['calciumPct', 'Calcium (Ca)'],
-  ['phosphorusPct', 'Phosphorus (P)'],
-];
+/** The lab's shares of the sample from the analysis-field table, with the computed NSC after starch. */
+const NUTRIENT_ROWS: { key: keyof Nutrients; label: string; precision: number }[] = STORED_FIELDS.filter((f) => f.basis === 'entered').flatMap((f) => {
+  const row = { key: f.key, label: f.label, precision: f.precision };
+  return f.key === 'starchPct' ? [row, { key: 'nscPct' as const, label: 'Non-structural carbohydrate (NSC)', precision: 1 }] : [row];
+});
 
 /** The lab analysis on dry-matter and as-fed bases, the computed indices, grades, findings and cautions. */
 @Component({
@@ -43,7 +36,7 @@ export class LotAnalysisPanel {
 
   protected readonly rows = computed(() => {
     const { dm, asFed } = this.evaluation();
-    return NUTRIENT_ROWS.filter(([key]) => dm[key] !== null).map(([key, label]) => ({ label, dm: dm[key], asFed: asFed[key] }));
+    return NUTRIENT_ROWS.filter(({ key }) => dm[key] !== null).map(({ key, label, precision }) => ({ label, precision, dm: dm[key], asFed: asFed[key] }));
   });
   protected readonly cautions = computed(() => {
     const lot = this.lot();

@@ -1,18 +1,18 @@
 import { CLAIM_NUTRIENTS, type ClaimNutrient } from '@shared/contracts/platform-settings';
 import type { OpenClaim } from '@shared/contracts/claims';
-import { READABLE_FIELD_LABELS } from '@shared/contracts/report-reading';
+import { analysisField, entryUnit } from '@shared/forage/analysis-fields';
 import type { NutrientBasis } from '@shared/forage/forage-contract';
 
 /** The four figures the forage engine needs to grade a retest; the others are optional. */
-export const REQUIRED_RETEST_FIELDS: readonly ClaimNutrient[] = ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct'];
+export const REQUIRED_RETEST_FIELDS: readonly ClaimNutrient[] = CLAIM_NUTRIENTS.filter((f) => analysisField(f).required);
 
 /** One input per nutrient an admin compares against its tolerance, labelled and in the units the review desk uses. */
 export const RETEST_FIELDS = CLAIM_NUTRIENTS.map((field) => ({
   field,
-  label: READABLE_FIELD_LABELS[field].label,
-  // Dry matter is always as fed; the others follow the basis the buyer picks.
-  unit: field === 'dryMatterPct' || field === 'ndfd48Pct' ? READABLE_FIELD_LABELS[field].unit : '%',
-  required: REQUIRED_RETEST_FIELDS.includes(field),
+  label: analysisField(field).label,
+  // Dry matter is always as fed and NDFD a share of NDF; the others follow the basis the buyer picks.
+  unit: entryUnit(analysisField(field)),
+  required: analysisField(field).required,
 }));
 
 /** What the buyer typed, as typed. */

@@ -14,6 +14,7 @@ import { readAnalysisCsv } from '@shared/contracts/analysis-csv';
 import { lotDateIssues } from '@shared/contracts/lot-dates';
 import type { EditableLot } from '@shared/contracts/selling';
 import { ForageEvaluationRequestSchema, type ForageEvaluation, NITRATE_TEST_PROMPT, nitrateTestAdvised } from '@shared/forage';
+import { ENTERED_FIELDS, type EnteredField } from '@shared/forage/analysis-fields';
 import { VISUAL_MOULD_LABELS, VISUAL_MOULD_SCORES, type VisualMouldScore } from '@shared/forage/mould-scores';
 import { apiErrorMessage } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
@@ -21,34 +22,22 @@ import { AnalysisPreview } from './analysis-preview';
 import { numberOrNull, StepSave } from './step-save';
 import type { AnalysisMethod } from '@shared/contracts/enums';
 
-/** Lab values, in form order: [control, label, required]. */
-export const VALUE_FIELDS = [
-  ['dryMatterPct', 'Dry matter (DM)', true],
-  ['crudeProteinPct', 'Crude protein (CP)', true],
-  ['adfPct', 'ADF', true],
-  ['ndfPct', 'NDF', true],
-  ['ndfd48Pct', 'NDFD 48 h (% of NDF)', false],
-  ['fatPct', 'Crude fat (EE)', false],
-  ['ashPct', 'Ash', false],
-  ['escPct', 'ESC (sugars)', false],
-  ['wscPct', 'WSC (sugars + fructans)', false],
-  ['starchPct', 'Starch', false],
-  ['calciumPct', 'Calcium', false],
-  ['phosphorusPct', 'Phosphorus', false],
-  ['moisturePct', 'Moisture (checks DM)', false],
-  ['reportedRfv', 'RFV printed on report', false],
-] as const;
+/** One input of the analysis step, from the analysis-field table. */
+interface ValueInput {
+  key: EnteredField;
+  label: string;
+  required: boolean;
+  /** Beside the number: "%" for shares (the label says of what), the lab's unit otherwise. */
+  suffix: string;
+}
+const inputOf = (f: (typeof ENTERED_FIELDS)[number]): ValueInput => ({ key: f.key, label: f.short, required: f.required, suffix: f.unit.startsWith('%') ? '%' : f.unit === 'index' ? '' : f.unit });
 
-/** Optional safety results, each in the unit labs print it in: [control, label, unit]. */
-export const SAFETY_FIELDS = [
-  ['nitrateNo3PctDm', 'Nitrate, % of DM (ppm nitrate-N × 0.000443)', '%'],
-  ['mouldCfuPerG', 'Mould count', 'CFU/g'],
-  ['aflatoxinPpb', 'Aflatoxin', 'ppb'],
-  ['donPpm', 'DON (vomitoxin)', 'ppm'],
-  ['fumonisinPpm', 'Fumonisin', 'ppm'],
-] as const;
-type ValueField = (typeof VALUE_FIELDS)[number][0] | (typeof SAFETY_FIELDS)[number][0];
-const NUMBER_FIELDS: readonly ValueField[] = [...VALUE_FIELDS.map(([f]) => f), ...SAFETY_FIELDS.map(([f]) => f)];
+/** Lab values, in the table's order. */
+export const VALUE_FIELDS: readonly ValueInput[] = ENTERED_FIELDS.filter((f) => f.group !== 'safety').map(inputOf);
+/** Optional safety results, each in the unit labs print it in. */
+export const SAFETY_FIELDS: readonly ValueInput[] = ENTERED_FIELDS.filter((f) => f.group === 'safety').map(inputOf);
+type ValueField = EnteredField;
+const NUMBER_FIELDS: readonly ValueField[] = ENTERED_FIELDS.map((f) => f.key);
 
 /** Step 4: the lab's report — who, when, how — its values with a live preview of the engine's figures, and the PDF. */
 @Component({
