@@ -14,6 +14,7 @@ import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
 import { simplePdf } from '../../tests/support/simple-pdf';
 import { DEMO_BUYERS, DEMO_FARMS, DEMO_LABS, DEMO_LOTS, DEMO_PASSWORDS, FORAGE_PROFILES, type DemoLotPlan } from './demo-scenario';
 import { balesToTons } from '@shared/units';
+import { plusCalendarDays } from '@shared/time/days';
 
 export interface SeedOptions {
   db: Db;
@@ -88,7 +89,7 @@ async function ensureUser(db: Db, u: { email: string; displayName: string; role:
 }
 
 const round1 = (x: number) => Math.round(x * 10) / 10;
-const isoDay = (base: string, addDays: number) => new Date(Date.parse(`${base}T00:00:00Z`) + addDays * 86_400_000).toISOString().slice(0, 10);
+const isoDay = plusCalendarDays;
 
 async function insertDemoLot(db: Db, storage: FileStorage, plan: DemoLotPlan, index: number, farmId: number, adminId: number): Promise<number> {
   const rand = mulberry32(1000 + index);

@@ -1,3 +1,4 @@
+import { plusCalendarDays } from './days';
 /**
  * A farm's own clock. Delivery days and pickup hours are the farm's wall-clock time in its IANA time zone
  * (recorded on the farm); they are stored as real instants and shown back in the farm's zone, to buyer and
@@ -89,7 +90,7 @@ export function farmDay(instant: Date, zone: string): string {
 
 /** The calendar day after `date` (YYYY-MM-DD). */
 export function nextDay(date: string, days = 1): string {
-  return new Date(Date.parse(`${date}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+  return plusCalendarDays(date, days);
 }
 
 /** "Thu 17 Sep 2026" in the farm's zone. */

@@ -3,12 +3,13 @@ import type { AdminOverview } from '@shared/contracts/admin';
 import type { Db } from '../../db/client';
 import { lots, orders, qualityClaims } from '../../db/schema';
 import { payoutsDue } from '../payouts/payouts-due';
+import { isoWeekStart, plusCalendarDays, plusDays } from '@shared/time/days';
 
 const WEEKS = 12;
 
 /** The admin's first page: paid sales and orders per week, and what waits on an admin. */
 export async function adminOverview(db: Db, now: Date): Promise<AdminOverview> {
-  const since = new Date(now.getTime() - WEEKS * 7 * 86_400_000);
+  const since = plusDays(now, -WEEKS * 7);
   const week = sql<string>`to_char(date_trunc('week', ${orders.paidAt} at time zone 'UTC'), 'YYYY-MM-DD')`;
   const rows = await db
     .select({ week, orders: sql<number>`count(*)`.mapWith(Number), salesCents: sql<number>`coalesce(sum(${orders.totalCents} - ${orders.refundedCents}), 0)`.mapWith(Number) })
@@ -20,9 +21,9 @@ export async function adminOverview(db: Db, now: Date): Promise<AdminOverview> {
   const byWeek = new Map(rows.map((r) => [r.week, r]));
   const weeks = [];
   // Monday-started weeks (ISO, as PostgreSQL's date_trunc), oldest first, empty weeks included.
-  const monday = new Date(Date.UTC(now.getUTCFullYear(), now.getUTCMonth(), now.getUTCDate() - ((now.getUTCDay() + 6) % 7)));
+  const monday = isoWeekStart(now);
   for (let i = WEEKS - 1; i >= 0; i--) {
-    const start = new Date(monday.getTime() - i * 7 * 86_400_000).toISOString().slice(0, 10);
+    const start = plusCalendarDays(monday, -7 * i);
     const r = byWeek.get(start);
     weeks.push({ weekStart: start, orders: r?.orders ?? 0, salesCents: r?.salesCents ?? 0 });
   }

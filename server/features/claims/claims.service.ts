@@ -17,9 +17,10 @@ import { SettingsService } from '../settings/settings.service';
 import { sniffPdf } from '../uploads/file-sniff';
 import { writeThenRecord } from '../uploads/write-then-record';
 import { claimDecidedMail, claimOpenedMail } from './claim-mail';
+import { isAfter } from 'date-fns';
+import { plusDays } from '@shared/time/days';
 
 type ClaimRow = typeof qualityClaims.$inferSelect;
-const DAY_MS = 86_400_000;
 
 /** Quality claims: a buyer reports a problem within the window with a retest; an admin judges and refunds. */
 export class ClaimsService {
@@ -38,7 +39,7 @@ export class ClaimsService {
       this.checkOrder(order.status, 'report_problem', 'buyer');
       // The window also ends at the order's own acceptance date, fixed at delivery: from then on the order is
       // due to the grower (and may be paid out), whatever the claim setting says now.
-      const pastWindow = !order.deliveredAt || now.getTime() > order.deliveredAt.getTime() + claimDays * DAY_MS;
+      const pastWindow = !order.deliveredAt || isAfter(now, plusDays(order.deliveredAt, claimDays));
       const pastAcceptance = order.acceptBy !== null && now.getTime() >= order.acceptBy.getTime();
       // A payout that includes the order locks it first (payouts-due), so a claim waiting on that lock sees its line here.
       const [paidOut] = await tx.select({ id: payoutLines.id }).from(payoutLines).where(eq(payoutLines.orderId, order.id));

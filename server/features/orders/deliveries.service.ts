@@ -17,6 +17,7 @@ import { farmDay, farmInstant, nextDay } from '@shared/time/farm-time';
 import { daysFrom, windowFor } from './delivery-window';
 import { loadOrderRecord, readableOrder, type OrderRecord } from './order-record';
 import { applyOrderEvent, lockOrder, type Tx } from './order-transition';
+import { plusDays } from '@shared/time/days';
 import type { OrdersService } from './orders.service';
 
 type Deps = Pick<ApiDeps, 'db' | 'clock' | 'storage'>;
@@ -89,7 +90,7 @@ export class DeliveriesService {
         await applyOrderEvent(tx, order, 'deliver', { actor: part === 'admin' ? 'admin' : 'grower', actorId: user.id }, now, {
           deliveredAt: now,
           weighedTons: input.weighedTons ?? null,
-          acceptBy: new Date(now.getTime() + acceptanceDays * 86_400_000),
+          acceptBy: plusDays(now, acceptanceDays),
         }, input.weighedTons ? `Scale ticket: ${input.weighedTons} t` : '');
       }),
     );

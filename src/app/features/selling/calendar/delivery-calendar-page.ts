@@ -6,17 +6,14 @@ import type { CalendarDay } from '@shared/contracts/orders';
 import { deliveryStatusLabel } from '@shared/lifecycle/delivery-lifecycle';
 import { farmTimeLabel } from '@shared/time/farm-time';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
+import { isoWeekStart, plusCalendarDays } from '@shared/time/days';
 import { OrdersApi } from '../../orders/orders-api';
 
 const WEEKDAYS = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'];
 
 /** Monday of the week holding `day` (ISO date, UTC). */
-function mondayOf(day: Date): string {
-  const d = new Date(Date.UTC(day.getUTCFullYear(), day.getUTCMonth(), day.getUTCDate()));
-  d.setUTCDate(d.getUTCDate() - ((d.getUTCDay() + 6) % 7));
-  return d.toISOString().slice(0, 10);
-}
-const shift = (iso: string, days: number) => new Date(Date.parse(`${iso}T00:00:00Z`) + days * 86_400_000).toISOString().slice(0, 10);
+const mondayOf = isoWeekStart;
+const shift = plusCalendarDays;
 
 /** The grower's week: loads booked per day against the loads the farm can haul, and each order's date. */
 @Component({
