@@ -27,4 +27,10 @@ describe('loopbackRenderRequest', () => {
     expect(req.headers.get('cookie')).toBe('baleproof.sid=abc; XSRF-TOKEN=x.y');
     expect(req.headers.get('accept-language')).toBe('en-CA');
   });
+
+  it('names the visitor by the address the server saw, never by a client-sent X-Forwarded-For', () => {
+    const req = loopbackRenderRequest({ ...incoming('/lots/1', { host: 'a', 'x-forwarded-for': '198.51.100.9', 'user-agent': 'Firefox' }), socket: { remoteAddress: '203.0.113.7' } } as unknown as IncomingMessage, 4000);
+    expect(req.headers.get('x-forwarded-for')).toBe('203.0.113.7');
+    expect(req.headers.get('user-agent')).toBe('Firefox');
+  });
 });

@@ -1,6 +1,6 @@
 import type { IncomingMessage } from 'node:http';
 
-/** Headers that name where a request came in (or claims to); the renderer takes none of them. */
+/** Headers that name where a request came in (or claims to); the renderer takes none of them from the client. */
 const ORIGIN_HEADERS = new Set(['host', 'x-forwarded-host', 'x-forwarded-proto', 'x-forwarded-port', 'x-forwarded-for', 'forwarded']);
 
 /**
@@ -11,13 +11,17 @@ const ORIGIN_HEADERS = new Set(['host', 'x-forwarded-host', 'x-forwarded-proto',
  * so `//elsewhere/x` stays a path on loopback. Pages do not use their own origin (links in e-mails use
  * PUBLIC_URL), so nothing else changes.
  */
-export function loopbackRenderRequest(req: IncomingMessage & { originalUrl?: string }, port: number): Request {
+export function loopbackRenderRequest(req: IncomingMessage & { originalUrl?: string; ip?: string }, port: number): Request {
   const headers = new Headers();
   for (const [name, value] of Object.entries(req.headers)) {
     if (value === undefined || name.startsWith(':') || ORIGIN_HEADERS.has(name)) continue;
     for (const one of ([] as string[]).concat(value)) headers.append(name, one);
   }
   headers.set('host', `127.0.0.1:${port}`);
+  // The visitor's address as this server saw it (never a client-sent X-Forwarded-For): the renderer passes it
+  // on to its own API calls, which trust loopback, so a lot view rendered here is counted for the visitor.
+  const address = req.ip ?? req.socket?.remoteAddress;
+  if (address) headers.set('x-forwarded-for', address);
   const path = req.originalUrl ?? req.url ?? '/';
   const method = req.method ?? 'GET';
   return new Request(`http://127.0.0.1:${port}${path.startsWith('/') ? path : `/${path}`}`, { method: method === 'HEAD' ? 'HEAD' : 'GET', headers });

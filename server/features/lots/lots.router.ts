@@ -3,11 +3,12 @@ import { LotSearchSchema } from '@shared/contracts/lots';
 import type { ApiDeps } from '../../api-deps';
 import { idParams } from '../../middleware/id-params';
 import { viewLotPage } from './lot-page';
+import { visitorKey } from './lot-views';
 import { LotsService } from './lots.service';
 
 const CATALOGUE_READ_CACHE_CONTROL = 'public, max-age=10, stale-while-revalidate=60';
 
-export function lotsRouter({ db, clock, catalogueCache }: Pick<ApiDeps, 'db' | 'clock' | 'catalogueCache'>): Router {
+export function lotsRouter({ db, clock, catalogueCache, env }: Pick<ApiDeps, 'db' | 'clock' | 'catalogueCache' | 'env'>): Router {
   const service = new LotsService(db);
   const router = Router();
 
@@ -21,7 +22,7 @@ export function lotsRouter({ db, clock, catalogueCache }: Pick<ApiDeps, 'db' | '
 
   router.get('/:id', async (req, res) => {
     const { id } = idParams(req.params, { id: 'That lot' });
-    const lot = await viewLotPage(db, id, req.user, clock);
+    const lot = await viewLotPage(db, id, req.user, clock, visitorKey(req, env.SESSION_SECRET));
     // A visitor's copy may be kept briefly; a signed-in grower or admin may see more, so theirs is not.
     res.set('Cache-Control', req.user ? 'private, no-cache' : CATALOGUE_READ_CACHE_CONTROL).vary('Cookie');
     res.json(lot);

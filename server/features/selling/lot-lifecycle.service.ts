@@ -76,7 +76,7 @@ export class LotLifecycleService {
     const { lot } = await ownedLot(this.db, lotId, user);
     const cutting = Math.min(8, lot.cutting + 1);
     const {
-      id: _id, status: _s, draftStep: _d, reviewNote: _rn, reviewedBy: _rb, reviewedAt: _ra, publishedAt: _p, viewCount: _v, createdAt: _c, updatedAt: _u, copiedFromId: _cf,
+      id: _id, status: _s, draftStep: _d, reviewNote: _rn, reviewedBy: _rb, reviewedAt: _ra, publishedAt: _p, viewCount: _v, createdAt: _c, updatedAt: _u, copiedFromId: _cf, revision: _rev,
       ...rest
     } = lot;
     const [row] = await this.db

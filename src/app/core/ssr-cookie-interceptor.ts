@@ -14,8 +14,14 @@ const PUBLIC_READS = /^\/api\/lots(\/|\?|$)/;
  */
 export const forwardCookiesOnServer: HttpInterceptorFn = (req, next) => {
   const incoming = inject(REQUEST, { optional: true });
-  const cookie = incoming?.headers.get('cookie');
-  if (!cookie || !req.url.startsWith('/api/')) return next(req);
-  if (req.method === 'GET' && PUBLIC_READS.test(req.url)) return next(req);
-  return next(req.clone({ setHeaders: { cookie } }));
+  if (!incoming || !req.url.startsWith('/api/')) return next(req);
+  // Who is asking (address as the server saw it, and browser), so the API counts a visitor's lot view as theirs.
+  const visitor: Record<string, string> = {};
+  for (const name of ['user-agent', 'x-forwarded-for']) {
+    const value = incoming.headers.get(name);
+    if (value) visitor[name] = value;
+  }
+  const cookie = incoming.headers.get('cookie');
+  if (!cookie || (req.method === 'GET' && PUBLIC_READS.test(req.url))) return next(req.clone({ setHeaders: visitor }));
+  return next(req.clone({ setHeaders: { ...visitor, cookie } }));
 };
