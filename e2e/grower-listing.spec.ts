@@ -84,7 +84,7 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await expect(page.getByLabel('NDF', { exact: true })).toHaveValue('40');
   // RFV of ADF 30 / NDF 40 (Rohweder et al. 1978): (88.9 − 0.779·30)·(120/40)/1.29 ≈ 152.
   await expect(page.locator('[data-figure="rfv"]')).toHaveText('152');
-  await page.getByLabel('Lab report PDF').setInputFiles({ name: 'hp-2231.pdf', mimeType: 'application/pdf', buffer: makePdf('Report HP-2231') });
+  await page.getByLabel('Lab report PDF').setInputFiles({ name: 'hp-2231.pdf', mimeType: 'application/pdf', buffer: await makePdf('Report HP-2231') });
   await saveAndContinue(page);
 
   // Step 5: two photos, each with its own progress bar. Uploads are slowed down so progress can be seen.

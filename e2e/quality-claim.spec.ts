@@ -29,7 +29,7 @@ test('a buyer files a claim with a retest; the admin judges it beside the listin
   await claims.getByLabel(/^Crude protein \(CP\)/).fill(retest.cp.toFixed(1));
   await claims.getByLabel(/^Acid detergent fibre \(ADF\)/).fill(retest.adf.toFixed(1));
   await claims.getByLabel(/^Neutral detergent fibre \(NDF\)/).fill(retest.ndf.toFixed(1));
-  await claims.getByLabel('Retest report (PDF, optional)').setInputFiles({ name: 'retest.pdf', mimeType: 'application/pdf', buffer: simplePdf(['Invented Ridge Forage Lab - retest', `Crude protein ${retest.cp.toFixed(1)} % DM`]) });
+  await claims.getByLabel('Retest report (PDF, optional)').setInputFiles({ name: 'retest.pdf', mimeType: 'application/pdf', buffer: await simplePdf(['Invented Ridge Forage Lab - retest', `Crude protein ${retest.cp.toFixed(1)} % DM`]) });
   await claims.getByRole('button', { name: 'Send the claim' }).click();
   const filed = claims.getByRole('article', { name: /^Claim \d+$/ });
   await expect(filed.getByTestId('claim-status')).toHaveText('waiting for an admin');

@@ -244,7 +244,7 @@ describe('authorization matrix: every API route × every kind of caller', () => 
   async function send(agent: ReturnType<TestApi['agent']>, method: string, path: string, rule: Rule) {
     if (rule.pdf) {
       const token = await agent.token();
-      return agent.raw.post(path).set('X-XSRF-TOKEN', token).attach(rule.pdf, makePdf(), 'retest.pdf');
+      return agent.raw.post(path).set('X-XSRF-TOKEN', token).attach(rule.pdf, await makePdf(), 'retest.pdf');
     }
     const body = rule.body?.(ids) ?? {};
     switch (method) {

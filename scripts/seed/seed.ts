@@ -11,7 +11,7 @@ import { readLabReportPdf } from '../../server/features/uploads/report-reading';
 import type { Db } from '../../server/db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../../server/db/schema';
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
-import { simplePdf } from '../../tests/support/simple-pdf';
+import { textPdf } from '../../server/adapters/pdf/text-pdf';
 import { DEMO_BUYERS, DEMO_FARMS, DEMO_LABS, DEMO_LOTS, DEMO_PASSWORDS, FORAGE_PROFILES, type DemoLotPlan } from './demo-scenario';
 import { balesToTons } from '@shared/units';
 import { plusCalendarDays } from '@shared/time/days';
@@ -199,7 +199,7 @@ async function insertDemoLot(db: Db, storage: FileStorage, plan: DemoLotPlan, in
     const labName = DEMO_LABS[index % DEMO_LABS.length]!;
     const reportNumber = `D-${26000 + index * 17}`;
     const reportDate = isoDay(sampledOn, 6);
-    const pdf = demoReportPdf({ labName, reportNumber, reportDate, sampledOn, field: plan.field, columns });
+    const pdf = await demoReportPdf({ labName, reportNumber, reportDate, sampledOn, field: plan.field, columns });
     const reportKey = `reports/${lotId}/demo-${reportNumber}.pdf`;
     await storage.put(reportKey, pdf);
     const [report] = await db
@@ -256,10 +256,10 @@ async function addDemoPhotos(db: Db, storage: FileStorage, lotId: number, plan: 
 }
 
 /** An invented lab report in the layout a forage lab might print: clearly marked as demo data. */
-export function demoReportPdf(r: { labName: string; reportNumber: string; reportDate: string; sampledOn: string; field: string; columns: ReturnType<typeof analysisColumns>['columns'] }): Buffer {
+export function demoReportPdf(r: { labName: string; reportNumber: string; reportDate: string; sampledOn: string; field: string; columns: ReturnType<typeof analysisColumns>['columns'] }): Promise<Buffer> {
   const c = r.columns;
   const v = (x: number | null) => (x === null ? 'n/a' : x.toFixed(1));
-  return simplePdf([
+  return textPdf([
     `${r.labName} - FORAGE ANALYSIS REPORT`,
     'DEMO DATA - invented for the Baleproof demonstration, not a real analysis',
     `Report ${r.reportNumber}    Reported ${r.reportDate}    Sampled ${r.sampledOn}`,

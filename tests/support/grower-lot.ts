@@ -59,7 +59,7 @@ export async function completeLot(agent: Agent, overrides: { lot?: object; sampl
     if (res.status !== 200) throw new Error(`${step} failed: ${JSON.stringify(res.body)}`);
   }
   const token = await agent.token();
-  const report = await agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', makePdf(), 'report.pdf');
+  const report = await agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', await makePdf(), 'report.pdf');
   if (report.status !== 201) throw new Error(`report failed: ${JSON.stringify(report.body)}`);
   const photo = await agent.raw.post(`/uploads/lots/${id}/photos`).set('X-XSRF-TOKEN', token).attach('photos', await makeJpeg(900, 600), 'bales.jpg');
   if (photo.status !== 201) throw new Error(`photo failed: ${JSON.stringify(photo.body)}`);

@@ -22,7 +22,7 @@ export async function makeJpeg(width = 1200, height = 800, seed = 0): Promise<Bu
 }
 
 /** A small valid one-page PDF with one line of text. */
-export function makePdf(text = 'Lab report'): Buffer {
+export function makePdf(text = 'Lab report'): Promise<Buffer> {
   return simplePdf([text], { fontSize: 18 });
 }
 

@@ -49,7 +49,7 @@ describe('quality claims', () => {
     const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
     expect(o!.status).toBe('claimed');
     const token = await buyer.agent.token();
-    const pdf = await buyer.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', token).attach('report', simplePdf(['Retest', 'Crude protein 16.5 %']), 'retest.pdf');
+    const pdf = await buyer.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', token).attach('report', await simplePdf(['Retest', 'Crude protein 16.5 %']), 'retest.pdf');
     expect(pdf.status).toBe(201);
     expect(pdf.body.retest.reportUrl).toBe(`/api/claims/${res.body.id}/retest`);
     expect((await other.agent.get(`/claims/${res.body.id}`)).status).toBe(404);
@@ -58,10 +58,10 @@ describe('quality claims', () => {
     const [otherUser] = await t.deps.db.select({ id: users.id }).from(users).where(eq(users.email, other.email));
     const filesBefore = await t.deps.db.select({ id: storedFiles.id }).from(storedFiles).where(eq(storedFiles.ownerId, otherUser!.id));
     const otherToken = await other.agent.token();
-    const oversized = Buffer.concat([simplePdf(['Retest']), Buffer.alloc(PDF_MAX_BYTES + 1024, 32)]);
+    const oversized = Buffer.concat([await simplePdf(['Retest']), Buffer.alloc(PDF_MAX_BYTES + 1024, 32)]);
     const stranger = await other.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', otherToken).attach('report', oversized, 'retest.pdf');
     expect(stranger.status).toBe(404);
-    const strangerSmall = await other.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', otherToken).attach('report', simplePdf(['Not mine']), 'retest.pdf');
+    const strangerSmall = await other.agent.raw.post(`/claims/${res.body.id}/retest`).set('X-XSRF-TOKEN', otherToken).attach('report', await simplePdf(['Not mine']), 'retest.pdf');
     expect(strangerSmall.status).toBe(404);
     expect(await t.deps.db.select({ id: storedFiles.id }).from(storedFiles).where(eq(storedFiles.ownerId, otherUser!.id))).toEqual(filesBefore);
     expect((await buyer.agent.get(`/claims/${res.body.id}`)).body.retest.reportUrl).toBe(`/api/claims/${res.body.id}/retest`);

@@ -86,7 +86,7 @@ describe('review API', () => {
     const fresh = (await admin.agent.get(`/review/lots/${id}`)).body.revision as number;
     expect(fresh).toBeGreaterThan(seen);
     const token = await grower.agent.token();
-    const swap = await grower.agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', simplePdf(['Another report']), 'other.pdf');
+    const swap = await grower.agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', await simplePdf(['Another report']), 'other.pdf');
     expect(swap.status).toBe(201);
     expect((await admin.agent.post(`/review/lots/${id}/approve`, { revision: fresh })).status).toBe(409);
     expect((await admin.agent.post(`/review/lots/${id}/approve`, {})).status).toBe(400);
@@ -145,7 +145,7 @@ describe('review API', () => {
   it('shows each entered value beside the value read from the PDF and flags the mismatch', async () => {
     const id = await completeLot(grower.agent);
     // The grower typed ADF 29 (ANALYSIS_STEP); this report prints 31.0. Everything else agrees.
-    const report = simplePdf(['Invented Prairie Lab - results on a dry matter basis', 'Dry matter  89.0 %', 'Crude protein (CP)  21.0 %', 'ADF  31.0 %', 'NDF  38.0 %', 'Starch  2.0 %']);
+    const report = await simplePdf(['Invented Prairie Lab - results on a dry matter basis', 'Dry matter  89.0 %', 'Crude protein (CP)  21.0 %', 'ADF  31.0 %', 'NDF  38.0 %', 'Starch  2.0 %']);
     const token = await grower.agent.token();
     const up = await grower.agent.raw.post(`/uploads/lots/${id}/report`).set('X-XSRF-TOKEN', token).attach('report', report, 'report.pdf');
     expect(up.status).toBe(201);

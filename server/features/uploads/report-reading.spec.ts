@@ -1,28 +1,29 @@
 import { PDFDocument, StandardFonts } from 'pdf-lib';
 import { compareWithReading } from '@shared/lab-report/compare-reading';
 import { analysisColumns } from '../lots/analysis-record';
-import { demoReportPdf } from '../../../scripts/seed/seed';
+import { labReportPdf } from '../../../tests/support/lab-report-pdf';
 import { makeJpeg } from '../../../tests/support/upload-fixtures';
 import { readingSummary, readLabReportPdf } from './report-reading';
 
-// Real PDFs through pdfjs-dist: the demo lab report, layouts drawn with pdf-lib, a scan with no text.
+// Real PDFs through pdfjs-dist: an invented two-column lab report, layouts drawn with pdf-lib, a scan with no text.
 describe('readLabReportPdf', () => {
   // An alfalfa analysis in the range of the domain brief's worked legume (§3): DM 88, CP 20, ADF 30, NDF 40.
-  const { columns } = analysisColumns({ forageClass: 'legume', basis: 'dm', dryMatterPct: 88, crudeProteinPct: 20, adfPct: 30, ndfPct: 40, ndfd48Pct: 45, fatPct: 2.5, ashPct: 10, wscPct: 9, starchPct: 2, calciumPct: 1.4, phosphorusPct: 0.28 });
-  const demo = () => demoReportPdf({ labName: 'Invented Forage Lab', reportNumber: 'D-26017', reportDate: '2026-07-12', sampledOn: '2026-07-06', field: 'North Pivot', columns });
+  // Nitrate, mould and toxins below the caution levels the lot page reads them against (OMAFRA, FDA).
+  const { columns } = analysisColumns({ forageClass: 'legume', basis: 'dm', dryMatterPct: 88, crudeProteinPct: 20, adfPct: 30, ndfPct: 40, ndfd48Pct: 45, fatPct: 2.5, ashPct: 10, wscPct: 9, starchPct: 2, calciumPct: 1.4, phosphorusPct: 0.28, nitrateNo3PctDm: 0.35, mouldCfuPerG: 12_000, aflatoxinPpb: 4, donPpm: 0.5, fumonisinPpm: 0.2 });
+  const demo = () => labReportPdf(columns);
 
-  it('recognises every value of a demo report', async () => {
-    const reading = await readLabReportPdf(demo());
+  it('recognises every value of a two-column lab report, nitrate, mould count and mycotoxins included', async () => {
+    const reading = await readLabReportPdf(await demo());
     expect(reading.status).toBe('read');
     const rows = compareWithReading(columns, reading);
     const by = Object.fromEntries(rows.map((r) => [r.field, r]));
-    for (const field of ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct', 'ndfd48Pct', 'fatPct', 'ashPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct'] as const) {
+    for (const field of ['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct', 'ndfd48Pct', 'fatPct', 'ashPct', 'wscPct', 'starchPct', 'calciumPct', 'phosphorusPct', 'nitrateNo3PctDm', 'mouldCfuPerG', 'aflatoxinPpb', 'donPpm', 'fumonisinPpm'] as const) {
       expect([field, by[field]?.status]).toEqual([field, 'match']);
     }
   }, 30_000);
 
-  it('flags a value typed differently from the demo report', async () => {
-    const reading = await readLabReportPdf(demo());
+  it('flags a value typed differently from the report', async () => {
+    const reading = await readLabReportPdf(await demo());
     const rows = compareWithReading({ ...columns, adfPct: 27 }, reading);
     expect(rows.find((r) => r.field === 'adfPct')).toMatchObject({ status: 'mismatch', entered: 27, read: 30 });
     expect(rows.filter((r) => r.status === 'mismatch')).toHaveLength(1);

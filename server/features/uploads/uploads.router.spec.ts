@@ -59,12 +59,12 @@ describe('uploads API', () => {
 
   it('reads a report without keeping it and returns the values to confirm; a scan says it has no text', async () => {
     const token = await grower.agent.token();
-    const report = simplePdf(['Results on a dry matter basis', 'Dry matter  88.5 %', 'Crude protein (CP)  19.4 %', 'ADF  30.2 %', 'NDF  39.9 %']);
+    const report = await simplePdf(['Results on a dry matter basis', 'Dry matter  88.5 %', 'Crude protein (CP)  19.4 %', 'ADF  30.2 %', 'NDF  39.9 %']);
     const res = await grower.agent.raw.post('/uploads/report-reading').set('X-XSRF-TOKEN', token).attach('report', report, 'lab.pdf');
     expect(res.status).toBe(200);
     expect(res.body.values).toEqual({ basis: 'dm', dryMatterPct: 88.5, crudeProteinPct: 19.4, adfPct: 30.2, ndfPct: 39.9 });
     expect(res.body.summary).toMatch(/Read 4 values/);
-    const blank = simplePdf([]);
+    const blank = await simplePdf([]);
     const scan = await grower.agent.raw.post('/uploads/report-reading').set('X-XSRF-TOKEN', token).attach('report', blank, 'scan.pdf');
     expect(scan.body).toMatchObject({ reading: { status: 'no_text' }, values: null, summary: expect.stringMatching(/no text layer/) });
     const notPdf = await grower.agent.raw.post('/uploads/report-reading').set('X-XSRF-TOKEN', token).attach('report', Buffer.from('hello'), 'x.pdf');
@@ -101,7 +101,7 @@ describe('uploads API', () => {
     expect(fake.body.error.code).toBe('not_a_pdf');
     const jpegAsPdf = await upload('report', [{ data: await makeJpeg(200, 100), name: 'scan.pdf' }]);
     expect(jpegAsPdf.body.error.code).toBe('not_a_pdf');
-    const full = makePdf();
+    const full = await makePdf();
     const truncated = await upload('report', [{ data: full.subarray(0, full.length - 40), name: 'report.pdf' }]);
     expect(truncated.status).toBe(400);
   });
@@ -223,7 +223,7 @@ describe('uploads API', () => {
     // A fresh draft has no analysis yet, so linking the report fails inside the transaction.
     const draft = await agent.post('/selling/lots', LOT_STEP);
     await agent.put(`/selling/lots/${draft.body.id}/quantity`, QUANTITY_STEP);
-    const res = await upload('report', [{ data: makePdf(), name: 'early.pdf' }], agent, draft.body.id);
+    const res = await upload('report', [{ data: await makePdf(), name: 'early.pdf' }], agent, draft.body.id);
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('analysis_required');
     expect(keys).toHaveLength(1);
