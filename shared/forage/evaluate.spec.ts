@@ -45,11 +45,11 @@ describe('evaluateForage', () => {
   describe('worked alfalfa (DM basis)', () => {
     const result = evaluateForage(alfalfa);
 
-    // Source: domain brief §2 (formulas per Undersander, UW–Madison Ext. S1; NFTA S4).
-    it('computes DDM 65.5, DMI 3.0 and RFV 152.4', () => {
-      expect(round1(result.ddmPct)).toBe(65.5);
-      expect(result.dmiPctBw).toBe(3);
-      expect(round1(result.rfv)).toBe(152.4);
+    // USDA AMS 2003 alfalfa guidelines (S7) print ADF 29–32 and NDF 36–40 beside RFV 150–170 for Good hay:
+    // ADF 30 / NDF 40 must land in that printed RFV band (an outside check, not the equation restated).
+    it('puts ADF 30 / NDF 40 inside the RFV band USDA prints for the same Good row (150–170)', () => {
+      expect(result.rfv).toBeGreaterThanOrEqual(150);
+      expect(result.rfv).toBeLessThanOrEqual(170);
     });
 
     // Source: domain brief §3 worked legume (Undersander & Moore 2002; UGA glossary S3).
@@ -109,12 +109,13 @@ describe('evaluateForage', () => {
   describe('worked grass', () => {
     const result = evaluateForage(grass);
 
-    // Source: domain brief §3 worked grass — RFQ 131.9 while RFV is only 95.6.
-    it('computes RFQ 131.9 from summative grass TDN 59.9 while RFV is only 95.6', () => {
+    // RFQ 131.9 and TDN 59.9 by hand from the UGA-printed summative grass equations (S3; domain brief §3 arithmetic).
+    // UW–Madison (Undersander, S1): RFV under-ranks grass, which RFQ corrects — so RFQ must sit well above RFV here.
+    it('computes RFQ 131.9 from summative grass TDN 59.9, well above the RFV that under-ranks grass (S1)', () => {
       expect(round1(result.rfq!)).toBe(131.9);
       expect(round1(result.tdnPct)).toBe(59.9);
       expect(result.tdnMethod).toBe('summative-nrc2001-grass');
-      expect(round1(result.rfv)).toBe(95.6);
+      expect(result.rfq! - result.rfv).toBeGreaterThan(20);
     });
 
     // Source: domain brief §7 — grass DE 2.1 Mcal/kg DM.
