@@ -6,11 +6,25 @@ const grass = { crudeProteinPct: 12, adfPct: 35, ndfPct: 60, fatPct: 2.5, ashPct
 const alfalfa = { crudeProteinPct: 20, adfPct: 30, ndfPct: 40, fatPct: 2.5, ashPct: 10 };
 
 describe('horse-de', () => {
-  // Source: NRC 2007 equation after Pagan 1998 — coefficients from memory; inputs confirmed by
-  // Kentucky Equine Research (S15). Worked values: domain brief §7.
+  // Source: NRC 2007 equation after Pagan 1998 — coefficients from memory, reproduced against published figures in the
+  // J Anim Sci checks below; inputs confirmed by Kentucky Equine Research (S15). Worked values: domain brief §7.
   it('finds NSC by difference of 17.5% and DE 2.1 Mcal/kg DM for the worked grass hay', () => {
     expect(nscByDifference(grass)).toBeCloseTo(17.5, 10);
     expect(round1(horseDeNrc2007(grass))).toBe(2.1);
+  });
+
+  // Independent check of the remembered coefficients: J Anim Sci 2021;99(11):skab284, Table 2 (mature horses fed alfalfa,
+  // rhizoma peanut and bermudagrass hays) prints daily intakes of DM, organic matter, CP, NDF, ADF, ether extract and DE.
+  // Composition = intake ÷ DM intake (ash = 100 − organic matter); the published DE ÷ DM intake is the hay's DE:
+  // alfalfa 29.91 / 11.8 = 2.53, rhizoma peanut 29.37 / 11.8 = 2.49, bermudagrass 20.78 / 12.0 = 1.73 Mcal/kg DM.
+  it.each([
+    ['alfalfa', { dm: 11.8, om: 10.4, cp: 2.54, ndf: 3.86, adf: 3.0, ee: 0.28, de: 29.91 }],
+    ['rhizoma peanut', { dm: 11.8, om: 10.6, cp: 1.86, ndf: 4.68, adf: 3.47, ee: 0.28, de: 29.37 }],
+    ['bermudagrass', { dm: 12.0, om: 10.1, cp: 1.48, ndf: 7.18, adf: 4.07, ee: 0.2, de: 20.78 }],
+  ])('reproduces the DE published for the %s hay of a 2021 J Anim Sci feeding trial within 2 %%', (_hay, i) => {
+    const pct = (kg: number) => (kg / i.dm) * 100;
+    const de = horseDeNrc2007({ crudeProteinPct: pct(i.cp), adfPct: pct(i.adf), ndfPct: pct(i.ndf), fatPct: pct(i.ee), ashPct: 100 - pct(i.om) });
+    expect(Math.abs(de - i.de / i.dm) / (i.de / i.dm)).toBeLessThan(0.02);
   });
 
   it('finds DE 2.5 Mcal/kg DM for the worked alfalfa hay', () => {
