@@ -60,7 +60,7 @@ app.use(cachedPages((req) => angularApp.handle(loopbackRenderRequest(req, deps.e
 /**
  * Worker processes: WEB_CONCURRENCY, else every core in production and one process otherwise. Sessions,
  * jobs and cache invalidation go through PostgreSQL, so workers share nothing in memory that matters
- * (the sign-in rate limit is counted per worker).
+ * (sign-in limits are counted in PostgreSQL too).
  */
 function workerCount(): number {
   const asked = Number(process.env['WEB_CONCURRENCY']);

@@ -4,7 +4,9 @@ import { Passport } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { cookieNames } from '@shared/contracts/cookies';
 import { SignInSchema, SignUpSchema, type SessionUser } from '@shared/contracts/auth';
+import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
+import { PgRateLimitStore } from '../../middleware/pg-rate-limit-store';
 import type { Csrf } from '../../middleware/csrf';
 import { HttpError } from '../../middleware/http-error';
 import { AuthService } from './auth.service';
@@ -37,25 +39,35 @@ export function createAuthenticator(db: Db) {
   return passport;
 }
 
-export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean }): Router {
+export function authRouter(
+  db: Db,
+  options: { signInLimit: number; signInIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean; clock: Clock; rateLimitScope: string },
+): Router {
   const auth = new AuthService(db);
   const router = Router();
 
   // Two limits on failed sign-ins (successes are not counted): per account, keyed on the e-mail as the
   // sign-in form normalises it (so " Name@X" is the same account), and per client address, so one
-  // password tried across many accounts is limited too.
-  const failedSignIns = (limit: number, keyGenerator: (req: Request) => string) =>
+  // password tried across many accounts is limited too. Counts live in PostgreSQL, shared by every server
+  // process. Each attempt is counted first (one atomic upsert, so parallel attempts cannot slip through);
+  // a successful sign-in takes its count back before it answers.
+  const failedSignIns = (limit: number, store: PgRateLimitStore, keyGenerator: (req: Request) => string) =>
     rateLimit({
+      store,
       windowMs: 15 * 60 * 1000,
       limit,
       standardHeaders: 'draft-8',
       legacyHeaders: false,
-      skipSuccessfulRequests: true,
       keyGenerator,
       handler: (_req, _res, next) => next(new HttpError(429, 'too_many_attempts', 'Too many sign-in attempts. Wait 15 minutes and try again.')),
     });
-  const perAccount = failedSignIns(options.signInLimit, (req) => `account:${normalisedEmail(req.body?.email)}`);
-  const perAddress = failedSignIns(options.signInIpLimit, (req) => `ip:${ipKeyGenerator(req.ip ?? '')}`);
+  const accountKey = (req: Request) => `account:${normalisedEmail(req.body?.email)}`;
+  const addressKey = (req: Request) => `ip:${ipKeyGenerator(req.ip ?? '')}`;
+  const accountCounts = new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-in:`);
+  const addressCounts = new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-in-ip:`);
+  const perAccount = failedSignIns(options.signInLimit, accountCounts, accountKey);
+  const perAddress = failedSignIns(options.signInIpLimit, addressCounts, addressKey);
+  const forgiveAttempt = (req: Request) => Promise.all([accountCounts.decrement(accountKey(req)), addressCounts.decrement(addressKey(req))]);
 
   // The app's first call: it also hands out the CSRF cookie for API clients that start here.
   router.get('/me', options.csrf.issueCookie, (req, res) => {
@@ -74,6 +86,7 @@ export function authRouter(db: Db, options: { signInLimit: number; signInIpLimit
     const input = SignInSchema.parse(req.body);
     const user = await auth.checkCredentials(input);
     if (!user) throw new HttpError(401, 'invalid_credentials', 'E-mail or password is wrong.');
+    await forgiveAttempt(req);
     await logIn(req, user);
     options.csrf.renew(req, res);
     res.json({ user });

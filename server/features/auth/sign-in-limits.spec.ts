@@ -41,4 +41,33 @@ describe('sign-in limits', () => {
       expect(statuses).toEqual([401, 401, 401, 401, 401, 429]);
     });
   });
+
+  describe('across server processes', () => {
+    // Production runs one process per core on one database: two test APIs with one scope stand for two of them.
+    const scope = `shared_${process.pid}_${Date.now()}:`;
+    let a: TestApi;
+    let b: TestApi;
+    beforeAll(async () => {
+      a = await startTestApi({ SIGN_IN_RATE_LIMIT: '4', RATE_LIMIT_SCOPE: scope });
+      b = await startTestApi({ SIGN_IN_RATE_LIMIT: '4', RATE_LIMIT_SCOPE: scope });
+    });
+    afterAll(async () => {
+      await a.close();
+      await b.close();
+    });
+
+    it('shares one count: failures spread over two processes reach the limit together', async () => {
+      const email = uniqueEmail();
+      const statuses = [];
+      for (const api of [a, b, a, b, a, b]) statuses.push((await api.agent().post('/auth/sign-in', { email, password: 'wrong-password' })).status);
+      expect(statuses).toEqual([401, 401, 401, 401, 429, 429]);
+    });
+
+    it('counts parallel failures exactly (one atomic upsert each)', async () => {
+      const email = uniqueEmail();
+      const statuses = await Promise.all(Array.from({ length: 10 }, (_, i) => (i % 2 ? a : b).agent().post('/auth/sign-in', { email, password: 'wrong-password' }).then((r) => r.status)));
+      expect(statuses.filter((s) => s === 401)).toHaveLength(4);
+      expect(statuses.filter((s) => s === 429)).toHaveLength(6);
+    });
+  });
 });
