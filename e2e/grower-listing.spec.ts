@@ -49,6 +49,10 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await page.getByLabel('Harvest ended').fill(daysAgo(59));
   await page.getByLabel('Moisture at baling').fill('15');
   await expect(page.getByRole('region', { name: 'Cautions' })).toContainText('Buyers of alfalfa ask about blister beetles');
+  // Growing conditions: a drought-stressed crop can carry nitrate (UC ANR; NC State Extension), so the grower is asked to test it.
+  await expect(page.getByRole('region', { name: 'Cautions' })).not.toContainText('Test this hay for nitrate');
+  await page.getByRole('checkbox', { name: 'The crop was drought-stressed' }).check();
+  await expect(page.getByRole('region', { name: 'Cautions' })).toContainText('You report this hay was drought-stressed, which can raise its nitrate.');
   await saveAndContinue(page);
 
   // The draft now has an address of its own and resumes at the quantity step.
@@ -84,6 +88,8 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await expect(page.getByLabel('NDF', { exact: true })).toHaveValue('40');
   // RFV of ADF 30 / NDF 40 (Rohweder et al. 1978): (88.9 − 0.779·30)·(120/40)/1.29 ≈ 152.
   await expect(page.locator('[data-figure="rfv"]')).toHaveText('152');
+  // No nitrate result is entered for this drought-stressed hay: the form prompts for one beside the field.
+  await expect(page.getByRole('note').filter({ hasText: 'can carry nitrate' })).toContainText('ask their veterinarian');
   await page.getByLabel('Lab report PDF').setInputFiles({ name: 'hp-2231.pdf', mimeType: 'application/pdf', buffer: await makePdf('Report HP-2231') });
   await saveAndContinue(page);
 
@@ -176,6 +182,10 @@ test('a grower lists a tested lot, an admin approves it, and buyers find it in t
   await expect(page.getByText(/\$301 per ton of dry matter/)).toBeVisible();
   await expect(page.getByText(/\$3\.50 per loaded mile/)).toBeVisible();
   await expect(page.getByText(/500 of 500 bales ≈ 15\.0 tons/)).toBeVisible();
+  // Buyers are told what the grower reported and to ask for a nitrate result and their veterinarian.
+  const nitrate = page.getByRole('listitem').filter({ hasText: 'No nitrate result for a hay that can carry it' });
+  await expect(nitrate).toContainText('The grower reports this hay was drought-stressed');
+  await expect(nitrate).toContainText('veterinarian');
   const photo = page.locator('figure img').first();
   await expect(photo).toHaveAttribute('src', new RegExp(`/media/photos/${newCover}/.+\\.webp$`));
   const image = await page.request.get((await photo.getAttribute('src'))!);
