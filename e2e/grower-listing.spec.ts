@@ -21,7 +21,7 @@ const daysAgo = (days: number) => new Date(Date.now() - days * 86_400_000).toISO
 const saveAndContinue = (page: Page) => page.getByRole('button', { name: 'Save and continue' }).click();
 
 test('a grower lists a tested lot, an admin approves it, and buyers find it in the catalogue', async ({ page }) => {
-  test.setTimeout(240_000);
+  test.setTimeout(360_000); // four roles, throttled photo uploads and two e-mails: over 4 min on a loaded 2-core machine
   const field = `Creek Bend ${Date.now().toString(36)}`;
   const title = `Alfalfa, 2nd cutting — ${field}`;
   const photos = [
