@@ -12,6 +12,7 @@ import type { Db } from '../../server/db/client';
 import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../../server/db/schema';
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
 import { textPdf } from '../../server/adapters/pdf/text-pdf';
+import { labReportTableLines } from '../../server/adapters/pdf/lab-report-table';
 import { DEMO_BUYERS, DEMO_FARMS, DEMO_LABS, DEMO_LOTS, DEMO_PASSWORDS, FORAGE_PROFILES, type DemoLotPlan } from './demo-scenario';
 import { balesToTons } from '@shared/units';
 import { plusCalendarDays } from '@shared/time/days';
@@ -257,27 +258,13 @@ async function addDemoPhotos(db: Db, storage: FileStorage, lotId: number, plan: 
 
 /** An invented lab report in the layout a forage lab might print: clearly marked as demo data. */
 export function demoReportPdf(r: { labName: string; reportNumber: string; reportDate: string; sampledOn: string; field: string; columns: ReturnType<typeof analysisColumns>['columns'] }): Promise<Buffer> {
-  const c = r.columns;
-  const v = (x: number | null) => (x === null ? 'n/a' : x.toFixed(1));
   return textPdf([
     `${r.labName} - FORAGE ANALYSIS REPORT`,
     'DEMO DATA - invented for the Baleproof demonstration, not a real analysis',
     `Report ${r.reportNumber}    Reported ${r.reportDate}    Sampled ${r.sampledOn}`,
     `Sample: hay, composite of cores, field "${r.field}"`,
     '',
-    'Component                      As fed     Dry matter',
-    `Dry matter, %                 ${v(c.dryMatterPct)}      100.0`,
-    `Crude protein, %              ${v((c.crudeProteinPct * c.dryMatterPct) / 100)}       ${v(c.crudeProteinPct)}`,
-    `ADF, %                        ${v((c.adfPct * c.dryMatterPct) / 100)}       ${v(c.adfPct)}`,
-    `NDF, %                        ${v((c.ndfPct * c.dryMatterPct) / 100)}       ${v(c.ndfPct)}`,
-    `NDFD 48 h, % of NDF                      ${v(c.ndfd48Pct)}`,
-    `Crude fat, %                                ${v(c.fatPct)}`,
-    `Ash, %                                      ${v(c.ashPct)}`,
-    `ESC, %                                      ${v(c.escPct)}`,
-    `WSC, %                                      ${v(c.wscPct)}`,
-    `Starch, %                                   ${v(c.starchPct)}`,
-    `Calcium, %                                  ${v(c.calciumPct)}`,
-    `Phosphorus, %                               ${v(c.phosphorusPct)}`,
+    ...labReportTableLines(r.columns),
   ]);
 }
 
