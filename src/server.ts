@@ -21,6 +21,7 @@ import { registerOrderSweeps, scheduleOrderSweeps } from '../server/features/ord
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 import { loopbackRenderRequest } from '../server/middleware/render-request';
+import { pageErrorHandler } from '../server/middleware/page-error';
 
 const browserDistFolder = join(import.meta.dirname, '../browser');
 
@@ -56,6 +57,8 @@ app.use(createSessionMiddleware(deps), createAuthenticator(deps.db).session(), c
 // The renderer sees the page on the app's own loopback port, so its API calls (with the visitor's cookie)
 // can never be sent where a Host or X-Forwarded-Host header points.
 app.use(cachedPages((req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)), writeResponseToNodeResponse, deps.catalogueCache));
+// A friendly page (503 when the database is unreachable) instead of Express's default error output.
+app.use(pageErrorHandler(deps.logger));
 
 /**
  * Worker processes: WEB_CONCURRENCY, else every core in production and one process otherwise. Sessions,

@@ -55,7 +55,7 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
 /** Socket errors and PostgreSQL's "cannot connect now" / shutdown / connection-exception codes, on the error or its causes. */
 const UNREACHABLE_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'ENOTFOUND', 'EHOSTUNREACH', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
 
-function databaseUnreachable(err: unknown): boolean {
+export function databaseUnreachable(err: unknown): boolean {
   for (let e = err as { code?: unknown; cause?: unknown; message?: unknown; errors?: unknown[] } | undefined, depth = 0; e && depth < 5; e = e.cause as typeof e, depth++) {
     if (typeof e.code === 'string' && UNREACHABLE_CODES.has(e.code)) return true;
     if (Array.isArray(e.errors) && e.errors.some((inner) => databaseUnreachable(inner))) return true;

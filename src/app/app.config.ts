@@ -7,6 +7,7 @@ import { routes } from './app.routes';
 import { provideReaderLocale } from './core/locale';
 import { Session } from './core/session';
 import { forwardCookiesOnServer } from './core/ssr-cookie-interceptor';
+import { pageUnavailableOnServer } from './core/ssr-unavailable-interceptor';
 import { XsrfTokenFromCookie } from './core/xsrf-token';
 
 export const appConfig: ApplicationConfig = {
@@ -14,7 +15,7 @@ export const appConfig: ApplicationConfig = {
     provideBrowserGlobalErrorListeners(),
     provideReaderLocale,
     provideRouter(routes, withComponentInputBinding(), withInMemoryScrolling({ scrollPositionRestoration: 'enabled' })),
-    provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer])),
+    provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer, pageUnavailableOnServer])),
     // After provideHttpClient, so it replaces Angular's one-name cookie reader.
     { provide: HttpXsrfTokenExtractor, useClass: XsrfTokenFromCookie },
     provideClientHydration(withEventReplay()),
