@@ -1,4 +1,5 @@
 import { computeRfq, relativeForageQuality, rfqDmiLegume } from './rfq';
+import { relativeFeedValue } from './rfv';
 
 const legume = { forageClass: 'legume' as const, crudeProteinPct: 20, adfPct: 30, ndfPct: 40, fatPct: 2.5, ashPct: 10, ndfd48Pct: 45 };
 const grass = { forageClass: 'grass' as const, crudeProteinPct: 12, adfPct: 35, ndfPct: 60, fatPct: 2.5, ashPct: 8, ndfd48Pct: 60 };
@@ -35,9 +36,14 @@ describe('rfq', () => {
     expect(rfqDmiLegume(40, 45)).toBe(3);
   });
 
-  // Source: Undersander, UW–Madison Ext., Relative Forage Quality (S1): RFQ = DMI × TDN / 1.23.
-  it('divides intake × TDN by 1.23', () => {
-    expect(relativeForageQuality(3, 61.5)).toBeCloseTo(150, 10);
+  // Undersander, UW–Madison Ext., Relative Forage Quality (S1): the 1.23 divisor gives RFQ about the same mean and range
+  // as RFV. For the worked alfalfa at the reference 45 % NDFD (where legume intake is RFV's 120/NDF), RFQ must land within
+  // 5 % of the RFV of the same hay, and it must scale with intake × TDN (doubling intake doubles RFQ).
+  it('puts a mid-quality alfalfa at about its RFV, as the 1.23 divisor intends (S1)', () => {
+    const rfq = computeRfq(legume)!.rfq;
+    const rfv = relativeFeedValue(legume.adfPct, legume.ndfPct);
+    expect(Math.abs(rfq - rfv) / rfv).toBeLessThan(0.05);
+    expect(relativeForageQuality(6, 61.5)).toBeCloseTo(2 * relativeForageQuality(3, 61.5), 10);
   });
 
   // Decision: UGA Georgia Forages glossary (S3) groups legume/grass mixtures with legumes.
