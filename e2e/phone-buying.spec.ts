@@ -24,7 +24,7 @@ test('on a 390 px phone the buy panel, a filled hay list, the held orders and th
   await page.goto('/cart');
   await page.getByLabel('Delivered by each grower').check();
   await page.getByLabel('Delivery ZIP').fill('66502');
-  await expect(page.getByRole('article', { name: lots[0]!.title }).getByText(/Order total/)).toBeVisible();
+  await expect(page.getByRole('region', { name: `From ${lots[0]!.farmName}` }).getByText(/Order total/)).toBeVisible();
   await expectFits(page, 'the hay list');
   await page.getByLabel('Pickup at each farm').check();
 

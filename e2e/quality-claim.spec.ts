@@ -12,7 +12,7 @@ test.describe.configure({ timeout: 300_000 });
 test('a buyer files a claim with a retest; the admin judges it beside the listing and refunds part; all three roles see the refund and the grower’s payout shrinks by it', async ({ browser }) => {
   const { grower, buyer, admin } = await threeRoles(browser);
   const order = await deliveredPickupOrder(buyer, grower);
-  const lot = await callApi<LotDetail>(buyer, 'GET', `/api/lots/${order.lot.id}`);
+  const lot = await callApi<LotDetail>(buyer, 'GET', `/api/lots/${order.lines[0]!.lot.id}`);
   const listed = lot.analysis!;
 
   // The buyer reports the problem on the order page with the other lab's retest, on a dry-matter basis:

@@ -1,5 +1,5 @@
 import { eq, sql } from 'drizzle-orm';
-import { messageThreads, orders, photos, qualityClaims, savedSearches, users } from '../server/db/schema';
+import { messageThreads, orderLines, orders, photos, qualityClaims, savedSearches, users } from '../server/db/schema';
 import { apiRoutes, type ApiRoute } from './support/api-routes';
 import { createLot } from './support/fixtures';
 import { ANALYSIS_STEP, completeLot, LOT_STEP, makePdf, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from './support/grower-lot';
@@ -117,6 +117,7 @@ const POLICY: Record<string, Rule> = {
   'POST /saved-searches': BUYER,
   'DELETE /saved-searches/:id': { allow: ['buyer'], on: 'savedSearch', reach: ['buyer'] },
   'GET /orders/quote': ANYONE,
+  'POST /orders/quote-list': ANYONE,
   'GET /orders/lots/:lotId/open-days': { allow: 'anyone', on: 'listedLot' },
   'POST /orders': BUYER,
   'POST /orders/from-list': BUYER,
@@ -194,8 +195,9 @@ describe('authorization matrix: every API route × every kind of caller', () => 
     const now = t.clock.now();
     const [order] = await t.deps.db
       .insert(orders)
-      .values({ buyerId, lotId: listedLot.id, farmId: grower.farm.id, status: 'delivered', bales: 20, tons: 1.2, priceCentsPerTon: 30000, goodsCents: 36000, platformFeeBps: 300, platformFeeCents: 1080, totalCents: 37080, method: 'pickup', paidAt: now, deliveredAt: now, acceptBy: new Date(now.getTime() + 3 * 86_400_000) })
+      .values({ buyerId, farmId: grower.farm.id, status: 'delivered', platformFeeBps: 300, platformFeeCents: 1080, totalCents: 37080, method: 'pickup', paidAt: now, deliveredAt: now, acceptBy: new Date(now.getTime() + 3 * 86_400_000) })
       .returning();
+    await t.deps.db.insert(orderLines).values({ orderId: order!.id, lotId: listedLot.id, bales: 20, tons: 1.2, priceCentsPerTon: 30000, goodsCents: 36000 });
     const [claim] = await t.deps.db.insert(qualityClaims).values({ orderId: order!.id, openedBy: buyerId, reason: 'Bales were mouldy inside.' }).returning();
     const asked = await buyer.agent.post(`/messages/lots/${listedLot.id}`, { body: 'Is the second cutting still available?' });
     if (asked.status !== 201) throw new Error(`message failed: ${JSON.stringify(asked.body)}`);

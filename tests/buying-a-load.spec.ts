@@ -1,9 +1,9 @@
 import { eq } from 'drizzle-orm';
-import type Stripe from 'stripe';
 import { TEST_CARD_DECLINED, TEST_CARD_OK } from '../docker-local-fakes/stripe/stripe-fake';
-import { farms, lots, orderEvents, orderRefunds, orders, users } from '../server/db/schema';
+import { farms, lots, orderEvents, orderLines, orderRefunds, orders, users } from '../server/db/schema';
 import { hashPassword } from '../server/features/auth/password';
 import { OrdersService } from '../server/features/orders/orders.service';
+import { deliverOrderEvents, payOnPage } from './support/checkout-payments';
 import { createGrower, createLot } from './support/fixtures';
 import { holdSettings } from './support/settings-lock';
 import { startStripeFake, startTestApi, uniqueEmail, type StripeFakeServer, type TestApi } from './support/test-api';
@@ -54,20 +54,8 @@ describe('buying a load', () => {
   }
   const balesLeft = async (lotId: number) => (await t.deps.db.select().from(lots).where(eq(lots.id, lotId)))[0]!.balesAvailable;
   const orderRow = async (id: number) => (await t.deps.db.select().from(orders).where(eq(orders.id, id)))[0]!;
-  const pay = (url: string, card: string) =>
-    fetch(url, { method: 'POST', redirect: 'manual', headers: { 'content-type': 'application/x-www-form-urlencoded' }, body: `card=${card}` });
-  /** Delivers the fake's events for an order to the API's webhook, signed as Stripe signs them. */
-  async function deliverEvents(orderId: number, api: TestApi = t) {
-    const events = stripe.fake.events().filter((e) => (e['data'] as { object: { metadata?: Record<string, string> } }).object.metadata?.['orderId'] === String(orderId));
-    const answers = [];
-    for (const event of events) answers.push(await postEvent(event as unknown as Stripe.Event, api));
-    return answers;
-  }
-  async function postEvent(event: Stripe.Event, api: TestApi = t) {
-    const payload = JSON.stringify(event);
-    const signature = api.deps.stripe.webhooks.generateTestHeaderString({ payload, secret: api.deps.env.STRIPE_WEBHOOK_SECRET });
-    return api.agent().raw.post('/payments/webhook').set('content-type', 'application/json').set('stripe-signature', signature).send(payload);
-  }
+  const pay = payOnPage;
+  const deliverEvents = (orderId: number, api: TestApi = t) => deliverOrderEvents(stripe, orderId, api);
 
   it('places an order: 201 with the total and a payment page, and the bales are held', async () => {
     const { lot } = await lotWith(400);
@@ -154,7 +142,7 @@ describe('buying a load', () => {
     // A loser either lost the hold itself or, arriving after the winner's commit, read a lot with none left: both say so.
     for (const r of results.filter((x) => x.status === 409)) expect(r.body.error.message).toMatch(/no longer available|no bales left/);
     expect(await balesLeft(lot.id)).toBe(0);
-    const held = await t.deps.db.select().from(orders).where(eq(orders.lotId, lot.id));
+    const held = await t.deps.db.select().from(orderLines).where(eq(orderLines.lotId, lot.id));
     expect(held).toHaveLength(1);
     expect((await t.deps.db.select().from(lots).where(eq(lots.id, lot.id)))[0]!.status).toBe('sold_out');
   });
@@ -236,7 +224,7 @@ describe('buying a load', () => {
     const handed = await growerAgent.post(`/orders/${body.id}/hand-over`, { weighedTons: 23.5 });
     expect(handed.status).toBe(200);
     // Half a ton short at $300/t: $150 of hay and $4.50 of fee come back.
-    expect(handed.body).toMatchObject({ status: 'delivered', weighedTons: 23.5, refundedCents: 15_000 + 450 });
+    expect(handed.body).toMatchObject({ status: 'delivered', lines: [expect.objectContaining({ weighedTons: 23.5 })], refundedCents: 15_000 + 450 });
     expect((await growerAgent.post(`/orders/${body.id}/hand-over`, { weighedTons: 23.5 })).status).toBe(409);
     const service = new OrdersService(t.deps);
     const order = await orderRow(body.id);

@@ -1,5 +1,5 @@
 import { eq, inArray } from 'drizzle-orm';
-import { lots, orders } from '../server/db/schema';
+import { lots, orderLines, orders } from '../server/db/schema';
 import { createGrower, createLot } from './support/fixtures';
 import { signedInUser } from './support/grower-lot';
 import { holdSettings } from './support/settings-lock';
@@ -8,8 +8,8 @@ import { startStripeFake, startTestApi, type StripeFakeServer, type TestApi } fr
 jest.setTimeout(90_000);
 
 /**
- * Checking out a hay list of several lots against PostgreSQL and the Stripe fake: each lot its own order,
- * hold and payment page; every hold at once or none.
+ * Checking out a hay list of several lots against PostgreSQL and the Stripe fake: one order per grower,
+ * each with its own hold and payment page and a line per lot; every hold at once or none.
  */
 describe('checking out a hay list', () => {
   let stripe: StripeFakeServer;
@@ -37,26 +37,31 @@ describe('checking out a hay list', () => {
     return ids.map((id) => rows.find((r) => r.id === id)!.n);
   };
 
-  it('places one order per lot, each with its own hold, payment page and total', async () => {
+  it('places one order per grower, each with its own hold, payment page and total; the lines keep each lot', async () => {
     const north = await createGrower(t.deps.db);
     const south = await createGrower(t.deps.db);
     const a = await lotOf(north.farm.id, 'North timothy', 400);
-    const b = await lotOf(north.farm.id, 'North alfalfa', 400);
     const c = await lotOf(south.farm.id, 'South orchardgrass', 400);
+    const b = await lotOf(north.farm.id, 'North alfalfa', 400);
     const buyer = await signedInUser(t, 'buyer');
 
-    const res = await buyer.agent.post('/orders/from-list', { method: 'pickup', lines: [{ lotId: a.id, bales: 100 }, { lotId: b.id, bales: 50 }, { lotId: c.id, bales: 200 }] });
+    const res = await buyer.agent.post('/orders/from-list', { method: 'pickup', lines: [{ lotId: a.id, bales: 100 }, { lotId: c.id, bales: 200 }, { lotId: b.id, bales: 50 }] });
     expect(res.status).toBe(201);
-    const placed = res.body.orders as { id: number; lotId: number; totalCents: number; paymentUrl: string; farmName: string }[];
-    expect(placed.map((o) => o.lotId)).toEqual([a.id, b.id, c.id]);
-    // 60 lb bales at $300/t plus the 3 % fee: 100 bales = 3 t = $900 + $27; 50 = $450 + $13.50; 200 = $1,800 + $54.
-    expect(placed.map((o) => o.totalCents)).toEqual([92_700, 46_350, 185_400]);
-    expect(new Set(placed.map((o) => o.paymentUrl)).size).toBe(3);
-    expect(placed.map((o) => o.farmName)).toEqual([north.farm.name, north.farm.name, south.farm.name]);
+    const placed = res.body.orders as { id: number; totalCents: number; paymentUrl: string; farmName: string; lines: { lotId: number; bales: number }[] }[];
+    // Two growers, two orders (growers in the order they first appear on the list), two payment pages.
+    expect(placed.map((o) => o.farmName)).toEqual([north.farm.name, south.farm.name]);
+    expect(placed.map((o) => o.lines.map((l) => [l.lotId, l.bales]))).toEqual([[[a.id, 100], [b.id, 50]], [[c.id, 200]]]);
+    // 60 lb bales at $300/t plus the 3 % fee on each order's hay: north 3 t + 1.5 t = $1,350 + $40.50; south 6 t = $1,800 + $54.
+    expect(placed.map((o) => o.totalCents)).toEqual([139_050, 185_400]);
+    expect(new Set(placed.map((o) => o.paymentUrl)).size).toBe(2);
     expect(await balesLeft([a.id, b.id, c.id])).toEqual([300, 350, 200]);
     const rows = await t.deps.db.select().from(orders).where(inArray(orders.id, placed.map((o) => o.id)));
     expect(rows.every((r) => r.status === 'awaiting_payment' && r.reservedUntil !== null && r.checkoutSessionId !== null)).toBe(true);
-    expect(new Set(rows.map((r) => r.checkoutSessionId)).size).toBe(3);
+    expect(new Set(rows.map((r) => r.checkoutSessionId)).size).toBe(2);
+    // The order page shows both lots of the north order.
+    const north1 = await buyer.agent.get(`/orders/${placed[0]!.id}`);
+    expect(north1.body.lines.map((l: { lot: { title: string }; bales: number; goodsCents: number }) => [l.lot.title, l.bales, l.goodsCents])).toEqual([['North timothy', 100, 90_000], ['North alfalfa', 50, 45_000]]);
+    expect(north1.body).toMatchObject({ bales: 150, goodsCents: 135_000, platformFeeCents: 4_050 });
   });
 
   it('answers 409 naming the lot that ran short and holds nothing else', async () => {
@@ -77,7 +82,7 @@ describe('checking out a hay list', () => {
     expect(soldOut.body.error.message).toMatch(/Sold-out bermuda/);
 
     expect(await balesLeft([full.id, short.id, gone.id])).toEqual([400, 30, 0]);
-    expect(await t.deps.db.select().from(orders).where(inArray(orders.lotId, [full.id, short.id, gone.id]))).toHaveLength(0);
+    expect(await t.deps.db.select().from(orderLines).where(inArray(orderLines.lotId, [full.id, short.id, gone.id]))).toHaveLength(0);
   });
 
   it('holds every lot or none when two lists race for the last bales of one lot', async () => {

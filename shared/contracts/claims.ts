@@ -5,6 +5,8 @@ import type { ClaimStatus } from '../lifecycle/claim-lifecycle';
 export const OpenClaimSchema = z
   .object({
     orderId: z.number({ error: 'Choose the order.' }).int().positive(),
+    /** The order line (lot) the problem is about; may be left out for an order of one lot or a problem with the whole load. */
+    lineId: z.number({ error: 'Choose the lot the problem is about.' }).int().positive().optional(),
     reason: z.string({ error: 'Say what is wrong.' }).trim().min(10, 'Say what is wrong with the hay (at least 10 characters).').max(4000),
     retest: z
       .object({
@@ -37,7 +39,11 @@ export type ResolveClaim = z.infer<typeof ResolveClaimSchema>;
 export interface ClaimView {
   id: number;
   orderId: number;
+  /** The order line the claim names; null when it is about the whole order of several lots. */
+  lineId: number | null;
+  /** The named line's lot (or the order's first lot when none is named). */
   lotId: number;
+  /** The named line's lot, or every lot of the order ("A + B"). */
   lotTitle: string;
   farmName: string;
   buyerName: string;

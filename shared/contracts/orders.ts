@@ -41,13 +41,8 @@ export type CreateOrder = z.infer<typeof CreateOrderSchema>;
 /** Most lots one hay list may check out at once. */
 export const HAY_LIST_MAX_LOTS = 20;
 
-/**
- * Checking out the buyer's hay list: several lots, each its own order with its own hold and payment page.
- * All bales are held at once or none are. Dates are agreed per order afterwards.
- */
-export const ListCheckoutSchema = z
-  .object({
-    lines: z
+/** The lots of a hay list with the bales wanted of each (each lot once). */
+const ListLinesSchema = z
       .array(
         z
           .object({
@@ -58,7 +53,16 @@ export const ListCheckoutSchema = z
       )
       .min(1, 'The hay list is empty.')
       .max(HAY_LIST_MAX_LOTS, `Check out at most ${HAY_LIST_MAX_LOTS} lots at once.`)
-      .refine((lines) => new Set(lines.map((l) => l.lotId)).size === lines.length, 'Each lot once on the list.'),
+      .refine((lines) => new Set(lines.map((l) => l.lotId)).size === lines.length, 'Each lot once on the list.');
+
+/**
+ * Checking out the buyer's hay list: one order per grower (one payment, one truck trip for that grower's
+ * lots), each with its own hold and payment page. All bales are held at once or none are. Dates are agreed
+ * per order afterwards.
+ */
+export const ListCheckoutSchema = z
+  .object({
+    lines: ListLinesSchema,
     method: z.enum(DELIVERY_METHODS, { message: 'Choose delivery or pickup at the farm.' }),
     deliveryZip: zip.optional(),
     deliveryAddress: z.string().trim().min(5, 'Give the delivery address.').max(300, 'Use at most 300 characters.').optional(),
@@ -68,8 +72,57 @@ export const ListCheckoutSchema = z
   .refine((o) => o.method === 'pickup' || o.deliveryAddress !== undefined, { message: 'Give the delivery address.', path: ['deliveryAddress'] });
 export type ListCheckout = z.infer<typeof ListCheckoutSchema>;
 
+/** Figures of a hay list before checkout: per grower (one order each), with each lot's line. */
+export const ListQuoteSchema = z
+  .object({
+    lines: ListLinesSchema,
+    method: z.enum(DELIVERY_METHODS, { message: 'Choose delivery or pickup at the farm.' }),
+    deliveryZip: zip.optional(),
+  })
+  .strict()
+  .refine((o) => o.method === 'pickup' || o.deliveryZip !== undefined, { message: 'Give the delivery ZIP code so the freight can be worked out.', path: ['deliveryZip'] });
+export type ListQuoteRequest = z.infer<typeof ListQuoteSchema>;
+
+/** One lot of a grower's order in a quote. */
+export interface LineQuote {
+  lotId: number;
+  lotTitle: string;
+  bales: number;
+  tons: number;
+  goodsCents: number;
+  minBales: number;
+  balesAvailable: number;
+  /** Bales of this lot in one full load of the grower's truck. */
+  balesPerLoad: number;
+  /** Why this line cannot be ordered as asked, or null. */
+  problem: string | null;
+}
+
+/** One grower's order in a quote: its lines and the order's figures (freight on the combined loads). */
+export interface GrowerQuote {
+  farmId: number;
+  farmName: string;
+  lines: LineQuote[];
+  bales: number;
+  tons: number;
+  goodsCents: number;
+  loads: number;
+  freightCents: number;
+  platformFeeCents: number;
+  platformFeeBps: number;
+  totalCents: number;
+  distanceMi: number | null;
+  /** Why this order cannot be placed as asked (the first line problem, or one of the whole order), or null. */
+  problem: string | null;
+}
+
+export interface ListQuote {
+  growers: GrowerQuote[];
+}
+
 export interface ListCheckoutResult {
-  orders: (CreatedOrder & { lotId: number; lotTitle: string; farmName: string })[];
+  /** One order per grower, in the order the growers first appear on the list. */
+  orders: (CreatedOrder & { farmName: string; lines: { lotId: number; lotTitle: string; bales: number }[] })[];
 }
 
 export interface OrderQuote {
@@ -119,17 +172,29 @@ export interface DeliveryView {
   completedAt: string | null;
 }
 
-export interface OrderView {
+/** One lot of an order: its bales, terms as sold, hay cost and (ton-priced lines) the weighed tons. */
+export interface OrderLineView {
   id: number;
-  status: OrderStatus;
   lot: { id: number; title: string; forageType: string; cutting: number; baleType: string; avgBaleWeightLb: number };
-  /** `timeZone`: the farm's IANA zone; windows are shown in it. */
-  farm: { id: number; name: string; city: string; state: string; pickupFromHour: number; pickupToHour: number; timeZone: string };
-  buyer: { displayName: string; email: string };
   bales: number;
   tons: number;
   pricingUnit: 'ton' | 'bale';
   priceCentsPerTon: number;
+  goodsCents: number;
+  weighedTons: number | null;
+}
+
+export interface OrderView {
+  id: number;
+  status: OrderStatus;
+  /** The lots bought, one line each (all from this order's grower). */
+  lines: OrderLineView[];
+  /** `timeZone`: the farm's IANA zone; windows are shown in it. */
+  farm: { id: number; name: string; city: string; state: string; pickupFromHour: number; pickupToHour: number; timeZone: string };
+  buyer: { displayName: string; email: string };
+  /** Bales, tons and hay cost of all lines together. */
+  bales: number;
+  tons: number;
   goodsCents: number;
   freightCents: number;
   platformFeeCents: number;
@@ -144,7 +209,6 @@ export interface OrderView {
   distanceMi: number | null;
   paymentUrl: string | null;
   reservedUntil: string | null;
-  weighedTons: number | null;
   paidAt: string | null;
   deliveredAt: string | null;
   acceptBy: string | null;
@@ -158,7 +222,7 @@ export interface OrderView {
   viewerRole: 'buyer' | 'grower' | 'admin';
 }
 
-export type OrderSummary = Pick<OrderView, 'id' | 'status' | 'bales' | 'tons' | 'totalCents' | 'method' | 'createdAt' | 'lot' | 'farm'> & {
+export type OrderSummary = Pick<OrderView, 'id' | 'status' | 'bales' | 'tons' | 'totalCents' | 'method' | 'createdAt' | 'lines' | 'farm'> & {
   buyerName: string;
   windowStart: string | null;
   deliveryStatus: DeliveryStatus | null;
@@ -168,12 +232,34 @@ export const CancelReasonSchema = z.object({ reason: z.string().trim().max(500).
 
 export const ProposeWindowSchema = WindowSchema.strict();
 
+const weighed = z.coerce.number().positive('The weighed tons must be above zero.').max(1000, 'That is more than any order.');
+
+/**
+ * Handing the hay over, with the scale ticket: `weighedTons` for an order with one ton-priced line, or
+ * `lines` (the net tons of each ton-priced line; a JSON text when sent with the ticket photo as a form).
+ */
 export const HandOverSchema = z
   .object({
     /** Net hay weight from the scale ticket, short tons. */
-    weighedTons: z.coerce.number().positive('The weighed tons must be above zero.').max(1000, 'That is more than any order.').optional(),
+    weighedTons: weighed.optional(),
+    lines: z
+      .preprocess(
+        (v) => {
+          if (typeof v !== 'string') return v;
+          try {
+            return JSON.parse(v);
+          } catch {
+            return v;
+          }
+        },
+        z.array(z.object({ lineId: z.coerce.number().int().positive('Name the order line.'), weighedTons: weighed }).strict()).min(1).max(50),
+      )
+      .refine((l) => new Set(l.map((x) => x.lineId)).size === l.length, 'Each line once.')
+      .optional(),
   })
-  .strict();
+  .strict()
+  .refine((h) => h.weighedTons === undefined || h.lines === undefined, { message: 'Give the weighed tons of the order or of each line, not both.', path: ['lines'] });
+export type HandOver = z.infer<typeof HandOverSchema>;
 
 export const DeliverySettingsSchema = z
   .object({
@@ -198,3 +284,8 @@ export interface CalendarDay {
 }
 
 export type { DeliveryStatus, OrderEvent, OrderStatus };
+
+/** An order's lots by name, in line order: "Lot A", or "Lot A + Lot B". */
+export function lotTitlesOf(lines: readonly { lot: { title: string } }[]): string {
+  return lines.map((l) => l.lot.title).join(' + ');
+}

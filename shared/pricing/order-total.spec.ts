@@ -1,4 +1,4 @@
-import { balesPerLoad, feeRateLabel, goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
+import { balesPerLoad, growerOrderTotal, feeRateLabel, goodsCents, loadsFor, minimumBales, orderProblem, orderTotal, scaleTicketRefundCents, type LotTerms } from './order-total';
 
 // $12 for a 60 lb bale = $400.0/t (domain brief §11).
 /** 3 % in basis points: the platform's default fee (our own policy; an admin setting). */
@@ -101,24 +101,66 @@ describe('order problems', () => {
   });
 });
 
+describe('one grower, several lots: one order', () => {
+  // Domain brief §11: freight = rate per loaded mile × miles × whole loads; one truck carries the grower's lots together.
+  const bigSquares: LotTerms = { ...smallSquares, priceCentsPerTon: 30_000, avgBaleWeightLb: 1000 };
+
+  it('hauls 12 t + 10 t in one 24 t load: $3.50 × 300 mi once, not twice as two orders would (domain brief §11)', () => {
+    const both = growerOrderTotal([{ terms: smallSquares, bales: 400 }, { terms: bigSquares, bales: 20 }], { method: 'delivery', distanceMi: 300 }, FEE_3_PCT);
+    expect(both.tons).toBe(22);
+    expect(both.loads).toBe(1);
+    expect(both.freightCents).toBe(105_000);
+    const apart = [orderTotal(smallSquares, { bales: 400, method: 'delivery', distanceMi: 300 }, FEE_3_PCT), orderTotal(bigSquares, { bales: 20, method: 'delivery', distanceMi: 300 }, FEE_3_PCT)];
+    expect(apart.reduce((s, t) => s + t.freightCents, 0)).toBe(210_000);
+  });
+
+  it('adds the hay per line (12 t × $400 + 10 t × $300 = $7,800) and charges 3 % on that total ($234)', () => {
+    const both = growerOrderTotal([{ terms: smallSquares, bales: 400 }, { terms: bigSquares, bales: 20 }], { method: 'pickup', distanceMi: null }, FEE_3_PCT);
+    expect(both.lines.map((l) => l.goodsCents)).toEqual([480_000, 300_000]);
+    expect(both.goodsCents).toBe(780_000);
+    expect(both.platformFeeCents).toBe(23_400);
+    expect(both.freightCents).toBe(0);
+    expect(both.totalCents).toBe(780_000 + 23_400);
+  });
+
+  it('a one-line order costs what the single-lot total says (the $9,600 load of §11)', () => {
+    const one = growerOrderTotal([{ terms: smallSquares, bales: 800 }], { method: 'delivery', distanceMi: 300 }, FEE_3_PCT);
+    expect(one.goodsCents).toBe(960_000);
+    expect(one.freightCents).toBe(105_000);
+  });
+
+  it('refuses an empty order', () => {
+    expect(() => growerOrderTotal([], { method: 'pickup', distanceMi: null }, FEE_3_PCT)).toThrow(RangeError);
+  });
+});
+
 describe('scale ticket settlement', () => {
   // 24 t paid at $400/t = $9,600 + $288 fee; the ticket shows 23.5 t.
-  const paid = { pricingUnit: 'ton' as const, priceCentsPerTon: 40_000, paidGoodsCents: 960_000, paidFeeCents: 28_800, feeBps: FEE_3_PCT };
+  const line = { pricingUnit: 'ton' as const, priceCentsPerTon: 40_000, paidGoodsCents: 960_000 };
+  const paid = { paidFeeCents: 28_800, feeBps: FEE_3_PCT };
 
   it('refunds the hay and fee on the missing half ton: $200 + $6 (price × tons short)', () => {
-    expect(scaleTicketRefundCents({ ...paid, weighedTons: 23.5 })).toBe(20_000 + 600);
+    expect(scaleTicketRefundCents({ ...paid, lines: [{ ...line, weighedTons: 23.5 }] })).toBe(20_000 + 600);
   });
 
   it('never charges more when the ticket shows more tons than paid for (issue 10: never charged more than agreed)', () => {
-    expect(scaleTicketRefundCents({ ...paid, weighedTons: 25 })).toBe(0);
-    expect(scaleTicketRefundCents({ ...paid, weighedTons: 24 })).toBe(0);
+    expect(scaleTicketRefundCents({ ...paid, lines: [{ ...line, weighedTons: 25 }] })).toBe(0);
+    expect(scaleTicketRefundCents({ ...paid, lines: [{ ...line, weighedTons: 24 }] })).toBe(0);
   });
 
   it('refunds the fee at the rate the order was sold at: at 5 %, half a ton short gives $200 + $10', () => {
-    expect(scaleTicketRefundCents({ ...paid, paidFeeCents: 48_000, feeBps: 500, weighedTons: 23.5 })).toBe(20_000 + 1_000);
+    expect(scaleTicketRefundCents({ paidFeeCents: 48_000, feeBps: 500, lines: [{ ...line, weighedTons: 23.5 }] })).toBe(20_000 + 1_000);
   });
 
   it('does not settle bale-priced orders on weight: they were counted', () => {
-    expect(scaleTicketRefundCents({ ...paid, pricingUnit: 'bale', weighedTons: 20 })).toBe(0);
+    expect(scaleTicketRefundCents({ ...paid, lines: [{ ...line, pricingUnit: 'bale', weighedTons: 20 }] })).toBe(0);
+  });
+
+  it('settles each line on its own: one line half a ton short, the other over, refunds only the short half ton ($200 + $6)', () => {
+    // Two 12 t lines at $400/t: $4,800 each, fee 3 % of $9,600 = $288.
+    const half = { ...line, paidGoodsCents: 480_000 };
+    expect(scaleTicketRefundCents({ ...paid, lines: [{ ...half, weighedTons: 11.5 }, { ...half, weighedTons: 12.8 }] })).toBe(20_000 + 600);
+    // An unweighed line counts as delivered in full.
+    expect(scaleTicketRefundCents({ ...paid, lines: [{ ...half, weighedTons: 11.5 }, { ...half, weighedTons: null }] })).toBe(20_000 + 600);
   });
 });

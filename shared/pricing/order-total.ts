@@ -122,23 +122,69 @@ export function orderTotal(terms: LotTerms, request: OrderRequest, feeBps: numbe
   return { bales: request.bales, tons, goodsCents: goods, loads, freightCents: freight, platformFeeCents: fee, totalCents: goods + freight + fee };
 }
 
+/** One lot in a grower's order: its terms and the bales taken from it. */
+export interface OrderLineRequest {
+  readonly terms: LotTerms;
+  readonly bales: number;
+}
+
+export interface GrowerOrderTotal extends OrderTotal {
+  /** Per line, in the order given: bales, tons and hay cost. */
+  readonly lines: readonly { readonly bales: number; readonly tons: number; readonly goodsCents: Cents }[];
+}
+
 /**
- * Settling a by-the-ton order on the scale ticket: when fewer tons were weighed than paid for, the
- * hay and fee on the missing tons come back; more tons never cost the buyer more. Bale-priced orders
- * were counted, not weighed, so they never settle on weight.
+ * One grower's order of several lots: one truck trip, one payment. The hay is each line's cost added up;
+ * the loads are counted on the combined bales and tons (the buyer's gain from buying one grower's lots
+ * together); freight is those whole loads at the grower's rate per loaded mile (the highest rate among
+ * the lots, so no lot travels below its own rate); the platform fee is on the hay total.
  */
-export function scaleTicketRefundCents(input: {
+export function growerOrderTotal(lines: readonly OrderLineRequest[], request: Omit<OrderRequest, 'bales'>, feeBps: number, truck: TruckCapacity = DEFAULT_TRUCK): GrowerOrderTotal {
+  if (lines.length === 0) throw new RangeError('An order holds at least one line.');
+  const priced = lines.map((l) => ({ bales: l.bales, tons: balesToTons(l.bales, l.terms.avgBaleWeightLb), goodsCents: goodsCents(l.terms, l.bales) }));
+  const bales = priced.reduce((s, l) => s + l.bales, 0);
+  const tons = priced.reduce((s, l) => s + l.tons, 0);
+  const goods = priced.reduce((s, l) => s + l.goodsCents, 0);
+  const rates = lines.map((l) => l.terms.freightCentsPerLoadedMile);
+  const delivering = request.method === 'delivery' && request.distanceMi !== null && rates.every((r) => r !== null);
+  const loads = loadsFor(bales, tons, truck);
+  const freight = delivering ? freightPerLoadCents(Math.max(...(rates as number[])), request.distanceMi!) * loads : 0;
+  const fee = platformFeeCents(goods, feeBps);
+  return { lines: priced, bales, tons, goodsCents: goods, loads, freightCents: freight, platformFeeCents: fee, totalCents: goods + freight + fee };
+}
+
+/** A line of a paid order as the scale ticket settles it. */
+export interface WeighedLine {
   readonly pricingUnit: 'ton' | 'bale';
   readonly priceCentsPerTon: Cents;
   readonly paidGoodsCents: Cents;
+  /** Net tons on the ticket for this line; null when not weighed. */
+  readonly weighedTons: number | null;
+}
+
+/**
+ * Settling an order on the scale ticket, line by line: a by-the-ton line weighed short gives back the hay
+ * on its missing tons, and the fee (charged on the order's hay total) comes back on the hay not delivered.
+ * More tons never cost the buyer more, on any line. Bale-priced lines were counted, not weighed, so they
+ * never settle on weight; unweighed lines count as delivered in full.
+ */
+export function scaleTicketRefundCents(input: {
+  readonly lines: readonly WeighedLine[];
   readonly paidFeeCents: Cents;
   /** The fee rate the order was sold at (stored on the order). */
   readonly feeBps: number;
-  readonly weighedTons: number;
 }): Cents {
-  if (input.pricingUnit !== 'ton') return 0;
-  if (!(input.weighedTons > 0) || !Number.isFinite(input.weighedTons)) throw new RangeError(`weighedTons must be positive; got ${input.weighedTons}`);
-  const deliveredGoods = Math.min(input.paidGoodsCents, roundCents(input.priceCentsPerTon * input.weighedTons));
+  let paidGoods = 0;
+  let deliveredGoods = 0;
+  for (const line of input.lines) {
+    paidGoods += line.paidGoodsCents;
+    if (line.pricingUnit !== 'ton' || line.weighedTons === null) {
+      deliveredGoods += line.paidGoodsCents;
+      continue;
+    }
+    if (!(line.weighedTons > 0) || !Number.isFinite(line.weighedTons)) throw new RangeError(`weighedTons must be positive; got ${line.weighedTons}`);
+    deliveredGoods += Math.min(line.paidGoodsCents, roundCents(line.priceCentsPerTon * line.weighedTons));
+  }
   const deliveredFee = Math.min(input.paidFeeCents, platformFeeCents(deliveredGoods, input.feeBps));
-  return input.paidGoodsCents - deliveredGoods + (input.paidFeeCents - deliveredFee);
+  return paidGoods - deliveredGoods + (input.paidFeeCents - deliveredFee);
 }

@@ -2,7 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { timeZoneForState } from '@shared/time/farm-time';
 import type { ForageEvaluationRequest } from '@shared/forage';
 import type { Db } from '../../server/db/client';
-import { farms, labAnalyses, lots, orders, samplingRecords, users } from '../../server/db/schema';
+import { farms, labAnalyses, lots, orderLines, orders, samplingRecords, users } from '../../server/db/schema';
 import { hashPassword } from '../../server/features/auth/password';
 import { analysisColumns } from '../../server/features/lots/analysis-record';
 import { locateZip } from '../../server/features/geo/geo';
@@ -74,13 +74,8 @@ export async function createOrder(db: Db, opts: { buyerId: number; farmId: numbe
     .insert(orders)
     .values({
       buyerId: opts.buyerId,
-      lotId: opts.lotId,
       farmId: opts.farmId,
       status: paid ? 'paid' : 'awaiting_payment',
-      bales: 20,
-      tons: 0.6,
-      priceCentsPerTon: 30000,
-      goodsCents: 18000,
       platformFeeBps: 300,
       platformFeeCents: 540,
       totalCents: 18540,
@@ -88,5 +83,6 @@ export async function createOrder(db: Db, opts: { buyerId: number; farmId: numbe
       paidAt: paid ? new Date(TEST_NOW) : null,
     })
     .returning();
+  await db.insert(orderLines).values({ orderId: order!.id, lotId: opts.lotId, bales: 20, tons: 0.6, priceCentsPerTon: 30000, goodsCents: 18000 });
   return order!;
 }

@@ -1,6 +1,6 @@
 import type Stripe from 'stripe';
 import type { Db } from '../../server/db/client';
-import { farms, orders, users } from '../../server/db/schema';
+import { farms, orderLines, orders, users } from '../../server/db/schema';
 import { createGrower, createLot } from './fixtures';
 import { uniqueEmail } from './test-api';
 import { hashPassword } from '../../server/features/auth/password';
@@ -50,13 +50,8 @@ export async function deliveredOrder(
     .insert(orders)
     .values({
       buyerId: opts.buyerId ?? (await fixtureBuyer(db)),
-      lotId: lot.id,
       farmId,
       status: opts.status ?? 'completed',
-      bales: 20,
-      tons: 1.2,
-      priceCentsPerTon: 25000,
-      goodsCents: opts.goodsCents,
       freightCents: freight,
       platformFeeCents: fee,
       platformFeeBps: 300,
@@ -68,6 +63,7 @@ export async function deliveredOrder(
       acceptBy: opts.acceptBy,
     })
     .returning();
+  await db.insert(orderLines).values({ orderId: order!.id, lotId: lot.id, bales: 20, tons: 1.2, priceCentsPerTon: 25000, goodsCents: opts.goodsCents });
   return order!;
 }
 

@@ -16,6 +16,7 @@ import { dmRequestOf } from '../selling/analysis-values';
 import { SettingsService } from '../settings/settings.service';
 import { sniffPdf } from '../uploads/file-sniff';
 import { writeThenRecord } from '../uploads/write-then-record';
+import { linesOf } from '../orders/order-lines';
 import { claimDecidedMail, claimOpenedMail } from './claim-mail';
 import { isAfter } from 'date-fns';
 import { plusDays } from '@shared/time/days';
@@ -46,13 +47,18 @@ export class ClaimsService {
       if (pastWindow || pastAcceptance || paidOut) {
         throw conflict('claim_window_closed', `Problems can be reported within ${claimDays} days of delivery and before the acceptance date; that time has passed.`);
       }
-      const [lot] = await tx.select({ forageClass: lots.forageClass }).from(lots).where(eq(lots.id, order.lotId));
+      const lines = await linesOf(tx, [order.id]);
+      const named = input.lineId === undefined ? (lines.length === 1 ? lines[0] : undefined) : lines.find((l) => l.line.id === input.lineId);
+      if (input.lineId !== undefined && !named) throw new HttpError(400, 'unknown_line', 'That lot is not part of this order.', [{ path: 'lineId', message: 'Choose a lot of this order.' }]);
+      // A retest is of one lot's hay: with several lots on the order, the buyer says which.
+      if (input.retest && !named) throw new HttpError(400, 'name_the_lot', 'This order holds several lots: choose the lot the retest is of.', [{ path: 'lineId', message: 'Choose the lot the retest is of.' }]);
       // Retest values are checked by the engine's own contract, as the lot form's are.
-      const retestValues = input.retest ? (parseAnalysisValues(input.retest.values, lot!.forageClass), input.retest.values) : null;
+      const retestValues = input.retest ? (parseAnalysisValues(input.retest.values, named!.lot.forageClass), input.retest.values) : null;
       const [claim] = await tx
         .insert(qualityClaims)
         .values({
           orderId: order.id,
+          orderLineId: named?.line.id ?? null,
           openedBy: buyer.id,
           reason: input.reason,
           retestLabName: input.retest?.labName ?? null,
@@ -199,15 +205,17 @@ export class ClaimsService {
   async view(claimId: number): Promise<ClaimView> {
     const { db } = this.deps;
     const [r] = await db
-      .select({ claim: qualityClaims, order: orders, lot: lots, farmName: farms.name, buyerName: users.displayName })
+      .select({ claim: qualityClaims, order: orders, farmName: farms.name, buyerName: users.displayName })
       .from(qualityClaims)
       .innerJoin(orders, eq(orders.id, qualityClaims.orderId))
-      .innerJoin(lots, eq(lots.id, orders.lotId))
       .innerJoin(farms, eq(farms.id, orders.farmId))
       .innerJoin(users, eq(users.id, orders.buyerId))
       .where(eq(qualityClaims.id, claimId));
     if (!r) throw notFound('That claim');
-    const { claim, order, lot } = r;
+    const { claim, order } = r;
+    const lines = await linesOf(db, [order.id]);
+    const named = lines.find((l) => l.line.id === claim.orderLineId);
+    const lot = (named ?? lines[0]!).lot;
     let judgement: ClaimView['judgement'] = null;
     if (claim.retestValues) {
       const [analysis] = await db.select().from(labAnalyses).where(and(eq(labAnalyses.lotId, lot.id), eq(labAnalyses.isCurrent, true)));
@@ -217,8 +225,9 @@ export class ClaimsService {
     return {
       id: claim.id,
       orderId: order.id,
+      lineId: named?.line.id ?? null,
       lotId: lot.id,
-      lotTitle: lot.title,
+      lotTitle: named ? lot.title : lines.map((l) => l.lot.title).join(' + '),
       farmName: r.farmName,
       buyerName: r.buyerName,
       status: claim.status,

@@ -1,13 +1,13 @@
 import { randomUUID } from 'node:crypto';
 import { and, eq, gte, inArray, lt, lte, sql } from 'drizzle-orm';
-import type { CalendarDay, DeliverySettings, OrderView, WindowRequest } from '@shared/contracts/orders';
+import type { CalendarDay, DeliverySettings, HandOver, OrderView, WindowRequest } from '@shared/contracts/orders';
 import { checkDeliveryTransition, type DeliveryEvent } from '@shared/lifecycle/delivery-lifecycle';
 import { ORDER_HOLDS_STOCK } from '@shared/lifecycle/order-lifecycle';
 import type { Actor } from '@shared/lifecycle/state-machine';
 import { scaleTicketRefundCents } from '@shared/pricing/order-total';
 import { shortTonsToLb } from '@shared/units/mass';
 import type { ApiDeps } from '../../api-deps';
-import { deliveries, farms, lots, orders, storedFiles, users } from '../../db/schema';
+import { deliveries, farms, lots, orderLines, orders, storedFiles, users } from '../../db/schema';
 import { SettingsService } from '../settings/settings.service';
 import { conflict, forbidden, HttpError, notFound } from '../../middleware/http-error';
 import { sniffPhoto } from '../uploads/file-sniff';
@@ -15,6 +15,7 @@ import { sha256 } from '../uploads/photo-upload';
 import { writeThenRecord } from '../uploads/write-then-record';
 import { farmDay, farmInstant, nextDay } from '@shared/time/farm-time';
 import { daysFrom, windowFor } from './delivery-window';
+import { orderLotTitles } from './order-lines';
 import { loadOrderRecord, readableOrder, type OrderRecord } from './order-record';
 import { applyOrderEvent, lockOrder, type Tx } from './order-transition';
 import { plusDays } from '@shared/time/days';
@@ -61,11 +62,13 @@ export class DeliveriesService {
   }
 
   /**
-   * The grower marks the load delivered or picked up, optionally with the scale ticket's net tons and a
-   * photo of it. A by-the-ton order weighed short is refunded the difference, once.
+   * The grower marks the load delivered or picked up, optionally with the scale ticket's net tons (of the
+   * order's one ton-priced line, or of each line) and a photo of it. Ton-priced lines weighed short are
+   * refunded the difference, once for the order; more tons never cost more.
    */
-  async handOver(user: Express.User, orderId: number, input: { weighedTons?: number | undefined }, ticket?: Express.Multer.File): Promise<OrderView> {
-    const { part } = await readableOrder(this.deps.db, orderId, user);
+  async handOver(user: Express.User, orderId: number, input: HandOver, ticket?: Express.Multer.File): Promise<OrderView> {
+    const { record, part } = await readableOrder(this.deps.db, orderId, user);
+    const weighed = weighedLines(record.lines, input);
     const key = ticket ? `scale-tickets/${orderId}/${randomUUID()}` : null;
     const sniffed = ticket ? await sniffPhoto(ticket.buffer, ticket.originalname) : null;
     const files = ticket && key ? [{ key, data: ticket.buffer }] : [];
@@ -83,21 +86,28 @@ export class DeliveriesService {
           fileId = file!.id;
         }
         const now = this.now();
+        const ticketTons = weighed.reduce((s, w) => s + w.weighedTons, 0);
         await tx
           .update(deliveries)
-          .set({ status: to, completedAt: now, updatedAt: now, scaleTicketLb: input.weighedTons ? shortTonsToLb(input.weighedTons) : null, scaleTicketFileId: fileId })
+          .set({ status: to, completedAt: now, updatedAt: now, scaleTicketLb: ticketTons > 0 ? shortTonsToLb(ticketTons) : null, scaleTicketFileId: fileId })
           .where(eq(deliveries.id, delivery.id));
+        for (const w of weighed) await tx.update(orderLines).set({ weighedTons: w.weighedTons }).where(and(eq(orderLines.id, w.lineId), eq(orderLines.orderId, orderId)));
+        const note = weighed.length === 0 ? '' : `Scale ticket: ${weighed.map((w) => (record.lines.length > 1 ? `${w.weighedTons} t of “${w.title}”` : `${w.weighedTons} t`)).join(', ')}`;
         await applyOrderEvent(tx, order, 'deliver', { actor: part === 'admin' ? 'admin' : 'grower', actorId: user.id }, now, {
           deliveredAt: now,
-          weighedTons: input.weighedTons ?? null,
           acceptBy: plusDays(now, acceptanceDays),
-        }, input.weighedTons ? `Scale ticket: ${input.weighedTons} t` : '');
+        }, note);
       }),
     );
-    const order = (await loadOrderRecord(this.deps.db, orderId))!.order;
-    if (order.weighedTons !== null) {
-      const refund = scaleTicketRefundCents({ pricingUnit: order.pricingUnit, priceCentsPerTon: order.priceCentsPerTon, paidGoodsCents: order.goodsCents, paidFeeCents: order.platformFeeCents, feeBps: order.platformFeeBps, weighedTons: order.weighedTons });
-      await this.orders.refundOnce(order, refund, 'scale_ticket', `order-${orderId}-scale-ticket`);
+    if (weighed.length > 0) {
+      const after = (await loadOrderRecord(this.deps.db, orderId))!;
+      const refund = scaleTicketRefundCents({
+        lines: after.lines.map(({ line }) => ({ pricingUnit: line.pricingUnit, priceCentsPerTon: line.priceCentsPerTon, paidGoodsCents: line.goodsCents, weighedTons: line.weighedTons })),
+        paidFeeCents: after.order.platformFeeCents,
+        feeBps: after.order.platformFeeBps,
+      });
+      // One key per order: the hand-over happens once, and a retry after a crash finds the refund already claimed.
+      await this.orders.refundOnce(after.order, refund, 'scale_ticket', `order-${orderId}-scale-ticket`);
     }
     await this.orders.notify(orderId, ['delivered']);
     return this.orders.get(user, orderId);
@@ -167,11 +177,10 @@ export class DeliveriesService {
     const start = farmInstant(dates[0]!, 0, farm.timeZone);
     const end = farmInstant(nextDay(dates.at(-1)!), 0, farm.timeZone);
     const rows = await this.deps.db
-      .select({ order: orders, delivery: deliveries, buyerName: users.displayName, lotTitle: lots.title })
+      .select({ order: orders, delivery: deliveries, buyerName: users.displayName, lotTitle: orderLotTitles })
       .from(deliveries)
       .innerJoin(orders, eq(orders.id, deliveries.orderId))
       .innerJoin(users, eq(users.id, orders.buyerId))
-      .innerJoin(lots, eq(lots.id, orders.lotId))
       .where(and(eq(orders.farmId, farm.id), inArray(orders.status, [...ORDER_HOLDS_STOCK]), gte(deliveries.windowStart, start), lt(deliveries.windowStart, end)));
     return dates.map((date) => {
       const today = rows.filter((r) => farmDay(r.delivery.windowStart, farm.timeZone) === date);
@@ -246,4 +255,23 @@ export class DeliveriesService {
   private now() {
     return this.deps.clock.now();
   }
+}
+
+/**
+ * The scale ticket's tons per line: `weighedTons` belongs to the order's one ton-priced line (or its only
+ * line); `lines` names each line. A line of another order, or tons the order cannot place, is a 400.
+ */
+export function weighedLines(lines: OrderRecord['lines'], input: HandOver): { lineId: number; title: string; weighedTons: number }[] {
+  if (input.lines) {
+    return input.lines.map((w) => {
+      const found = lines.find((l) => l.line.id === w.lineId);
+      if (!found) throw new HttpError(400, 'unknown_line', `Line ${w.lineId} is not part of this order.`, [{ path: 'lines', message: 'Not a line of this order.' }]);
+      return { lineId: w.lineId, title: found.lot.title, weighedTons: w.weighedTons };
+    });
+  }
+  if (input.weighedTons === undefined) return [];
+  const byTon = lines.filter((l) => l.line.pricingUnit === 'ton');
+  const target = lines.length === 1 ? lines[0] : byTon.length === 1 ? byTon[0] : undefined;
+  if (!target) throw new HttpError(400, 'weigh_each_line', 'This order holds several lots sold by the ton: give the weighed tons of each line.', [{ path: 'lines', message: 'Give the weighed tons of each line.' }]);
+  return [{ lineId: target.line.id, title: target.lot.title, weighedTons: input.weighedTons }];
 }

@@ -6,10 +6,10 @@ import type { DeliveryMethod } from '@shared/contracts/enums';
 /** The facts of an order that every order e-mail repeats. */
 export interface OrderMailFacts {
   orderId: number;
-  lotTitle: string;
-  forageType: string;
-  cutting: number;
+  /** The lots bought, one line each. */
+  lines: { title: string; forageType: string; cutting: number; bales: number; tons: number }[];
   farmName: string;
+  /** Bales, tons and hay of all lines together. */
   bales: number;
   tons: number;
   method: DeliveryMethod;
@@ -36,7 +36,7 @@ const when = (f: OrderMailFacts) =>
 
 function factRows(f: OrderMailFacts): [string, string][] {
   return [
-    ['Lot', `${f.lotTitle} (${f.forageType.replace(/_/g, ' ')}, cutting ${f.cutting})`],
+    ...f.lines.map((l): [string, string] => ['Lot', `${l.title} (${l.forageType.replace(/_/g, ' ')}, cutting ${l.cutting})${f.lines.length > 1 ? `: ${l.bales} bales, about ${l.tons.toFixed(2)} t` : ''}`]),
     ['From', f.farmName],
     ['Quantity', `${f.bales} bales, about ${f.tons.toFixed(2)} t`],
     [f.method === 'pickup' ? 'Pickup' : 'Delivery', when(f) + (f.method === 'delivery' && f.deliveryAddress ? ` to ${f.deliveryAddress}` : '')],
@@ -48,9 +48,12 @@ function factRows(f: OrderMailFacts): [string, string][] {
   ];
 }
 
+/** The lots of an order by name: "Lot A", or "Lot A + Lot B". */
+const titles = (f: OrderMailFacts) => f.lines.map((l) => l.title).join(' + ');
+
 const INTRO: Record<OrderMailKind, (f: OrderMailFacts) => { subject: string; lead: string }> = {
-  order_received: (f) => ({ subject: `Order ${f.orderId} paid: ${f.lotTitle}`, lead: 'Thank you: your payment arrived and the grower has been told. You will hear when the date is confirmed.' }),
-  new_order: (f) => ({ subject: `New order ${f.orderId}: ${f.bales} bales of ${f.lotTitle}`, lead: 'A buyer has paid for hay from your lot. Please confirm the date or offer another one.' }),
+  order_received: (f) => ({ subject: `Order ${f.orderId} paid: ${titles(f)}`, lead: 'Thank you: your payment arrived and the grower has been told. You will hear when the date is confirmed.' }),
+  new_order: (f) => ({ subject: `New order ${f.orderId}: ${f.bales} bales of ${titles(f)}`, lead: f.lines.length > 1 ? 'A buyer has paid for hay from your lots, to go together on one trip. Please confirm the date or offer another one.' : 'A buyer has paid for hay from your lot. Please confirm the date or offer another one.' }),
   date_confirmed: (f) => ({ subject: `Date confirmed for order ${f.orderId}`, lead: `The grower confirmed the ${when(f)}.` }),
   date_changed: (f) => ({ subject: `Another date offered for order ${f.orderId}`, lead: `The grower offered another date: ${when(f)}. Please agree to it or ask for another.` }),
   delivered: (f) => ({ subject: `Order ${f.orderId} handed over`, lead: 'The grower marked your hay delivered or picked up. Please accept the load, or report a problem within the period shown on the order.' }),

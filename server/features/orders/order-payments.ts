@@ -14,13 +14,14 @@ export class OrderPayments {
     private readonly env: Env,
   ) {}
 
-  async startCheckout(order: OrderRow, describe: { lotTitle: string; buyerEmail: string }): Promise<{ id: string; url: string }> {
-    const breakdown = `${order.bales} bales (${order.tons.toFixed(2)} t), ${order.method}; hay ${formatCents(order.goodsCents)}, freight ${formatCents(order.freightCents)}, fee ${formatCents(order.platformFeeCents)}`;
+  /** `describe`: the lots' names and the order's bales, tons and hay cost (added up over its lines). */
+  async startCheckout(order: OrderRow, describe: { title: string; buyerEmail: string; bales: number; tons: number; goodsCents: number }): Promise<{ id: string; url: string }> {
+    const breakdown = `${describe.bales} bales (${describe.tons.toFixed(2)} t), ${order.method}; hay ${formatCents(describe.goodsCents)}, freight ${formatCents(order.freightCents)}, fee ${formatCents(order.platformFeeCents)}`;
     const session = await this.call(() =>
       this.stripe.checkout.sessions.create(
         {
           mode: 'payment',
-          line_items: [{ quantity: 1, price_data: { currency: order.currency, unit_amount: order.totalCents, product_data: { name: `Order ${order.id}: ${describe.lotTitle}`, description: breakdown } } }],
+          line_items: [{ quantity: 1, price_data: { currency: order.currency, unit_amount: order.totalCents, product_data: { name: `Order ${order.id}: ${describe.title}`, description: breakdown } } }],
           success_url: `${this.env.PUBLIC_URL}/orders/${order.id}?paid=1`,
           cancel_url: `${this.env.PUBLIC_URL}/orders/${order.id}`,
           client_reference_id: String(order.id),

@@ -5,26 +5,27 @@ import type { OrderView } from '@shared/contracts/orders';
 import { deliveryEventsFor } from '@shared/lifecycle/delivery-lifecycle';
 import { orderEventsFor } from '@shared/lifecycle/order-lifecycle';
 import type { Db } from '../../db/client';
-import { deliveries, farms, lots, orderEvents, orders, users } from '../../db/schema';
+import { deliveries, farms, orderEvents, orders, users } from '../../db/schema';
 import { notFound } from '../../middleware/http-error';
+import { lineTotals, linesOf, lineView } from './order-lines';
 import type { OrderMailFacts } from './order-mail';
+import type { Tx } from './order-transition';
 
 const buyers = alias(users, 'buyers');
 const growers = alias(users, 'growers');
 
-/** An order with its lot, farm, buyer, grower and delivery, as one read. */
-export async function loadOrderRecord(db: Db | Parameters<Parameters<Db['transaction']>[0]>[0], id: number) {
+/** An order with its lines (and their lots), farm, buyer, grower and delivery. */
+export async function loadOrderRecord(db: Db | Tx, id: number) {
   const [row] = await db
-    .select({ order: orders, lot: lots, farm: farms, buyer: buyers, grower: growers })
+    .select({ order: orders, farm: farms, buyer: buyers, grower: growers })
     .from(orders)
-    .innerJoin(lots, eq(lots.id, orders.lotId))
     .innerJoin(farms, eq(farms.id, orders.farmId))
     .innerJoin(buyers, eq(buyers.id, orders.buyerId))
     .innerJoin(growers, eq(growers.id, farms.ownerId))
     .where(eq(orders.id, id));
   if (!row) return undefined;
   const [delivery] = await db.select().from(deliveries).where(eq(deliveries.orderId, id)).orderBy(asc(deliveries.loadNumber)).limit(1);
-  return { ...row, delivery };
+  return { ...row, lines: await linesOf(db, [id]), delivery };
 }
 export type OrderRecord = NonNullable<Awaited<ReturnType<typeof loadOrderRecord>>>;
 
@@ -45,14 +46,10 @@ export async function readableOrder(db: Db, id: number, user: Express.User) {
 export function mailFacts(r: OrderRecord): OrderMailFacts {
   return {
     orderId: r.order.id,
-    lotTitle: r.lot.title,
-    forageType: r.lot.forageType,
-    cutting: r.lot.cutting,
+    lines: r.lines.map(({ line, lot }) => ({ title: lot.title, forageType: lot.forageType, cutting: lot.cutting, bales: line.bales, tons: line.tons })),
     farmName: r.farm.name,
-    bales: r.order.bales,
-    tons: r.order.tons,
+    ...lineTotals(r.lines),
     method: r.order.method,
-    goodsCents: r.order.goodsCents,
     freightCents: r.order.freightCents,
     platformFeeCents: r.order.platformFeeCents,
     totalCents: r.order.totalCents,
@@ -72,14 +69,10 @@ export async function orderView(db: Db, r: OrderRecord, part: Actor & ('buyer' |
   return {
     id: o.id,
     status: o.status,
-    lot: { id: r.lot.id, title: r.lot.title, forageType: r.lot.forageType, cutting: r.lot.cutting, baleType: r.lot.baleType, avgBaleWeightLb: r.lot.avgBaleWeightLb },
+    lines: r.lines.map(lineView),
     farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour, timeZone: r.farm.timeZone },
     buyer: { displayName: r.buyer.displayName, email: part === 'buyer' || part === 'admin' || o.status !== 'awaiting_payment' ? r.buyer.email : '' },
-    bales: o.bales,
-    tons: o.tons,
-    pricingUnit: o.pricingUnit,
-    priceCentsPerTon: o.priceCentsPerTon,
-    goodsCents: o.goodsCents,
+    ...lineTotals(r.lines),
     freightCents: o.freightCents,
     platformFeeCents: o.platformFeeCents,
     platformFeeBps: o.platformFeeBps,
@@ -92,7 +85,6 @@ export async function orderView(db: Db, r: OrderRecord, part: Actor & ('buyer' |
     distanceMi: o.distanceMi,
     paymentUrl: part === 'buyer' && o.status === 'awaiting_payment' ? o.paymentUrl : null,
     reservedUntil: iso(o.reservedUntil),
-    weighedTons: o.weighedTons,
     paidAt: iso(o.paidAt),
     deliveredAt: iso(o.deliveredAt),
     acceptBy: iso(o.acceptBy),

@@ -6,6 +6,7 @@ import {
   DeliverySettingsSchema,
   HandOverSchema,
   ListCheckoutSchema,
+  ListQuoteSchema,
   OrderQuoteSchema,
   ProposeWindowSchema,
 } from '@shared/contracts/orders';
@@ -41,6 +42,9 @@ export function ordersRouter({ orders, deliveries }: OrderFeature): Router {
 
   router.get('/quote', async (req, res) => {
     res.json(await orders.quote(OrderQuoteSchema.parse(req.query)));
+  });
+  router.post('/quote-list', async (req, res) => {
+    res.json(await orders.quoteList(ListQuoteSchema.parse(req.body)));
   });
   router.get('/lots/:lotId/open-days', async (req, res) => {
     res.json(await deliveries.openDays(LotParams.parse(req.params).lotId));

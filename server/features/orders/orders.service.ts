@@ -1,11 +1,11 @@
 import { and, desc, eq, inArray, lte, sql } from 'drizzle-orm';
-import type { CreatedOrder, CreateOrder, ListCheckout, ListCheckoutResult, OrderQuote, OrderQuoteRequest, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
+import type { CreatedOrder, CreateOrder, GrowerQuote, LineQuote, ListCheckout, ListCheckoutResult, ListQuote, ListQuoteRequest, OrderQuote, OrderQuoteRequest, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
 import { RESERVATION_MINUTES } from '@shared/lifecycle/order-lifecycle';
 import type { Actor } from '@shared/lifecycle/state-machine';
 import { haversineMiles } from '@shared/pricing/distance';
-import { balesPerLoad, minimumBales, orderProblem, orderTotal, type LotTerms, type OrderTotal } from '@shared/pricing/order-total';
+import { balesPerLoad, growerOrderTotal, minimumBales, orderProblem, orderTotal, type GrowerOrderTotal, type LotTerms } from '@shared/pricing/order-total';
 import type { ApiDeps } from '../../api-deps';
-import { deliveries, farms, lots, orderEvents, orderRefunds, orders, users } from '../../db/schema';
+import { deliveries, farms, lots, orderEvents, orderLines, orderRefunds, orders, users } from '../../db/schema';
 import { conflict, HttpError, notFound } from '../../middleware/http-error';
 import { locateZip } from '../geo/geo';
 import { SettingsService } from '../settings/settings.service';
@@ -14,7 +14,8 @@ import { orderMail, type OrderMailKind } from './order-mail';
 import { OrderPayments } from './order-payments';
 import { loadOrderRecord, mailFacts, orderView, readableOrder, type OrderRecord } from './order-record';
 import { applyOrderEvent, lockOrder, type OrderRow, type Tx } from './order-transition';
-import { releaseBales, reserveBales } from './stock';
+import { lineTotals, linesOf, lineView } from './order-lines';
+import { releaseOrderStock, reserveBales, reserveOrderStock } from './stock';
 
 type Deps = Pick<ApiDeps, 'db' | 'stripe' | 'env' | 'clock' | 'logger' | 'jobs'>;
 
@@ -45,50 +46,71 @@ export class OrdersService {
     return { lotId: lot.id, ...total, platformFeeBps, distanceMi, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, balesPerLoad: balesPerLoad(farm, lot.avgBaleWeightLb), problem: problem?.message ?? null };
   }
 
-  /**
-   * Places an order: the bales are taken off the lot at once (held until `reservedUntil`), then the payment
-   * page is opened. Bales that are gone answer 409; a payment provider that fails releases them again.
-   */
-  async create(user: Express.User, input: CreateOrder): Promise<CreatedOrder> {
-    const [placed] = await this.place(user, [{ lotId: input.lotId, bales: input.bales, window: input.window }], input, false);
-    const { lotId: _lotId, lotTitle: _title, farmName: _farm, ...created } = placed!;
-    return created;
+  /** The figures of a hay list before checkout: one order per grower, freight on each grower's combined loads. */
+  async quoteList(input: ListQuoteRequest): Promise<ListQuote> {
+    const { platformFeeBps } = await this.settings.current();
+    const growers: GrowerQuote[] = [];
+    for (const group of groupByFarm(await Promise.all(input.lines.map(async (line) => ({ ...(await this.listedLot(line.lotId)), line }))))) {
+      const { farm } = group[0]!;
+      const distanceMi = input.method === 'delivery' && input.deliveryZip ? this.distance(farm, input.deliveryZip) : null;
+      const lines: LineQuote[] = group.map(({ lot, line }) => {
+        const terms = lotTerms(lot);
+        const problem = orderProblem(terms, { bales: line.bales, method: input.method, distanceMi }) ?? (input.method === 'pickup' && !lot.pickupAllowed ? { message: 'This lot is not sold for pickup at the farm; choose delivery.' } : null);
+        return { lotId: lot.id, lotTitle: lot.title, bales: line.bales, tons: 0, goodsCents: 0, minBales: minimumBales(terms), balesAvailable: lot.balesAvailable, balesPerLoad: balesPerLoad(farm, lot.avgBaleWeightLb), problem: problem?.message ?? null };
+      });
+      const total = growerOrderTotal(group.map(({ lot, line }) => ({ terms: lotTerms(lot), bales: line.bales })), { method: input.method, distanceMi }, platformFeeBps, farm);
+      total.lines.forEach((t, i) => Object.assign(lines[i]!, { tons: t.tons, goodsCents: t.goodsCents }));
+      const { lines: _perLine, ...figures } = total;
+      const problem = lines.find((l) => l.problem)?.problem ?? null;
+      growers.push({ farmId: farm.id, farmName: farm.name, lines, ...figures, platformFeeBps, distanceMi, problem });
+    }
+    return { growers };
   }
 
   /**
-   * Checks out a hay list: one order per lot, each with its own hold, payment page and idempotency key.
-   * Every hold is taken in one transaction, so a lot that has run short answers 409 naming it and nothing
-   * else is held. Dates are agreed per order once paid.
+   * Places an order of one lot: the bales are taken off the lot at once (held until `reservedUntil`), then
+   * the payment page is opened. Bales that are gone answer 409; a payment provider that fails releases them again.
+   */
+  async create(user: Express.User, input: CreateOrder): Promise<CreatedOrder> {
+    const [placed] = await this.place(user, [{ lotId: input.lotId, bales: input.bales }], input, false, input.window);
+    return { id: placed!.id, status: placed!.status, totalCents: placed!.totalCents, paymentUrl: placed!.paymentUrl };
+  }
+
+  /**
+   * Checks out a hay list: one order per grower (one payment and one truck trip for that grower's lots),
+   * each with its own hold, payment page and idempotency key. Every hold is taken in one transaction, so a
+   * lot that has run short answers 409 naming it and nothing else is held. Dates are agreed per order once paid.
    */
   async checkoutList(user: Express.User, input: ListCheckout): Promise<ListCheckoutResult> {
     return { orders: await this.place(user, input.lines, input, true) };
   }
 
-  private async place(user: Express.User, lines: readonly { lotId: number; bales: number; window?: WindowRequest | undefined }[], how: Pick<CreateOrder, 'method' | 'deliveryZip' | 'deliveryAddress'>, nameLots: boolean) {
+  private async place(user: Express.User, lines: readonly { lotId: number; bales: number }[], how: Pick<CreateOrder, 'method' | 'deliveryZip' | 'deliveryAddress'>, nameLots: boolean, wanted?: WindowRequest) {
     // The fee rate in force now is stored with each order: a later change of the setting never reprices it.
     const { platformFeeBps } = await this.settings.current();
     const now = this.deps.clock.now();
-    const drafts: Draft[] = [];
+    const checked: Checked[] = [];
     for (const [i, line] of lines.entries()) {
       const { lot, farm } = await this.listedLot(line.lotId);
       const named = (message: string) => (nameLots ? `“${lot.title}” (lot ${lot.id}): ${message}` : message);
       const path = (field: string) => (nameLots ? `lines.${i}.${field}` : field);
-      const terms = lotTerms(lot);
       const distanceMi = how.method === 'delivery' && how.deliveryZip ? this.distance(farm, how.deliveryZip) : null;
-      const request = { bales: line.bales, method: how.method, distanceMi };
-      const problem = orderProblem(terms, request);
+      const problem = orderProblem(lotTerms(lot), { bales: line.bales, method: how.method, distanceMi });
       if (problem?.code === 'not_enough_bales') throw new HttpError(409, 'not_enough_bales', named(problem.message), [{ path: path('bales'), message: problem.message, lotId: lot.id }]);
       if (problem) throw new HttpError(400, problem.code, named(problem.message), [{ path: problem.code === 'below_minimum' ? path('bales') : problem.code === 'no_distance' ? 'deliveryZip' : 'method', message: problem.message, lotId: lot.id }]);
       if (how.method === 'pickup' && !lot.pickupAllowed) throw new HttpError(400, 'no_pickup', named('This lot is not sold for pickup at the farm; choose delivery.'), [{ path: 'method', message: 'Not sold for pickup.', lotId: lot.id }]);
-      const total = orderTotal(terms, request, platformFeeBps, farm);
-      const window = line.window ? windowFor(farm, how.method, line.window, now) : null;
-      drafts.push({ lot, farm, total, distanceMi, window, path: path('bales') });
+      checked.push({ lot, farm, line, distanceMi, path: path('bales') });
     }
+    const drafts: Draft[] = groupByFarm(checked).map((group) => {
+      const { farm, distanceMi } = group[0]!;
+      const total = growerOrderTotal(group.map(({ lot, line }) => ({ terms: lotTerms(lot), bales: line.bales })), { method: how.method, distanceMi }, platformFeeBps, farm);
+      return { farm, lines: group, total, distanceMi, window: wanted ? windowFor(farm, how.method, wanted, now) : null };
+    });
 
     const placed = await this.db.transaction(async (tx) => {
       // Lots are taken in id order, so two lists holding the same lots never wait on each other in a circle.
-      for (const d of [...drafts].sort((x, y) => x.lot.id - y.lot.id)) {
-        if (await reserveBales(tx, d.lot.id, d.total.bales, now)) continue;
+      for (const d of [...checked].sort((x, y) => x.lot.id - y.lot.id)) {
+        if (await reserveBales(tx, d.lot.id, d.line.bales, now)) continue;
         const [left] = await tx.select({ balesAvailable: lots.balesAvailable }).from(lots).where(eq(lots.id, d.lot.id));
         const n = left?.balesAvailable ?? 0;
         const message = n === 0 ? `Those bales of “${d.lot.title}” are no longer available: this lot has none left.` : `Those bales of “${d.lot.title}” are no longer available: only ${n} are left.`;
@@ -100,13 +122,7 @@ export class OrdersService {
           .insert(orders)
           .values({
             buyerId: user.id,
-            lotId: d.lot.id,
             farmId: d.farm.id,
-            bales: d.total.bales,
-            tons: d.total.tons,
-            pricingUnit: d.lot.pricingUnit,
-            priceCentsPerTon: d.lot.priceCentsPerTon,
-            goodsCents: d.total.goodsCents,
             freightCents: d.total.freightCents,
             platformFeeCents: d.total.platformFeeCents,
             platformFeeBps,
@@ -121,19 +137,33 @@ export class OrdersService {
             updatedAt: now,
           })
           .returning();
-        await tx.insert(orderEvents).values({ orderId: row!.id, event: 'place', status: 'awaiting_payment', actor: 'buyer', actorId: user.id, note: `${d.total.bales} bales reserved`, createdAt: now });
+        await tx.insert(orderLines).values(
+          d.lines.map(({ lot, line }, i) => ({
+            orderId: row!.id,
+            lotId: lot.id,
+            bales: line.bales,
+            tons: d.total.lines[i]!.tons,
+            pricingUnit: lot.pricingUnit,
+            priceCentsPerTon: lot.priceCentsPerTon,
+            goodsCents: d.total.lines[i]!.goodsCents,
+            createdAt: now,
+          })),
+        );
+        const note = d.lines.length === 1 ? `${d.total.bales} bales reserved` : `${d.total.bales} bales reserved from ${d.lines.length} lots: ${d.lines.map(({ lot, line }) => `${line.bales} of “${lot.title}”`).join(', ')}`;
+        await tx.insert(orderEvents).values({ orderId: row!.id, event: 'place', status: 'awaiting_payment', actor: 'buyer', actorId: user.id, note, createdAt: now });
         if (d.window) await tx.insert(deliveries).values({ orderId: row!.id, method: how.method, status: 'proposed', windowStart: d.window.start, windowEnd: d.window.end, updatedAt: now });
-        rows.push({ row: row!, lotTitle: d.lot.title, farmName: d.farm.name });
+        rows.push({ row: row!, draft: d });
       }
       return rows;
     });
 
     const opened = [];
-    for (const { row, lotTitle, farmName } of placed) {
+    for (const { row, draft } of placed) {
+      const title = draft.lines.map(({ lot }) => lot.title).join(' + ');
       try {
-        const session = await this.payments.startCheckout(row, { lotTitle, buyerEmail: user.email });
+        const session = await this.payments.startCheckout(row, { title, buyerEmail: user.email, bales: draft.total.bales, tons: draft.total.tons, goodsCents: draft.total.goodsCents });
         await this.db.update(orders).set({ checkoutSessionId: session.id, paymentUrl: session.url }).where(eq(orders.id, row.id));
-        opened.push({ id: row.id, status: 'awaiting_payment' as const, totalCents: row.totalCents, paymentUrl: session.url, lotId: row.lotId, lotTitle, farmName });
+        opened.push({ id: row.id, status: 'awaiting_payment' as const, totalCents: row.totalCents, paymentUrl: session.url, farmName: draft.farm.name, lines: draft.lines.map(({ lot, line }) => ({ lotId: lot.id, lotTitle: lot.title, bales: line.bales })) });
       } catch (err) {
         // All or nothing: without a payment page for every order, every hold of this checkout is let go.
         for (const p of placed) await this.abandon(p.row.id);
@@ -151,7 +181,7 @@ export class OrdersService {
       const locked = await lockOrder(tx, orderId);
       if (locked?.status !== 'awaiting_payment') return;
       await applyOrderEvent(tx, locked, 'cancel', { actor: 'admin', actorId: null }, this.deps.clock.now(), { cancelReason: 'payment_provider_unreachable', reservedUntil: null }, 'The payment page could not be opened.');
-      await releaseBales(tx, locked.lotId, locked.bales, this.deps.clock.now());
+      await releaseOrderStock(tx, orderId, this.deps.clock.now());
     });
   }
 
@@ -180,7 +210,7 @@ export class OrdersService {
     await this.db.transaction(async (tx) => {
       const locked = (await lockOrder(tx, id))!;
       await applyOrderEvent(tx, locked, 'cancel', { actor, actorId: user.id }, this.deps.clock.now(), { cancelReason: 'cancelled_by_' + part, reservedUntil: null });
-      await releaseBales(tx, locked.lotId, locked.bales, this.deps.clock.now());
+      await releaseOrderStock(tx, id, this.deps.clock.now());
     });
     return this.get(user, id);
   }
@@ -207,8 +237,8 @@ export class OrdersService {
         return 'paid' as const;
       }
       if ((order.status === 'cancelled' || order.status === 'expired') && !order.paidAt) {
-        // Paid after the hold ran out: take the bales again if they are still there, else refund in full.
-        if (await reserveBales(tx, order.lotId, order.bales, now)) {
+        // Paid after the hold ran out: take every line's bales again if they are all still there, else refund in full.
+        if (await reserveOrderStock(tx, orderId, now)) {
           await tx.update(orders).set({ status: 'paid', paidAt: now, paymentIntentId, cancelReason: null, updatedAt: now }).where(eq(orders.id, orderId));
           await tx.insert(orderEvents).values({ orderId, event: 'pay', status: 'paid', actor: 'system', note: 'Paid after the hold ran out; the bales were still there.', createdAt: now });
           return 'paid' as const;
@@ -309,36 +339,40 @@ export class OrdersService {
       const order = await lockOrder(tx, orderId);
       if (order?.status !== 'awaiting_payment') return false;
       await applyOrderEvent(tx, order, event, { actor: 'system', actorId: null }, this.deps.clock.now(), { cancelReason: reason, reservedUntil: null }, note);
-      await releaseBales(tx, order.lotId, order.bales, this.deps.clock.now());
+      await releaseOrderStock(tx, orderId, this.deps.clock.now());
       return true;
     });
   }
 
   private async summaries(where: ReturnType<typeof eq>): Promise<OrderSummary[]> {
     const rows = await this.db
-      .select({ order: orders, lot: lots, farm: farms, buyerName: users.displayName, delivery: deliveries })
+      .select({ order: orders, farm: farms, buyerName: users.displayName, delivery: deliveries })
       .from(orders)
-      .innerJoin(lots, eq(lots.id, orders.lotId))
       .innerJoin(farms, eq(farms.id, orders.farmId))
       .innerJoin(users, eq(users.id, orders.buyerId))
       .leftJoin(deliveries, and(eq(deliveries.orderId, orders.id), eq(deliveries.loadNumber, 1)))
       .where(where)
       .orderBy(desc(orders.createdAt), desc(orders.id))
       .limit(200);
-    return rows.map((r) => ({
-      id: r.order.id,
-      status: r.order.status,
-      bales: r.order.bales,
-      tons: r.order.tons,
-      totalCents: r.order.totalCents,
-      method: r.order.method,
-      createdAt: r.order.createdAt.toISOString(),
-      lot: { id: r.lot.id, title: r.lot.title, forageType: r.lot.forageType, cutting: r.lot.cutting, baleType: r.lot.baleType, avgBaleWeightLb: r.lot.avgBaleWeightLb },
-      farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour, timeZone: r.farm.timeZone },
-      buyerName: r.buyerName,
-      windowStart: r.delivery?.windowStart.toISOString() ?? null,
-      deliveryStatus: r.delivery?.status ?? null,
-    }));
+    const lines = await linesOf(this.db, rows.map((r) => r.order.id));
+    return rows.map((r) => {
+      const mine = lines.filter((l) => l.line.orderId === r.order.id);
+      const { bales, tons } = lineTotals(mine);
+      return {
+        id: r.order.id,
+        status: r.order.status,
+        bales,
+        tons,
+        totalCents: r.order.totalCents,
+        method: r.order.method,
+        createdAt: r.order.createdAt.toISOString(),
+        lines: mine.map(lineView),
+        farm: { id: r.farm.id, name: r.farm.name, city: r.farm.city, state: r.farm.state, pickupFromHour: r.farm.pickupFromHour, pickupToHour: r.farm.pickupToHour, timeZone: r.farm.timeZone },
+        buyerName: r.buyerName,
+        windowStart: r.delivery?.windowStart.toISOString() ?? null,
+        deliveryStatus: r.delivery?.status ?? null,
+      };
+    });
   }
 
   private async listedLot(lotId: number) {
@@ -353,15 +387,30 @@ export class OrdersService {
   }
 }
 
-/** One order checked and priced, before its bales are held. */
-interface Draft {
+/** One line of a checkout, checked against its lot. */
+interface Checked {
   lot: typeof lots.$inferSelect;
   farm: typeof farms.$inferSelect;
-  total: OrderTotal;
+  line: { lotId: number; bales: number };
   distanceMi: number | null;
-  window: { start: Date; end: Date } | null;
   /** Where in the request a problem with it points. */
   path: string;
+}
+
+/** One grower's order checked and priced, before its bales are held. */
+interface Draft {
+  farm: typeof farms.$inferSelect;
+  lines: Checked[];
+  total: GrowerOrderTotal;
+  distanceMi: number | null;
+  window: { start: Date; end: Date } | null;
+}
+
+/** Lines grouped by the lot's farm, growers in the order they first appear. */
+function groupByFarm<T extends { farm: { id: number } }>(items: readonly T[]): T[][] {
+  const groups = new Map<number, T[]>();
+  for (const item of items) groups.set(item.farm.id, [...(groups.get(item.farm.id) ?? []), item]);
+  return [...groups.values()];
 }
 
 export function lotTerms(lot: typeof lots.$inferSelect): LotTerms {

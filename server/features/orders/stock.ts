@@ -1,5 +1,5 @@
 import { and, eq, gte, sql } from 'drizzle-orm';
-import { lots } from '../../db/schema';
+import { lots, orderLines } from '../../db/schema';
 import type { Tx } from './order-transition';
 
 /**
@@ -30,4 +30,33 @@ export async function releaseBales(tx: Tx, lotId: number, bales: number, at: Dat
       updatedAt: at,
     })
     .where(eq(lots.id, lotId));
+}
+
+/** The lines of an order as stock: which lot, how many bales. */
+async function stockLines(tx: Tx, orderId: number) {
+  return tx.select({ lotId: orderLines.lotId, bales: orderLines.bales }).from(orderLines).where(eq(orderLines.orderId, orderId)).orderBy(orderLines.lotId);
+}
+
+/** Puts every line's bales of an order back on its lot (cancel, decline, expiry). */
+export async function releaseOrderStock(tx: Tx, orderId: number, at: Date): Promise<void> {
+  for (const line of await stockLines(tx, orderId)) await releaseBales(tx, line.lotId, line.bales, at);
+}
+
+class ShortLine extends Error {}
+
+/**
+ * Takes every line's bales of an order again, all or none (a savepoint undoes the lines already taken
+ * when a later one is short). Lots are taken in id order so two orders never wait on each other in a circle.
+ */
+export async function reserveOrderStock(tx: Tx, orderId: number, at: Date): Promise<boolean> {
+  const lines = await stockLines(tx, orderId);
+  try {
+    await tx.transaction(async (sp) => {
+      for (const line of lines) if (!(await reserveBales(sp, line.lotId, line.bales, at))) throw new ShortLine();
+    });
+    return true;
+  } catch (err) {
+    if (err instanceof ShortLine) return false;
+    throw err;
+  }
 }

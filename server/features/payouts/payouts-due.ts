@@ -1,7 +1,8 @@
 import { and, asc, eq, inArray, lte, notExists, or, sql } from 'drizzle-orm';
 import type { DueOrderLine, GrowerPayoutDue } from '@shared/contracts/payouts';
 import type { DbOrTx } from '../audit/audit-log';
-import { farms, lots, orders, payoutLines, users } from '../../db/schema';
+import { farms, orders, payoutLines, users } from '../../db/schema';
+import { orderGoodsCents, orderLotTitles } from '../orders/order-lines';
 
 /** Why a grower's payout is held, in words; null when it can be sent. */
 export function heldReasonOf(farm: { payoutAccountId: string | null; payoutsEnabled: boolean }): string | null {
@@ -19,9 +20,10 @@ export function heldReasonOf(farm: { payoutAccountId: string | null; payoutsEnab
 export async function payoutsDue(db: DbOrTx, now: Date, farmIds?: number[], options: { lock?: boolean } = {}): Promise<GrowerPayoutDue[]> {
   const eligible = or(eq(orders.status, 'completed'), and(eq(orders.status, 'delivered'), lte(orders.acceptBy, now)));
   const query = db
-    .select({ order: orders, lotTitle: lots.title })
+    .select({ order: orders, lotTitle: orderLotTitles, goodsCents: orderGoodsCents })
     .from(orders)
-    .innerJoin(lots, eq(lots.id, orders.lotId))
+    // The join also makes Drizzle name every column with its table, which the not-exists below relies on.
+    .innerJoin(farms, eq(farms.id, orders.farmId))
     .where(and(eligible, farmIds ? inArray(orders.farmId, farmIds) : undefined, notExists(db.select({ one: sql`1` }).from(payoutLines).where(eq(payoutLines.orderId, orders.id)))))
     .orderBy(asc(orders.farmId), asc(orders.id))
     .$dynamic();
@@ -35,15 +37,15 @@ export async function payoutsDue(db: DbOrTx, now: Date, farmIds?: number[], opti
     .map(({ farm, email }) => {
       const lines: DueOrderLine[] = rows
         .filter((r) => r.order.farmId === farm.id)
-        .map(({ order, lotTitle }) => ({
+        .map(({ order, lotTitle, goodsCents }) => ({
           orderId: order.id,
           lotTitle,
           deliveredAt: order.deliveredAt?.toISOString() ?? null,
-          goodsCents: order.goodsCents,
+          goodsCents,
           freightCents: order.freightCents,
           platformFeeCents: order.platformFeeCents,
           refundedCents: order.refundedCents,
-          amountCents: Math.max(0, order.goodsCents + order.freightCents - order.refundedCents),
+          amountCents: Math.max(0, goodsCents + order.freightCents - order.refundedCents),
         }));
       const totalCents = lines.reduce((s, l) => s + l.amountCents, 0);
       const heldReason = heldReasonOf(farm);

@@ -4,7 +4,7 @@ import { stepIndex } from '@shared/contracts/selling';
 import { relistedStatus, requireLotTransition } from '@shared/lifecycle/lot-lifecycle';
 import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
-import { farms, labAnalyses, lots, orders } from '../../db/schema';
+import { farms, labAnalyses, lots, orderLines, orders } from '../../db/schema';
 import { HttpError } from '../../middleware/http-error';
 import { recordAudit } from '../audit/audit-log';
 import { LotsService } from '../lots/lots.service';
@@ -109,7 +109,7 @@ export class LotLifecycleService {
         avgBaleWeightLb: lots.avgBaleWeightLb,
         priceCentsPerTon: lots.priceCentsPerTon,
         viewCount: lots.viewCount,
-        orderCount: sql<number>`(select count(*) from ${orders} where ${orders.lotId} = ${lots.id} and ${orders.status} <> 'cancelled')`.mapWith(Number),
+        orderCount: sql<number>`(select count(*) from ${orderLines} join ${orders} on ${orders.id} = ${orderLines.orderId} where ${orderLines.lotId} = ${lots.id} and ${orders.status} <> 'cancelled')`.mapWith(Number),
         updatedAt: lots.updatedAt,
       })
       .from(lots)

@@ -3,7 +3,7 @@ import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom, Observable, switchMap } from 'rxjs';
-import type { OrderView } from '@shared/contracts/orders';
+import { lotTitlesOf, type OrderView } from '@shared/contracts/orders';
 import { deliveryStatusLabel } from '@shared/lifecycle/delivery-lifecycle';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
 import { feeRateLabel } from '@shared/pricing/order-total';
@@ -41,7 +41,8 @@ export class OrderPage {
   protected readonly busy = signal(false);
   protected readonly date = signal('');
   protected readonly hour = signal(9);
-  protected readonly weighedTons = signal('');
+  /** Weighed tons typed per order line (scale ticket), by line id. */
+  protected readonly weighed = signal<Partial<Record<number, string>>>({});
   protected readonly ticket = signal<File | null>(null);
   protected readonly money = formatCents;
   protected readonly feeRate = feeRateLabel;
@@ -61,9 +62,17 @@ export class OrderPage {
     const window = { date: this.date(), ...(this.order()?.method === 'pickup' ? { pickupHour: this.hour() } : {}) };
     return this.run((id) => (asBuyer ? this.api.askForDate(id, window) : this.api.offerDate(id, window)));
   }
+  protected titles(o: OrderView): string {
+    return lotTitlesOf(o.lines);
+  }
+  protected weigh(lineId: number, value: string) {
+    this.weighed.update((w) => ({ ...w, [lineId]: value }));
+  }
   protected handOver() {
-    const tons = this.weighedTons().trim() === '' ? null : Number(this.weighedTons());
-    return this.run((id) => this.api.handOver(id, tons, this.ticket()));
+    const lines = Object.entries(this.weighed())
+      .filter((entry): entry is [string, string] => (entry[1] ?? '').trim() !== '')
+      .map(([lineId, v]) => ({ lineId: Number(lineId), weighedTons: Number(v) }));
+    return this.run((id) => this.api.handOver(id, lines, this.ticket()));
   }
   protected accept() {
     return this.run((id) => this.api.accept(id));

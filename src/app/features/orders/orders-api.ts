@@ -1,7 +1,7 @@
 import { HttpClient, HttpParams } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import type { Observable } from 'rxjs';
-import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, ListCheckout, ListCheckoutResult, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
+import type { CalendarDay, CreatedOrder, CreateOrder, DeliverySettings, ListCheckout, ListCheckoutResult, ListQuote, ListQuoteRequest, OrderQuote, OrderSummary, OrderView, WindowRequest } from '@shared/contracts/orders';
 
 /** The orders feature's only door to the API. */
 @Injectable({ providedIn: 'root' })
@@ -18,7 +18,11 @@ export class OrdersApi {
   place(order: CreateOrder): Observable<CreatedOrder> {
     return this.http.post<CreatedOrder>('/api/orders', order);
   }
-  /** Checks out the hay list: one order (hold and payment page) per lot, all held or none. */
+  /** The hay list's figures: one order per grower, freight on each grower's combined loads. */
+  quoteList(list: ListQuoteRequest): Observable<ListQuote> {
+    return this.http.post<ListQuote>('/api/orders/quote-list', list);
+  }
+  /** Checks out the hay list: one order (hold and payment page) per grower, all held or none. */
   placeList(list: ListCheckout): Observable<ListCheckoutResult> {
     return this.http.post<ListCheckoutResult>('/api/orders/from-list', list);
   }
@@ -43,9 +47,10 @@ export class OrdersApi {
   confirmDate(id: number): Observable<OrderView> {
     return this.http.post<OrderView>(`/api/orders/${id}/confirm-date`, {});
   }
-  handOver(id: number, weighedTons: number | null, ticket: File | null): Observable<OrderView> {
+  /** Marks the hay handed over, with the scale ticket's tons per line (sent as JSON beside the photo). */
+  handOver(id: number, lines: { lineId: number; weighedTons: number }[], ticket: File | null): Observable<OrderView> {
     const form = new FormData();
-    if (weighedTons !== null) form.append('weighedTons', String(weighedTons));
+    if (lines.length > 0) form.append('lines', JSON.stringify(lines));
     if (ticket) form.append('ticket', ticket);
     return this.http.post<OrderView>(`/api/orders/${id}/hand-over`, form);
   }

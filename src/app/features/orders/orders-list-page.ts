@@ -2,7 +2,7 @@ import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/c
 import { toSignal } from '@angular/core/rxjs-interop';
 import { RouterLink } from '@angular/router';
 
-import type { OrderSummary } from '@shared/contracts/orders';
+import { lotTitlesOf, type OrderSummary } from '@shared/contracts/orders';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
 import { farmDateLabel } from '@shared/time/farm-time';
 import { formatCents } from '@shared/units/money';
@@ -23,7 +23,7 @@ import { OrdersApi } from './orders-api';
         <ul class="orders">
           @for (o of list; track o.id) {
             <li>
-              <a [routerLink]="['/orders', o.id]">Order {{ o.id }}: {{ o.bales }} bales of {{ o.lot.title }}</a>
+              <a [routerLink]="['/orders', o.id]">Order {{ o.id }}: {{ o.bales }} bales of {{ titles(o) }}</a>
               <span>{{ statusLabel(o.status) }} · {{ money(o.totalCents) }} · {{ o.method === 'delivery' ? 'delivery' : 'pickup' }}@if (o.windowStart) { {{ farmDate(o.windowStart, o.farm.timeZone) }} }</span>
               <span class="who">{{ grower ? o.buyerName : o.farm.name }}</span>
             </li>
@@ -46,4 +46,5 @@ export class OrdersListPage {
   protected readonly money = formatCents;
   protected readonly statusLabel = orderStatusLabel;
   protected readonly farmDate = farmDateLabel;
+  protected readonly titles = (o: OrderSummary) => lotTitlesOf(o.lines);
 }

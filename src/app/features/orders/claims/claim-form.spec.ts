@@ -33,6 +33,15 @@ describe('claim form', () => {
     expect(missingInDraft({ ...withRetest, labName: 'Lab', reportDate: '2026-09-14', values: { dryMatterPct: '88', crudeProteinPct: '15', adfPct: '34' } })).toMatch(/Neutral detergent fibre/);
   });
 
+  it('on an order of several lots, names the chosen lot, and asks which lot a retest is of', () => {
+    const draft = { ...emptyClaimDraft(), reason: 'Mould inside the second lot’s bales.' };
+    expect(claimRequest(7, { ...draft, lineId: '12' })).toEqual({ orderId: 7, lineId: 12, reason: 'Mould inside the second lot’s bales.' });
+    expect(missingInDraft(draft, 2)).toBeNull();
+    const withRetest = { ...draft, withRetest: true };
+    expect(missingInDraft(withRetest, 2)).toMatch(/Choose the lot/);
+    expect(missingInDraft({ ...withRetest, lineId: '12' }, 2)).toMatch(/Name the lab/);
+  });
+
   it('offers an input for every nutrient an admin compares, dry matter, CP, ADF and NDF required (the RFV inputs)', () => {
     expect(RETEST_FIELDS.filter((f) => f.required).map((f) => f.field)).toEqual(['dryMatterPct', 'crudeProteinPct', 'adfPct', 'ndfPct']);
     expect(RETEST_FIELDS.length).toBeGreaterThan(4);

@@ -38,7 +38,7 @@ export class ClaimPanel {
   protected readonly canFile = computed(() => this.order().actions.includes('report_problem'));
   protected readonly draft = signal<ClaimDraft>(emptyClaimDraft());
   protected readonly pdf = signal<File | null>(null);
-  protected readonly missing = computed(() => missingInDraft(this.draft()));
+  protected readonly missing = computed(() => missingInDraft(this.draft(), this.order().lines.length));
   protected readonly busy = signal(false);
   protected readonly error = signal('');
   protected readonly fields = RETEST_FIELDS;
