@@ -49,6 +49,7 @@ export default defineConfig({
       STRIPE_FAKE_PORT: process.env['STRIPE_FAKE_PORT'] ?? '12112',
       SIGN_IN_RATE_LIMIT: '200',
       SIGN_IN_IP_RATE_LIMIT: '400',
+      SIGN_UP_IP_RATE_LIMIT: '400',
     },
   },
 });

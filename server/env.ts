@@ -32,6 +32,8 @@ const EnvSchema = z.object({
   SIGN_IN_RATE_LIMIT: z.coerce.number().int().positive().default(10),
   /** Failed sign-ins per client address per 15 minutes, whatever the accounts tried. */
   SIGN_IN_IP_RATE_LIMIT: z.coerce.number().int().positive().default(30),
+  /** Sign-ups per client address per hour (counted whether or not they succeed). */
+  SIGN_UP_IP_RATE_LIMIT: z.coerce.number().int().positive().default(20),
   /** Prefix of the rate limiters' counts in PostgreSQL: servers on one database with the same scope share counts. */
   RATE_LIMIT_SCOPE: z.string().max(100).default(''),
 });

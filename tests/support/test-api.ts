@@ -33,7 +33,7 @@ export async function startTestApi(overrides: Record<string, string> = {}, optio
   const stripePort = stripeFake.port;
   // Each test API counts its own rate limits unless a test gives two APIs one scope (they share the database).
   const scope = `test_${process.pid}_${apiCounter + 1}_${Date.now()}:`;
-  const env = readEnv({ NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'silent', SIGN_IN_RATE_LIMIT: '1000', SIGN_IN_IP_RATE_LIMIT: '1000', RATE_LIMIT_SCOPE: scope, ...overrides });
+  const env = readEnv({ NODE_ENV: 'test', DATABASE_URL: url, LOG_LEVEL: 'silent', SIGN_IN_RATE_LIMIT: '1000', SIGN_IN_IP_RATE_LIMIT: '1000', SIGN_UP_IP_RATE_LIMIT: '1000', RATE_LIMIT_SCOPE: scope, ...overrides });
   const mails: OutgoingMail[] = [];
   const clock = testClock();
   const uploadDir = mkdtempSync(join(tmpdir(), 'baleproof-test-'));

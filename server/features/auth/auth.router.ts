@@ -41,7 +41,7 @@ export function createAuthenticator(db: Db) {
 
 export function authRouter(
   db: Db,
-  options: { signInLimit: number; signInIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean; clock: Clock; rateLimitScope: string },
+  options: { signInLimit: number; signInIpLimit: number; signUpIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean; clock: Clock; rateLimitScope: string },
 ): Router {
   const auth = new AuthService(db);
   const router = Router();
@@ -67,6 +67,16 @@ export function authRouter(
   const addressCounts = new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-in-ip:`);
   const perAccount = failedSignIns(options.signInLimit, accountCounts, accountKey);
   const perAddress = failedSignIns(options.signInIpLimit, addressCounts, addressKey);
+  // New accounts per client address per hour, so one address cannot create accounts (or probe e-mails) in bulk.
+  const signUpsPerAddress = rateLimit({
+    store: new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-up-ip:`),
+    windowMs: 60 * 60 * 1000,
+    limit: options.signUpIpLimit,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: addressKey,
+    handler: (_req, _res, next) => next(new HttpError(429, 'too_many_sign_ups', 'Too many new accounts from this network. Wait an hour and try again.')),
+  });
   const forgiveAttempt = (req: Request) => Promise.all([accountCounts.decrement(accountKey(req)), addressCounts.decrement(addressKey(req))]);
 
   // The app's first call: it also hands out the CSRF cookie for API clients that start here.
@@ -74,7 +84,7 @@ export function authRouter(
     res.json({ user: req.user ?? null });
   });
 
-  router.post('/sign-up', async (req, res) => {
+  router.post('/sign-up', signUpsPerAddress, async (req, res) => {
     const input = SignUpSchema.parse(req.body);
     const user = await auth.signUp(input);
     await logIn(req, user);

@@ -70,4 +70,21 @@ describe('sign-in limits', () => {
       expect(statuses.filter((s) => s === 429)).toHaveLength(6);
     });
   });
+
+  describe('sign-ups per client address', () => {
+    let t: TestApi;
+    beforeAll(async () => {
+      t = await startTestApi({ SIGN_UP_IP_RATE_LIMIT: '3' });
+    });
+    afterAll(() => t.close());
+
+    it('allows a few new accounts an hour from one address, then answers 429', async () => {
+      const statuses = [];
+      for (let i = 0; i < 4; i++) statuses.push((await t.agent().post('/auth/sign-up', { email: uniqueEmail(), password: 'a-long-password', displayName: 'New Person', role: 'buyer' })).status);
+      expect(statuses).toEqual([201, 201, 201, 429]);
+      // An hour later the address may sign up again (the API's clock).
+      t.clock.set(new Date(t.clock.now().getTime() + 61 * 60 * 1000));
+      expect((await t.agent().post('/auth/sign-up', { email: uniqueEmail(), password: 'a-long-password', displayName: 'New Person', role: 'buyer' })).status).toBe(201);
+    });
+  });
 });
