@@ -1,15 +1,15 @@
 import { createHash, randomUUID } from 'node:crypto';
-import { timeZoneForState } from '@shared/time/farm-time';
 import { sql } from 'drizzle-orm';
 import { evaluateSampling } from '@shared/forage';
 import type { FileStorage } from '../../server/adapters/storage/file-storage';
 import { hashPassword } from '../../server/features/auth/password';
 import { analysisColumns } from '../../server/features/lots/analysis-record';
-import { locateZip } from '../../server/features/geo/geo';
 import { renderPhotoVariants } from '../../server/features/photos/photo-variants';
 import { readLabReportPdf } from '../../server/features/uploads/report-reading';
+import { saveFarmProfile } from '../../server/features/farms/farms.service';
+import { FarmProfileInputSchema } from '@shared/contracts/selling';
 import type { Db } from '../../server/db/client';
-import { farms, labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../../server/db/schema';
+import { labAnalyses, lots, photos, samplingRecords, storedFiles, users } from '../../server/db/schema';
 import { drawDemoBalePhoto, mulberry32 } from './demo-photos';
 import { textPdf } from '../../server/adapters/pdf/text-pdf';
 import { labReportTableLines } from '../../server/adapters/pdf/lab-report-table';
@@ -41,30 +41,22 @@ export async function seedDemo({ db, storage, adminEmail, adminPassword, log = (
 
   await db.transaction(async (tx) => {
     for (const farm of DEMO_FARMS) {
-      const place = locateZip(farm.zip);
       const [owner] = await tx
         .insert(users)
         .values({ email: farm.ownerEmail, displayName: farm.ownerName, role: 'grower', passwordHash: growerHash, zip: farm.zip })
         .returning({ id: users.id });
-      const [row] = await tx
-        .insert(farms)
-        .values({
-          ownerId: owner!.id,
-          name: farm.name,
-          addressLine: farm.addressLine,
-          city: place.city,
-          state: place.state,
-          zip: farm.zip,
-          latitude: place.latitude,
-          longitude: place.longitude,
-          timeZone: timeZoneForState(place.state),
-          deliveryRadiusMi: farm.deliveryRadiusMi,
-          loadingFacilities: farm.loadingFacilities,
-          pickupHours: farm.pickupHours,
-          description: farm.description,
-        })
-        .returning({ id: farms.id });
-      farmIds.set(farm.key, row!.id);
+      // Through the farm service and the form's own contract, as a grower's profile is saved.
+      const profile = FarmProfileInputSchema.parse({
+        name: farm.name,
+        addressLine: farm.addressLine,
+        zip: farm.zip,
+        deliveryRadiusMi: farm.deliveryRadiusMi,
+        loadingFacilities: farm.loadingFacilities,
+        pickupHours: farm.pickupHours,
+        description: farm.description,
+      });
+      const row = await saveFarmProfile(tx as unknown as Db, owner!.id, profile);
+      farmIds.set(farm.key, row.id);
     }
     for (const buyer of DEMO_BUYERS) {
       await tx.insert(users).values({ email: buyer.email, displayName: buyer.name, role: 'buyer', passwordHash: buyerHash, zip: buyer.zip });

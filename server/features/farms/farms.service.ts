@@ -9,6 +9,23 @@ import { locateZip } from '../geo/geo';
 
 type FarmRow = typeof farms.$inferSelect;
 
+/**
+ * Creates the grower's farm or updates it: the ZIP code decides city, state and coordinates, and a new farm
+ * takes its state's main time zone unless one is given. The demo seed makes its farms through this too.
+ */
+export async function saveFarmProfile(db: Db, userId: number, input: FarmProfileInput): Promise<FarmRow> {
+  const place = locateZip(input.zip);
+  const columns = { ...input, city: place.city, state: place.state, latitude: place.latitude, longitude: place.longitude };
+  const [existing] = await db.select().from(farms).where(eq(farms.ownerId, userId)).orderBy(farms.id).limit(1);
+  if (existing) {
+    // A farm keeps its time zone unless the grower chooses another.
+    const [row] = await db.update(farms).set(columns).where(eq(farms.id, existing.id)).returning();
+    return row!;
+  }
+  const [row] = await db.insert(farms).values({ ownerId: userId, ...columns, timeZone: input.timeZone ?? timeZoneForState(place.state) }).returning();
+  return row!;
+}
+
 /** A grower's farm profile and payout account (a connected account at the payment provider). */
 export class FarmsService {
   constructor(
@@ -22,17 +39,8 @@ export class FarmsService {
   }
 
   /** Creates the farm or updates it; the ZIP code decides city, state and coordinates. */
-  async save(userId: number, input: FarmProfileInput): Promise<FarmRow> {
-    const place = locateZip(input.zip);
-    const columns = { ...input, city: place.city, state: place.state, latitude: place.latitude, longitude: place.longitude };
-    const existing = await this.mine(userId);
-    if (existing) {
-      // A farm keeps its time zone unless the grower chooses another.
-      const [row] = await this.db.update(farms).set(columns).where(eq(farms.id, existing.id)).returning();
-      return row!;
-    }
-    const [row] = await this.db.insert(farms).values({ ownerId: userId, ...columns, timeZone: input.timeZone ?? timeZoneForState(place.state) }).returning();
-    return row!;
+  save(userId: number, input: FarmProfileInput): Promise<FarmRow> {
+    return saveFarmProfile(this.db, userId, input);
   }
 
   /**
