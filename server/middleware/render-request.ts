@@ -1,7 +1,10 @@
 import type { IncomingMessage } from 'node:http';
 
+/** The visitor's address on the render request, as this server saw it; the renderer sends it to the API as X-Forwarded-For. */
+export const VISITOR_ADDRESS_HEADER = 'x-baleproof-visitor-address';
+
 /** Headers that name where a request came in (or claims to); the renderer takes none of them from the client. */
-const ORIGIN_HEADERS = new Set(['host', 'x-forwarded-host', 'x-forwarded-proto', 'x-forwarded-port', 'x-forwarded-for', 'forwarded']);
+const ORIGIN_HEADERS = new Set(['host', 'x-forwarded-host', 'x-forwarded-proto', 'x-forwarded-port', 'x-forwarded-for', 'forwarded', VISITOR_ADDRESS_HEADER]);
 
 /**
  * The request handed to Angular's server-side renderer, on the app's own loopback origin. The renderer
@@ -21,7 +24,8 @@ export function loopbackRenderRequest(req: IncomingMessage & { originalUrl?: str
   // The visitor's address as this server saw it (never a client-sent X-Forwarded-For): the renderer passes it
   // on to its own API calls, which trust loopback, so a lot view rendered here is counted for the visitor.
   const address = req.ip ?? req.socket?.remoteAddress;
-  if (address) headers.set('x-forwarded-for', address);
+  // (A header of our own: Angular warns about, and does not trust, X-Forwarded-* on the render request.)
+  if (address) headers.set(VISITOR_ADDRESS_HEADER, address);
   const path = req.originalUrl ?? req.url ?? '/';
   const method = req.method ?? 'GET';
   return new Request(`http://127.0.0.1:${port}${path.startsWith('/') ? path : `/${path}`}`, { method: method === 'HEAD' ? 'HEAD' : 'GET', headers });

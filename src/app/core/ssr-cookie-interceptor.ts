@@ -17,10 +17,11 @@ export const forwardCookiesOnServer: HttpInterceptorFn = (req, next) => {
   if (!incoming || !req.url.startsWith('/api/')) return next(req);
   // Who is asking (address as the server saw it, and browser), so the API counts a visitor's lot view as theirs.
   const visitor: Record<string, string> = {};
-  for (const name of ['user-agent', 'x-forwarded-for']) {
-    const value = incoming.headers.get(name);
-    if (value) visitor[name] = value;
-  }
+  const agent = incoming.headers.get('user-agent');
+  if (agent) visitor['user-agent'] = agent;
+  // Set by the server on the render request (server/middleware/render-request); the API trusts it from loopback.
+  const address = incoming.headers.get('x-baleproof-visitor-address');
+  if (address) visitor['x-forwarded-for'] = address;
   const cookie = incoming.headers.get('cookie');
   if (!cookie || (req.method === 'GET' && PUBLIC_READS.test(req.url))) return next(req.clone({ setHeaders: visitor }));
   return next(req.clone({ setHeaders: { ...visitor, cookie } }));
