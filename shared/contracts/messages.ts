@@ -1,10 +1,11 @@
 import { z } from 'zod';
 import { multiLineText } from './text';
+import { MESSAGE_MAX_CHARS } from './message-limits';
 
 /** POST a message: plain text over several lines, up to 2,000 characters, no control characters. */
 export const MessageCreateSchema = z
   .object({
-    body: multiLineText('Message', 2000, { min: 1, minMessage: 'Write a message first.' }),
+    body: multiLineText('Message', MESSAGE_MAX_CHARS, { min: 1, minMessage: 'Write a message first.' }),
   })
   .strict();
 export type MessageCreate = z.input<typeof MessageCreateSchema>;

@@ -156,15 +156,16 @@ describe('planner API', () => {
       // Tons bought = kg DM ÷ k, with k = 907.2 kg × 90 % DM × (1 − 1.3 % waste).
       const k = KG_PER_SHORT_TON * 0.9 * 0.987;
       // The buyer buys whole 60 lb bales: bales = ⌈tons × 2,000 / 60⌉, weighing bales × 60 / 2,000 t (domain brief §11).
-      const bales = (kgDm: number) => Math.ceil(((kgDm / k) * 2000) / 60);
+      const LB_PER_SHORT_TON = 2000; // NIST Handbook 44, Appendix C
+      const bales = (kgDm: number) => Math.ceil(((kgDm / k) * LB_PER_SHORT_TON) / 60);
       const line = (id: number) => body.lines.find((l: { lotId: number }) => l.lotId === id);
       expect(body.plan.feasible).toBe(true);
       expect(line(grass).bales).toBe(bales(710.156));
       expect(line(alfalfa).bales).toBe(bales(101.953));
-      expect(line(grass).tons).toBeCloseTo((bales(710.156) * 60) / 2000, 9);
+      expect(line(grass).tons).toBeCloseTo((bales(710.156) * 60) / LB_PER_SHORT_TON, 9);
       // Same ZIP: no freight miles, so the cost is the hay alone: the bales' weight × $150/t.
       expect(line(grass).freightCents).toBe(0);
-      expect(line(grass).hayCents).toBe(Math.round(((bales(710.156) * 60) / 2000) * 15000));
+      expect(line(grass).hayCents).toBe(Math.round(((bales(710.156) * 60) / LB_PER_SHORT_TON) * 15000));
       expect(body.plan.totalCostCents).toBe(body.lines.reduce((s: number, l: { costCents: number }) => s + l.costCents, 0));
       expect(body.plan.explanation.join(' ')).toMatch(/mixed in for protein/);
       // Lots are named by their titles, not by number.

@@ -3,6 +3,7 @@ import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
+import { MESSAGE_MAX_CHARS } from '@shared/contracts/message-limits';
 
 /** A box to write a message in; the page sends it and clears it through `sent()`. */
 @Component({
@@ -12,8 +13,8 @@ import { MatInput } from '@angular/material/input';
     <form (ngSubmit)="send()">
       <mat-form-field appearance="outline" class="full">
         <mat-label>{{ label() }}</mat-label>
-        <textarea matInput name="body" rows="3" maxlength="2000" [ngModel]="body()" (ngModelChange)="body.set($event)"></textarea>
-        <mat-hint align="end">{{ body().length }} / 2000</mat-hint>
+        <textarea matInput name="body" rows="3" [attr.maxlength]="maxChars" [ngModel]="body()" (ngModelChange)="body.set($event)"></textarea>
+        <mat-hint align="end">{{ body().length }} of {{ maxChars }}</mat-hint>
       </mat-form-field>
       <button mat-flat-button type="submit" [disabled]="busy() || body().trim() === ''">{{ action() }}</button>
     </form>
@@ -27,6 +28,7 @@ export class MessageComposer {
   readonly busy = input(false);
   readonly write = output<string>();
   protected readonly body = signal('');
+  protected readonly maxChars = MESSAGE_MAX_CHARS;
 
   protected send(): void {
     const text = this.body().trim();
