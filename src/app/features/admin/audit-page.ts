@@ -1,5 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
-import { JsonPipe } from '@angular/common';
+import { DatePipe, JsonPipe } from '@angular/common';
 import { firstValueFrom } from 'rxjs';
 import type { AuditRow } from '@shared/contracts/admin';
 import { apiErrorMessage } from '../../core/api-error';
@@ -9,7 +9,7 @@ import { AdminTabs } from './admin-tabs';
 /** The audit trail, newest first: who did what, when, and what changed. It can be added to, never edited. */
 @Component({
   selector: 'app-audit-page',
-  imports: [AdminTabs, JsonPipe],
+  imports: [AdminTabs, DatePipe, JsonPipe],
   template: `
     <div class="bp-page">
       <app-admin-tabs />
@@ -19,7 +19,7 @@ import { AdminTabs } from './admin-tabs';
         <thead><tr><th scope="col">When (UTC)</th><th scope="col">What</th><th scope="col">Who</th><th scope="col">On</th><th scope="col">Changed (from → to)</th><th scope="col">Details</th></tr></thead>
         <tbody>
           @for (r of rows(); track r.id) {
-            <tr><td>{{ r.at.slice(0, 16).replace('T', ' ') }}</td><td>{{ r.label }}</td><td>{{ r.by }}</td><td>{{ r.entityType }} {{ r.entityId }}</td>
+            <tr><td><time [attr.datetime]="r.at">{{ r.at | date: 'medium' : 'UTC' }}</time></td><td>{{ r.label }}</td><td>{{ r.by }}</td><td>{{ r.entityType }} {{ r.entityId }}</td>
               <td>@for (c of r.changes; track c.field) { <div>{{ c.label }}: {{ c.from }} → {{ c.to }}</div> }</td><td><code>{{ r.data | json }}</code></td></tr>
           }
         </tbody>

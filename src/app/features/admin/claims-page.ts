@@ -3,7 +3,9 @@ import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { firstValueFrom } from 'rxjs';
 import type { ClaimView, ResolveClaim } from '@shared/contracts/claims';
-import { formatCents, dollarsToCents } from '@shared/units/money';
+import { DatePipe } from '@angular/common';
+import { dollarsToCents } from '@shared/units/money';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { apiErrorMessage } from '../../core/api-error';
 import { AdminApi } from './admin-api';
 import { RetestTable } from '../../shared/ui/retest-table';
@@ -15,7 +17,7 @@ import { AdminTabs } from './admin-tabs';
  */
 @Component({
   selector: 'app-claims-page',
-  imports: [AdminTabs, FormsModule, MatButton, RetestTable],
+  imports: [AdminTabs, FormsModule, MatButton, RetestTable, DatePipe, MoneyPipe],
   templateUrl: './claims-page.html',
   styleUrl: './admin-tables.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -26,7 +28,6 @@ export class ClaimsPage {
   protected readonly error = signal('');
   protected readonly busy = signal(false);
   protected readonly confirming = signal<{ claim: ClaimView; decision: ResolveClaim } | null>(null);
-  protected readonly money = (cents: number) => formatCents(cents);
   protected outcome: Record<number, 'reject' | 'partial' | 'full'> = {};
   protected refund: Record<number, number | null> = {};
   protected note: Record<number, string> = {};

@@ -2,7 +2,8 @@ import { afterNextRender, ChangeDetectionStrategy, Component, ElementRef, inject
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import type { AdminOverview } from '@shared/contracts/admin';
-import { formatCents } from '@shared/units/money';
+import { DatePipe, DecimalPipe } from '@angular/common';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
 import { apiErrorMessage } from '../../core/api-error';
 import { AdminApi } from './admin-api';
 import { AdminTabs } from './admin-tabs';
@@ -10,7 +11,7 @@ import { AdminTabs } from './admin-tabs';
 /** The admin's first look: sales and orders per week, and what is waiting on an admin. */
 @Component({
   selector: 'app-overview-page',
-  imports: [RouterLink, AdminTabs],
+  imports: [RouterLink, AdminTabs, DatePipe, DecimalPipe, MoneyPipe],
   template: `
     <div class="bp-page">
       <app-admin-tabs />
@@ -19,12 +20,12 @@ import { AdminTabs } from './admin-tabs';
       @if (data(); as d) {
         <ul class="cards" aria-label="Waiting on an admin">
           <li><a routerLink="/admin"><strong>{{ d.lotsWaiting }}</strong> lot{{ d.lotsWaiting === 1 ? '' : 's' }} waiting for review</a></li>
-          <li><a routerLink="/admin/payouts"><strong>{{ money(d.payoutsDue.totalCents) }}</strong> due to {{ d.payoutsDue.growers }} grower{{ d.payoutsDue.growers === 1 ? '' : 's' }}@if (d.payoutsDue.held > 0) { ({{ d.payoutsDue.held }} held) }</a></li>
+          <li><a routerLink="/admin/payouts"><strong>{{ d.payoutsDue.totalCents | money: 0 }}</strong> due to {{ d.payoutsDue.growers }} grower{{ d.payoutsDue.growers === 1 ? '' : 's' }}@if (d.payoutsDue.held > 0) { ({{ d.payoutsDue.held }} held) }</a></li>
           <li><a routerLink="/admin/claims"><strong>{{ d.openClaims }}</strong> open claim{{ d.openClaims === 1 ? '' : 's' }}</a></li>
         </ul>
         <table class="bp-num weeks" aria-label="Sales and orders per week">
           <thead><tr><th scope="col">Week of</th><th scope="col">Paid orders</th><th scope="col">Sales (less refunds)</th></tr></thead>
-          <tbody>@for (w of d.weeks; track w.weekStart) { <tr><th scope="row">{{ w.weekStart }}</th><td>{{ w.orders }}</td><td>{{ money(w.salesCents) }}</td></tr> }</tbody>
+          <tbody>@for (w of d.weeks; track w.weekStart) { <tr><th scope="row">{{ w.weekStart | date: 'mediumDate' : 'UTC' }}</th><td>{{ w.orders | number }}</td><td>{{ w.salesCents | money: 0 }}</td></tr> }</tbody>
         </table>
       } @else if (!error()) { <p>Loading…</p> }
       <h2 [hidden]="!data()">Sales and orders per week</h2>
@@ -47,7 +48,6 @@ export class OverviewPage {
   private readonly canvas = viewChild<ElementRef<HTMLCanvasElement>>('chart');
   protected readonly data = signal<AdminOverview | null>(null);
   protected readonly error = signal('');
-  protected readonly money = (cents: number) => formatCents(cents, { showCents: false });
 
   constructor() {
     // The chart is drawn in the browser only (chart.js needs a canvas); the table carries the same figures for SSR and screen readers.

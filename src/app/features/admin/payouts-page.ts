@@ -3,10 +3,11 @@ import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { firstValueFrom } from 'rxjs';
 import type { BatchView, GrowerPayoutDue } from '@shared/contracts/payouts';
-import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { AdminApi } from './admin-api';
 import { AdminTabs } from './admin-tabs';
+import { DatePipe } from '@angular/common';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
 
 /**
  * Payouts: what each grower is owed (orders, amounts, refunds deducted), a batch made from the growers the
@@ -15,7 +16,7 @@ import { AdminTabs } from './admin-tabs';
  */
 @Component({
   selector: 'app-payouts-page',
-  imports: [AdminTabs, MatButton, MatCheckbox],
+  imports: [AdminTabs, MatButton, MatCheckbox, DatePipe, MoneyPipe],
   templateUrl: './payouts-page.html',
   styleUrl: './admin-tables.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -28,7 +29,6 @@ export class PayoutsPage {
   protected readonly busy = signal(false);
   protected readonly error = signal('');
   protected readonly confirming = signal<BatchView | null>(null);
-  protected readonly money = (cents: number) => formatCents(cents);
   protected readonly chosenTotal = computed(() => this.due().filter((g) => this.chosen().has(g.farmId)).reduce((s, g) => s + g.totalCents, 0));
   private requestKey = crypto.randomUUID();
 

@@ -1,5 +1,6 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
+import { DatePipe } from '@angular/common';
 import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { catchError, map, of } from 'rxjs';
@@ -13,7 +14,7 @@ type QueueState = { status: 'loading' } | { status: 'ok'; items: ReviewQueueRow[
 /** Lots waiting for an admin to check their lab report, oldest first. */
 @Component({
   selector: 'app-review-queue-page',
-  imports: [RouterLink, MatIcon, AdminTabs],
+  imports: [RouterLink, MatIcon, AdminTabs, DatePipe],
   template: `
     <div class="bp-page">
       <app-admin-tabs />
@@ -28,7 +29,7 @@ type QueueState = { status: 'loading' } | { status: 'ok'; items: ReviewQueueRow[
             @for (row of items(); track row.id) {
               <li>
                 <a [routerLink]="['/admin/lots', row.id]" class="title">{{ row.title }}</a>
-                <span class="meta">{{ row.farmName }} · {{ row.growerEmail }} · submitted {{ row.submittedAt.slice(0, 16).replace('T', ' ') }}</span>
+                <span class="meta">{{ row.farmName }} · {{ row.growerEmail }} · submitted {{ row.submittedAt | date: 'medium' : 'UTC' }} UTC</span>
                 <span class="meta">{{ row.labName ?? 'no lab' }}{{ row.labCertified ? ' (certified)' : row.labCertified === false ? ' (not certified)' : '' }}
                   @if (row.errorFindings > 0) { · <mat-icon inline class="err">error</mat-icon> {{ row.errorFindings }} {{ row.errorFindings === 1 ? 'problem' : 'problems' }} }
                   @if (row.warningFindings > 0) { · <mat-icon inline class="warn">warning</mat-icon> {{ row.warningFindings }} {{ row.warningFindings === 1 ? 'point to check' : 'points to check' }} }

@@ -1,4 +1,5 @@
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
+import { DatePipe } from '@angular/common';
 import { FormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { firstValueFrom, type Observable } from 'rxjs';
@@ -13,7 +14,7 @@ type Pending = { user: AdminUserRow; action: 'suspend' | 'reinstate' | 'role'; r
 /** Users: search, change a role, suspend (signs them out everywhere at once) and reinstate, each with a reason. */
 @Component({
   selector: 'app-users-page',
-  imports: [AdminTabs, FormsModule, MatButton],
+  imports: [AdminTabs, DatePipe, FormsModule, MatButton],
   template: `
     <div class="bp-page">
       <app-admin-tabs />
@@ -29,8 +30,8 @@ type Pending = { user: AdminUserRow; action: 'suspend' | 'reinstate' | 'role'; r
         <tbody>
           @for (u of users(); track u.id) {
             <tr>
-              <td>{{ u.displayName }}</td><td>{{ u.email }}</td><td>{{ u.role }}</td><td>{{ u.createdAt.slice(0, 10) }}</td>
-              <td>{{ u.suspendedAt ? 'suspended ' + u.suspendedAt.slice(0, 10) + ': ' + u.suspendedReason : 'active' }}</td>
+              <td>{{ u.displayName }}</td><td>{{ u.email }}</td><td>{{ u.role }}</td><td>{{ u.createdAt | date: 'mediumDate' : 'UTC' }}</td>
+              <td>{{ u.suspendedAt ? 'suspended ' + (u.suspendedAt | date: 'mediumDate' : 'UTC') + ': ' + u.suspendedReason : 'active' }}</td>
               <td class="row">
                 <select [attr.aria-label]="'New role for ' + u.email" #r (change)="pending.set({ user: u, action: 'role', role: $any(r.value) })">
                   @for (x of roles; track x) { <option [value]="x" [selected]="x === u.role">{{ x }}</option> }

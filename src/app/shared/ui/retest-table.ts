@@ -1,3 +1,4 @@
+import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
 import type { RetestJudgement } from '@shared/claims/judge-retest';
 
@@ -8,14 +9,15 @@ import type { RetestJudgement } from '@shared/claims/judge-retest';
  */
 @Component({
   selector: 'app-retest-table',
+  imports: [DecimalPipe],
   template: `
     <table [attr.aria-label]="label()">
       <thead><tr><th scope="col">Nutrient</th><th scope="col" class="n">Listed</th><th scope="col" class="n">Retest</th><th scope="col" class="n">Difference</th><th scope="col" class="n">Tolerance</th><th scope="col">Unit</th></tr></thead>
       <tbody>
         @for (n of judgement().nutrients; track n.field) {
-          <tr [class.outside]="n.outside"><th scope="row">{{ n.label }}</th><td class="n">{{ n.listed ?? '—' }}</td><td class="n">{{ n.retest?.toFixed(1) ?? '—' }}</td><td class="n">{{ n.difference ?? '—' }}</td><td class="n">±{{ n.tolerance }}</td><td>{{ n.unit }}{{ n.outside ? ' — beyond tolerance' : '' }}</td></tr>
+          <tr [class.outside]="n.outside"><th scope="row">{{ n.label }}</th><td class="n">{{ (n.listed | number: '1.0-2') ?? '—' }}</td><td class="n">{{ (n.retest | number: '1.1-1') ?? '—' }}</td><td class="n">{{ (n.difference | number: '1.0-2') ?? '—' }}</td><td class="n">±{{ n.tolerance | number: '1.0-2' }}</td><td>{{ n.unit }}{{ n.outside ? ' — beyond tolerance' : '' }}</td></tr>
         }
-        <tr><th scope="row">RFV / USDA grade</th><td class="n">{{ judgement().listed.rfv }} · {{ judgement().listed.usdaGrade }}</td><td class="n">{{ judgement().retest.rfv }} · {{ judgement().retest.usdaGrade }}</td><td colspan="3">{{ judgement().gradeChanged ? 'the retest gives another grade' : 'same grade' }}</td></tr>
+        <tr><th scope="row">RFV / USDA grade</th><td class="n">{{ judgement().listed.rfv | number: '1.0-0' }} · {{ judgement().listed.usdaGrade }}</td><td class="n">{{ judgement().retest.rfv | number: '1.0-0' }} · {{ judgement().retest.usdaGrade }}</td><td colspan="3">{{ judgement().gradeChanged ? 'the retest gives another grade' : 'same grade' }}</td></tr>
       </tbody>
     </table>
   `,

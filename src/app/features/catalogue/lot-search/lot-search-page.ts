@@ -1,3 +1,4 @@
+import { DecimalPipe } from '@angular/common';
 import { afterNextRender, ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
@@ -24,7 +25,7 @@ import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, queryFromForm, S
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
   selector: 'app-lot-search-page',
-  imports: [ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar, LotMap],
+  imports: [DecimalPipe, ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar, LotMap],
   templateUrl: './lot-search-page.html',
   styleUrl: './lot-search-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,9 +4,10 @@ import { MatButton } from '@angular/material/button';
 import { firstValueFrom, map, merge, Subject, switchMap } from 'rxjs';
 import type { ClaimView } from '@shared/contracts/claims';
 import type { OrderView } from '@shared/contracts/orders';
-import { formatCents } from '@shared/units/money';
+import { DatePipe } from '@angular/common';
 import { apiErrorMessage } from '../../../core/api-error';
 import { requestState, valueOf, type RequestState } from '../../../core/request-state';
+import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { RetestTable } from '../../../shared/ui/retest-table';
 import { claimRequest, emptyClaimDraft, missingInDraft, RETEST_FIELDS, type ClaimDraft } from './claim-form';
 import { ClaimsApi } from './claims-api';
@@ -17,7 +18,7 @@ import { ClaimsApi } from './claims-api';
  */
 @Component({
   selector: 'app-claim-panel',
-  imports: [MatButton, RetestTable],
+  imports: [MatButton, RetestTable, DatePipe, MoneyPipe],
   templateUrl: './claim-panel.html',
   styleUrl: './claim-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,7 +43,6 @@ export class ClaimPanel {
   protected readonly busy = signal(false);
   protected readonly error = signal('');
   protected readonly fields = RETEST_FIELDS;
-  protected readonly money = formatCents;
 
   protected edit<K extends keyof ClaimDraft>(key: K, value: ClaimDraft[K]): void {
     this.draft.update((d) => ({ ...d, [key]: value }));

@@ -2,11 +2,13 @@ import { HttpClient } from '@angular/common/http';
 import { ChangeDetectionStrategy, Component, inject, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
 import type { PayoutView } from '@shared/contracts/payouts';
-import { formatCents } from '@shared/units/money';
+import { DatePipe } from '@angular/common';
+import { MoneyPipe } from '../../../shared/ui/money-pipe';
 
 /** The grower's payouts, newest first, with what each paid for and a CSV statement. */
 @Component({
   selector: 'app-payout-history',
+  imports: [DatePipe, MoneyPipe],
   template: `
     <section aria-labelledby="payouts-title">
       <h2 id="payouts-title">Payouts</h2>
@@ -17,8 +19,8 @@ import { formatCents } from '@shared/units/money';
           <thead><tr><th scope="col">Payout</th><th scope="col">State</th><th scope="col">Sent</th><th scope="col">Orders</th><th scope="col" class="n">Amount</th></tr></thead>
           <tbody>
             @for (p of items(); track p.id) {
-              <tr><td>{{ p.id }}</td><td>{{ p.statusLabel }}@if (p.heldReason) { — {{ p.heldReason }}}</td><td>{{ p.sentAt?.slice(0, 10) ?? '—' }}</td>
-                <td>{{ orders(p) }}</td><td class="n">{{ money(p.amountCents) }}</td></tr>
+              <tr><td>{{ p.id }}</td><td>{{ p.statusLabel }}@if (p.heldReason) { — {{ p.heldReason }}}</td><td>{{ (p.sentAt | date: 'mediumDate' : 'UTC') ?? '—' }}</td>
+                <td>{{ orders(p) }}</td><td class="n">{{ p.amountCents | money }}</td></tr>
             }
           </tbody>
         </table>
@@ -36,7 +38,6 @@ import { formatCents } from '@shared/units/money';
 export class PayoutHistory {
   private readonly http = inject(HttpClient);
   protected readonly items = signal<PayoutView[]>([]);
-  protected readonly money = (cents: number) => formatCents(cents);
 
   constructor() {
     firstValueFrom(this.http.get<{ items: PayoutView[] }>('/api/payouts/mine')).then(
