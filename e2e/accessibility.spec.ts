@@ -1,6 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import { expect, test, type Page } from './support/test';
 import { ADMIN, BUYER, GROWER, listedLotIds, signInAs } from './support/accounts';
+import { demoOrderWithMessage, type DemoOrder } from './support/demo-order';
 
 /**
  * axe-core as an outside judge of every main page: no violation rated serious or critical (WCAG 2.1 A/AA rules).
@@ -16,7 +17,8 @@ async function expectNoSeriousViolations(page: Page, path: string): Promise<void
   expect(serious, path).toEqual([]);
 }
 
-const PAGES: { who: string; account?: { email: string; password: string }; path: (ids: number[]) => string }[] = [
+/** A page to judge; `order` pages need the shared demo order (made on first use). */
+const PAGES: { who: string; account?: { email: string; password: string }; order?: true; path: (ids: number[], order: DemoOrder) => string }[] = [
   { who: 'visitor', path: () => '/' },
   { who: 'visitor', path: () => '/hay' },
   { who: 'visitor', path: ([a]) => `/hay/${a}` },
@@ -30,17 +32,26 @@ const PAGES: { who: string; account?: { email: string; password: string }; path:
   { who: 'grower', account: GROWER, path: () => '/selling/lots/new' },
   { who: 'grower', account: GROWER, path: () => '/selling/farm' },
   { who: 'admin', account: ADMIN, path: () => '/admin' },
+  { who: 'buyer', account: BUYER, path: () => '/orders' },
+  { who: 'buyer', account: BUYER, order: true, path: (_, o) => `/orders/${o.orderId}` },
+  { who: 'buyer', account: BUYER, order: true, path: (_, o) => `/messages/${o.threadId}` },
+  { who: 'grower', account: GROWER, path: () => '/orders' },
+  { who: 'grower', account: GROWER, order: true, path: (_, o) => `/orders/${o.orderId}` },
+  { who: 'grower', account: GROWER, path: () => '/selling/calendar' },
+  { who: 'grower', account: GROWER, path: () => '/messages' },
+  { who: 'admin', account: ADMIN, path: () => '/admin/claims' },
 ];
 
 for (const viewport of [{ width: 1366, height: 900 }, { width: 390, height: 844 }]) {
   test.describe(`axe-core at ${viewport.width} px`, () => {
     test.use({ viewport });
     for (const p of PAGES) {
-      test(`${p.who}: ${p.path([1, 2]).replace(/\d+/g, ':id')}`, async ({ page }) => {
-        test.setTimeout(120_000);
+      test(`${p.who}: ${p.path([1, 2], { orderId: 1, threadId: 1 }).replace(/\d+/g, ':id')}`, async ({ page, browser }) => {
+        test.setTimeout(180_000);
         const ids = await listedLotIds(page, 2);
+        const order = p.order ? await demoOrderWithMessage(browser) : { orderId: 0, threadId: 0 };
         if (p.account) await signInAs(page, p.account);
-        await expectNoSeriousViolations(page, p.path(ids));
+        await expectNoSeriousViolations(page, p.path(ids, order));
       });
     }
   });

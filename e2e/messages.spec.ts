@@ -1,5 +1,7 @@
 import { expect, freshPage, test } from './support/test';
-import { BUYER, GROWER, signInAs } from './support/accounts';
+import { BUYER, GROWER, signInAs, threeRoles } from './support/accounts';
+import { waitForMail } from './support/mail-catcher';
+import { paidPickupOrder } from './support/orders';
 
 test('a buyer asks the grower about a lot from its page; the grower reads it in the inbox and answers', async ({ browser }) => {
   test.setTimeout(120_000);
@@ -28,4 +30,45 @@ test('a buyer asks the grower about a lot from its page; the grower reads it in 
 
   await buyerPage.reload();
   await expect(buyerPage.getByRole('region', { name: 'Ask the grower' })).toContainText('53 ft trailer');
+});
+
+test('buyer and grower write about a paid order on its page; each is told by e-mail; an admin reads along', async ({ browser }) => {
+  test.setTimeout(180_000);
+  const { buyer, grower, admin } = await threeRoles(browser);
+  const order = await paidPickupOrder(buyer, grower);
+  const question = `Can I come at 7 in the morning? (${Date.now().toString(36)})`;
+
+  await buyer.goto(`/orders/${order.id}`);
+  const buyerBox = buyer.getByRole('region', { name: 'Messages about this order' });
+  await buyerBox.getByLabel('Write to the grower').fill(question);
+  await buyerBox.getByRole('button', { name: 'Send' }).click();
+  await expect(buyerBox.getByRole('list', { name: 'Messages' })).toContainText(question);
+
+  // The grower's notice, as the mail catcher received it over SMTP, leads to the order's page.
+  const notice = await waitForMail(GROWER.email, `The buyer wrote about order ${order.id}`);
+  expect(notice.text).toContain(question);
+  const link = /(https?:\/\/\S+\/orders\/\d+#messages)/.exec(notice.text)![1]!;
+  expect(new URL(link).pathname).toBe(`/orders/${order.id}`);
+
+  // The grower finds it from the inbox, with its unread count, and answers on the order's page.
+  await grower.goto('/messages');
+  const entry = grower.getByRole('list', { name: 'Conversations' }).getByRole('link').filter({ hasText: `Order ${order.id}` });
+  await expect(entry).toContainText('1 new');
+  await grower.goto(`/orders/${order.id}`);
+  const growerBox = grower.getByRole('region', { name: 'Messages about this order' });
+  await expect(growerBox.getByRole('list', { name: 'Messages' })).toContainText(question);
+  await growerBox.getByLabel('Write to the buyer').fill('Yes, 7 is fine; the gate is open from 6.');
+  await growerBox.getByRole('button', { name: 'Send' }).click();
+  await expect(growerBox.getByRole('list', { name: 'Messages' })).toContainText('gate is open from 6');
+
+  const answer = await waitForMail(BUYER.email, `The grower wrote about order ${order.id}`);
+  expect(answer.text).toContain('gate is open from 6');
+  await buyer.reload();
+  await expect(buyer.getByRole('region', { name: 'Messages about this order' }).getByRole('list', { name: 'Messages' })).toContainText('gate is open from 6');
+
+  // An admin reads the conversation on the order page but has nowhere to write.
+  await admin.goto(`/orders/${order.id}`);
+  const adminBox = admin.getByRole('region', { name: 'Messages about this order' });
+  await expect(adminBox.getByRole('list', { name: 'Messages' })).toContainText(question);
+  await expect(adminBox.getByRole('textbox')).toHaveCount(0);
 });

@@ -1,5 +1,6 @@
 import { expect, test, type Page } from './support/test';
-import { GROWER, listedLotIds, signInAs } from './support/accounts';
+import { ADMIN, BUYER, GROWER, listedLotIds, signInAs } from './support/accounts';
+import { demoOrderWithMessage } from './support/demo-order';
 
 // A 390 px wide phone (a common current handset width in CSS pixels — common practice).
 test.use({ viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true });
@@ -52,5 +53,26 @@ test.describe('on a 390 px phone', () => {
     await signInAs(page, GROWER);
     for (const path of ['/selling', '/selling/lots/new']) await expectNoSidewaysScroll(page, path);
     await expect(page.getByRole('button', { name: /Account menu/ })).toBeInViewport({ ratio: 1 });
+  });
+
+  test('a buyer’s orders, an order with its messages and the inbox fit the screen', async ({ page, browser }) => {
+    test.setTimeout(180_000);
+    const { orderId, threadId } = await demoOrderWithMessage(browser);
+    await signInAs(page, BUYER);
+    for (const path of ['/orders', `/orders/${orderId}`, '/messages', `/messages/${threadId}`]) await expectNoSidewaysScroll(page, path);
+  });
+
+  test('a grower’s incoming orders, an order, the delivery calendar and the inbox fit the screen', async ({ page, browser }) => {
+    test.setTimeout(180_000);
+    const { orderId, threadId } = await demoOrderWithMessage(browser);
+    await signInAs(page, GROWER);
+    for (const path of ['/orders', `/orders/${orderId}`, '/selling/calendar', '/messages', `/messages/${threadId}`]) await expectNoSidewaysScroll(page, path);
+  });
+
+  test('the admin’s claim screen and an order fit the screen', async ({ page, browser }) => {
+    test.setTimeout(180_000);
+    const { orderId } = await demoOrderWithMessage(browser);
+    await signInAs(page, ADMIN);
+    for (const path of ['/admin/claims', `/orders/${orderId}`]) await expectNoSidewaysScroll(page, path);
   });
 });

@@ -8,10 +8,9 @@ const PAYING_CARD = '4242 4242 4242 4242';
 
 /**
  * A pickup order of one of the signed-in grower's listed lots, bought by the signed-in buyer at the lot's
- * smallest order, paid on the payment provider's page, its date confirmed and the load handed over by the
- * grower. Returns the order as the buyer sees it, `delivered` and waiting for the buyer.
+ * smallest order and paid on the payment provider's page. Returns the order as the buyer sees it, `paid`.
  */
-export async function deliveredPickupOrder(buyer: Page, grower: Page): Promise<OrderView> {
+export async function paidPickupOrder(buyer: Page, grower: Page): Promise<OrderView> {
   const rows = await callApi<{ items: SellerLotRow[] } | SellerLotRow[]>(grower, 'GET', '/api/selling/lots');
   const listed = (Array.isArray(rows) ? rows : rows.items).filter((l) => l.status === 'listed');
   let chosen: { lotId: number; bales: number } | null = null;
@@ -39,9 +38,17 @@ export async function deliveredPickupOrder(buyer: Page, grower: Page): Promise<O
   await expect(buyer).toHaveURL(new RegExp(`/orders/${placed.id}\\?paid=1`));
   // The payment is recorded when the provider's webhook arrives.
   await expect.poll(async () => (await callApi<OrderView>(buyer, 'GET', `/api/orders/${placed.id}`)).status, { timeout: 30_000 }).toBe('paid');
-
-  await callApi(grower, 'POST', `/api/orders/${placed.id}/confirm-date`, {});
-  const delivered = await callApi<OrderView>(grower, 'POST', `/api/orders/${placed.id}/hand-over`, {});
-  expect(delivered.status).toBe('delivered');
   return callApi<OrderView>(buyer, 'GET', `/api/orders/${placed.id}`);
+}
+
+/**
+ * A paid pickup order (see paidPickupOrder) whose date the grower confirmed and whose load the grower handed
+ * over. Returns the order as the buyer sees it, `delivered` and waiting for the buyer.
+ */
+export async function deliveredPickupOrder(buyer: Page, grower: Page): Promise<OrderView> {
+  const paid = await paidPickupOrder(buyer, grower);
+  await callApi(grower, 'POST', `/api/orders/${paid.id}/confirm-date`, {});
+  const delivered = await callApi<OrderView>(grower, 'POST', `/api/orders/${paid.id}/hand-over`, {});
+  expect(delivered.status).toBe('delivered');
+  return callApi<OrderView>(buyer, 'GET', `/api/orders/${paid.id}`);
 }

@@ -1,9 +1,9 @@
 import { HttpClient } from '@angular/common/http';
 import { inject, Injectable } from '@angular/core';
 import { map, Observable } from 'rxjs';
-import type { ThreadDetail, ThreadView } from '@shared/contracts/messages';
+import type { OrderThread, ThreadDetail, ThreadView } from '@shared/contracts/messages';
 
-/** Messages' door to the API (signed-in buyers and growers). */
+/** Messages' door to the API (signed-in buyers and growers; admins read an order's). */
 @Injectable({ providedIn: 'root' })
 export class MessagesApi {
   private readonly http = inject(HttpClient);
@@ -26,5 +26,13 @@ export class MessagesApi {
 
   writeAboutLot(lotId: number, body: string): Observable<ThreadDetail> {
     return this.http.post<ThreadDetail>(`/api/messages/lots/${lotId}`, { body });
+  }
+
+  aboutOrder(orderId: number): Observable<OrderThread> {
+    return this.http.get<OrderThread>(`/api/messages/orders/${orderId}`);
+  }
+
+  writeAboutOrder(orderId: number, body: string): Observable<OrderThread> {
+    return this.http.post<OrderThread>(`/api/messages/orders/${orderId}`, { body });
   }
 }

@@ -11,13 +11,14 @@ import { farmDateLabel, farmTimeLabel } from '@shared/time/farm-time';
 import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
+import { OrderThread } from '../messages/order-thread';
 import { ClaimPanel } from './claims/claim-panel';
 import { OrdersApi } from './orders-api';
 
 /** One order: figures, the agreed date, what happened when (timeline), the steps open to the viewer, a printable receipt. */
 @Component({
   selector: 'app-order-page',
-  imports: [RouterLink, MatButton, ClaimPanel],
+  imports: [RouterLink, MatButton, ClaimPanel, OrderThread],
   templateUrl: './order-page.html',
   styleUrl: './order-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
