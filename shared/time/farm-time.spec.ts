@@ -1,4 +1,4 @@
-import { farmDay, farmInstant, farmTimeLabel, farmWindowLabel, isTimeZone, nextDay, timeZoneForState } from './farm-time';
+import { farmDateLabel, farmDay, farmInstant, farmTimeLabel, farmWindowLabel, isTimeZone, nextDay, timeZoneForState } from './farm-time';
 
 // Offsets from the IANA tz database (US rules since 2007: daylight time from the 2nd Sunday in March to the
 // 1st Sunday in November); Arizona keeps standard time all year.
@@ -39,5 +39,14 @@ describe('farm time', () => {
     expect(timeZoneForState('KS')).toBe('America/Chicago');
     expect(timeZoneForState('az')).toBe('America/Phoenix');
     expect(isTimeZone(timeZoneForState('ZZ'))).toBe(true);
+  });
+
+  it('writes the farm’s day in the reader’s language: US English as "Thu, Sep 17, 2026" (ECMA-402 en-US, the pattern MDN shows for these options), day before month in French', () => {
+    // 03:00 UTC on the 18th is still the evening of the 17th on a Central-time farm (CDT, UTC−5).
+    const evening = '2026-09-18T03:00:00.000Z';
+    expect(farmDateLabel(evening, 'America/Chicago')).toBe('Thu, Sep 17, 2026');
+    const french = farmDateLabel(evening, 'America/Chicago', 'fr-CA');
+    expect(french).toMatch(/^jeu\.? 17 sept\.? 2026$/);
+    expect(farmTimeLabel(evening, 'America/Chicago', 'fr-CA')).toMatch(/^22 h 00 HAC$|^22:00 HAC$|^22 h 00 UTC−5$/);
   });
 });

@@ -93,14 +93,14 @@ export function nextDay(date: string, days = 1): string {
   return plusCalendarDays(date, days);
 }
 
-/** "Thu 17 Sep 2026" in the farm's zone. */
-export function farmDateLabel(instant: Date | string, zone: string): string {
-  return new Intl.DateTimeFormat('en-US', { timeZone: zone, weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(instant));
+/** "Thu, Sep 17, 2026" in the farm's zone, written the reader's way (`locale`, default US English; "jeu. 17 sept. 2026" in fr-CA). */
+export function farmDateLabel(instant: Date | string, zone: string, locale = 'en-US'): string {
+  return new Intl.DateTimeFormat(locale, { timeZone: zone, weekday: 'short', day: 'numeric', month: 'short', year: 'numeric' }).format(new Date(instant));
 }
 
-/** "09:00 CDT" in the farm's zone: the farm's clock, with its zone named. */
-export function farmTimeLabel(instant: Date | string, zone: string): string {
-  return new Intl.DateTimeFormat('en-US', { timeZone: zone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' }).format(new Date(instant));
+/** "09:00 CDT" in the farm's zone: the farm's clock, with its zone named (24-hour, in the reader's `locale`). */
+export function farmTimeLabel(instant: Date | string, zone: string, locale = 'en-US'): string {
+  return new Intl.DateTimeFormat(locale, { timeZone: zone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZoneName: 'short' }).format(new Date(instant));
 }
 
 /** A delivery day or pickup appointment in words, in the farm's time: "Thu, Sep 17, 2026, 09:00–10:00 CDT (farm time)". */
