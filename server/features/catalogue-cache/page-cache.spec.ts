@@ -34,13 +34,13 @@ describe('cached pages', () => {
   }
 
   /** GET with node:http, so the bytes are seen as sent (supertest would decode them). */
-  async function raw(server: express.Express, acceptEncoding: string, cookie?: string): Promise<{ status: number; headers: Record<string, unknown>; body: Buffer }> {
+  async function raw(server: express.Express, acceptEncoding: string, cookie?: string, acceptLanguage?: string): Promise<{ status: number; headers: Record<string, unknown>; body: Buffer }> {
     const listening = server.listen(0, '127.0.0.1');
     await new Promise((resolve) => listening.once('listening', resolve));
     const { port } = listening.address() as AddressInfo;
     try {
       return await new Promise((resolve, reject) => {
-        get({ host: '127.0.0.1', port, path: '/hay', headers: { 'accept-encoding': acceptEncoding, ...(cookie ? { cookie } : {}) } }, (res) => {
+        get({ host: '127.0.0.1', port, path: '/hay', headers: { 'accept-encoding': acceptEncoding, ...(cookie ? { cookie } : {}), ...(acceptLanguage ? { 'accept-language': acceptLanguage } : {}) } }, (res) => {
           const chunks: Buffer[] = [];
           res.on('data', (chunk: Buffer) => chunks.push(chunk));
           res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
@@ -77,7 +77,7 @@ describe('cached pages', () => {
     expect(plain.body.toString()).toBe(html);
 
     expect(renders).toBe(1);
-    expect(cache.pages.get('/hay')?.encoded).toEqual({ br: expect.any(Buffer), gzip: expect.any(Buffer) });
+    expect(cache.pages.get('en-US /hay')?.encoded).toEqual({ br: expect.any(Buffer), gzip: expect.any(Buffer) });
   });
 
   it('renders every time for a signed-in visitor (session cookie)', async () => {
@@ -87,6 +87,22 @@ describe('cached pages', () => {
     renders = 0;
     await raw(server, 'gzip', 'baleproof.sid=abc');
     await raw(server, 'gzip', 'baleproof.sid=abc');
+    expect(renders).toBe(2);
+  });
+
+  it('keeps one page per reader language: a Canadian French visitor never gets the page rendered for a US reader', async () => {
+    const cache = new CatalogueCache(60_000);
+    cache.setListening(true);
+    const server = app(cache);
+    renders = 0;
+    await raw(server, 'identity', undefined, 'en-US,en;q=0.9');
+    const french = await raw(server, 'identity', undefined, 'fr-CA,fr;q=0.9,en;q=0.8');
+    expect(renders).toBe(2);
+    // RFC 9110 §12.5.5: a response chosen by Accept-Language says so in Vary, so shared caches keep them apart too.
+    expect(french.headers['vary']).toMatch(/Accept-Language/i);
+    await raw(server, 'identity', undefined, 'fr-CA');
+    // Languages the app does not ship fall back to US English and share its page (no render per odd header).
+    await raw(server, 'identity', undefined, 'ja-JP');
     expect(renders).toBe(2);
   });
 });
