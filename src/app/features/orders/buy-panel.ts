@@ -1,4 +1,4 @@
-import { DOCUMENT } from '@angular/common';
+import { DecimalPipe, DOCUMENT } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
 import { MatButton } from '@angular/material/button';
@@ -7,18 +7,18 @@ import { debounceTime, firstValueFrom, switchMap } from 'rxjs';
 import type { LotDetail } from '@shared/contracts/lots';
 import { balesForTons, balesToTons } from '@shared/units/bales';
 import { feeRateLabel } from '@shared/pricing/order-total';
-import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { requestState, valueOf, errorOf } from '../../core/request-state';
 import { Session } from '../../core/session';
 import { CartStore } from './cart-store';
 import { OrdersApi } from './orders-api';
 import type { DeliveryMethod } from '@shared/contracts/enums';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
 
 /** On the lot page: choose a load (bales or tons), delivery or pickup and a day, see every figure, then pay. */
 @Component({
   selector: 'app-buy-panel',
-  imports: [MatButton, RouterLink],
+  imports: [MoneyPipe, DecimalPipe, MatButton, RouterLink],
   templateUrl: './buy-panel.html',
   styleUrl: './buy-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -42,7 +42,6 @@ export class BuyPanel {
   protected readonly error = signal('');
   protected readonly busy = signal(false);
   protected readonly listed = signal(false);
-  protected readonly money = formatCents;
   protected readonly feeRate = feeRateLabel;
 
   private readonly request = computed(() => ({ lotId: this.lot().id, bales: Math.round(this.chosenBales()), method: this.method(), deliveryZip: this.method() === 'delivery' && /^\d{5}$/.test(this.zip()) ? this.zip() : undefined }));

@@ -7,18 +7,19 @@ import { lotTitlesOf, type OrderView } from '@shared/contracts/orders';
 import { deliveryStatusLabel } from '@shared/lifecycle/delivery-lifecycle';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
 import { feeRateLabel } from '@shared/pricing/order-total';
-import { farmDateLabel, farmTimeLabel } from '@shared/time/farm-time';
-import { formatCents } from '@shared/units/money';
 import { apiErrorMessage } from '../../core/api-error';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
 import { OrderThread } from '../messages/order-thread';
 import { ClaimPanel } from './claims/claim-panel';
 import { OrdersApi } from './orders-api';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { FarmDatePipe, FarmTimePipe } from '../../shared/ui/farm-time-pipes';
+import { DecimalPipe } from '@angular/common';
 
 /** One order: figures, the agreed date, what happened when (timeline), the steps open to the viewer, a printable receipt. */
 @Component({
   selector: 'app-order-page',
-  imports: [RouterLink, MatButton, ClaimPanel, OrderThread],
+  imports: [MoneyPipe, DecimalPipe, FarmDatePipe, FarmTimePipe, RouterLink, MatButton, ClaimPanel, OrderThread],
   templateUrl: './order-page.html',
   styleUrl: './order-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -45,10 +46,7 @@ export class OrderPage {
   /** Weighed tons typed per order line (scale ticket), by line id. */
   protected readonly weighed = signal<Partial<Record<number, string>>>({});
   protected readonly ticket = signal<File | null>(null);
-  protected readonly money = formatCents;
   protected readonly feeRate = feeRateLabel;
-  protected readonly farmDate = farmDateLabel;
-  protected readonly farmTime = farmTimeLabel;
   protected readonly statusLabel = orderStatusLabel;
   protected readonly deliveryLabel = deliveryStatusLabel;
   protected readonly can = (action: string) => this.order()?.actions.includes(action) ?? false;

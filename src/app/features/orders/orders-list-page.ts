@@ -4,16 +4,16 @@ import { RouterLink } from '@angular/router';
 
 import { lotTitlesOf, type OrderSummary } from '@shared/contracts/orders';
 import { orderStatusLabel } from '@shared/lifecycle/order-lifecycle';
-import { farmDateLabel } from '@shared/time/farm-time';
-import { formatCents } from '@shared/units/money';
 import { errorOf, requestState, valueOf, type RequestState } from '../../core/request-state';
 import { Session } from '../../core/session';
 import { OrdersApi } from './orders-api';
+import { MoneyPipe } from '../../shared/ui/money-pipe';
+import { FarmDatePipe } from '../../shared/ui/farm-time-pipes';
 
 /** A buyer's orders, or the orders a grower has received. */
 @Component({
   selector: 'app-orders-list-page',
-  imports: [RouterLink],
+  imports: [MoneyPipe, FarmDatePipe, RouterLink],
   template: `
     <div class="bp-page">
       <h1>{{ grower ? 'Orders for your hay' : 'Your orders' }}</h1>
@@ -24,7 +24,7 @@ import { OrdersApi } from './orders-api';
           @for (o of list; track o.id) {
             <li>
               <a [routerLink]="['/orders', o.id]">Order {{ o.id }}: {{ o.bales }} bales of {{ titles(o) }}</a>
-              <span>{{ statusLabel(o.status) }} · {{ money(o.totalCents) }} · {{ o.method === 'delivery' ? 'delivery' : 'pickup' }}@if (o.windowStart) { {{ farmDate(o.windowStart, o.farm.timeZone) }} }</span>
+              <span>{{ statusLabel(o.status) }} · {{ (o.totalCents | money) }} · {{ o.method === 'delivery' ? 'delivery' : 'pickup' }}@if (o.windowStart) { {{ (o.windowStart | farmDate: o.farm.timeZone) }} }</span>
               <span class="who">{{ grower ? o.buyerName : o.farm.name }}</span>
             </li>
           }
@@ -43,8 +43,6 @@ export class OrdersListPage {
   private readonly state = toSignal(requestState(this.grower ? this.api.incoming() : this.api.mine()), { initialValue: { status: 'loading' } as RequestState<{ items: OrderSummary[] }> });
   protected readonly items = computed(() => valueOf(this.state())?.items ?? null);
   protected readonly error = computed(() => errorOf(this.state()));
-  protected readonly money = formatCents;
   protected readonly statusLabel = orderStatusLabel;
-  protected readonly farmDate = farmDateLabel;
   protected readonly titles = (o: OrderSummary) => lotTitlesOf(o.lines);
 }
