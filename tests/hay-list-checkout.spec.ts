@@ -2,8 +2,8 @@ import { eq, inArray } from 'drizzle-orm';
 import { lots, orderLines, orders } from '../server/db/schema';
 import { createGrower, createLot } from './support/fixtures';
 import { signedInUser } from './support/grower-lot';
-import { holdSettings } from './support/settings-lock';
-import { startStripeFake, startTestApi, type StripeFakeServer, type TestApi } from './support/test-api';
+import { startCheckoutApi } from './support/checkout-api';
+import type { TestApi } from './support/test-api';
 
 jest.setTimeout(90_000);
 
@@ -12,19 +12,12 @@ jest.setTimeout(90_000);
  * each with its own hold and payment page and a line per lot; every hold at once or none.
  */
 describe('checking out a hay list', () => {
-  let stripe: StripeFakeServer;
   let t: TestApi;
-  let releaseSettings: () => Promise<void>;
+  let close: () => Promise<void>;
   beforeAll(async () => {
-    releaseSettings = await holdSettings('read');
-    stripe = await startStripeFake();
-    t = await startTestApi({}, { stripe });
+    ({ t, close } = await startCheckoutApi());
   });
-  afterAll(async () => {
-    await t.close();
-    await stripe.close();
-    await releaseSettings();
-  });
+  afterAll(() => close());
 
   /** A listed lot of 60 lb bales at $300/t with `bales` left. */
   async function lotOf(farmId: number, title: string, bales: number) {

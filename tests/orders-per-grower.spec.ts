@@ -5,8 +5,8 @@ import { OrdersService } from '../server/features/orders/orders.service';
 import { deliverOrderEvents, payOnPage } from './support/checkout-payments';
 import { createGrower, createLot } from './support/fixtures';
 import { signedInUser } from './support/grower-lot';
-import { holdSettings } from './support/settings-lock';
-import { startStripeFake, startTestApi, type StripeFakeServer, type TestApi } from './support/test-api';
+import { startCheckoutApi } from './support/checkout-api';
+import type { StripeFakeServer, TestApi } from './support/test-api';
 
 jest.setTimeout(120_000);
 
@@ -17,18 +17,12 @@ jest.setTimeout(120_000);
 describe('an order of several lots from one grower', () => {
   let stripe: StripeFakeServer;
   let t: TestApi;
-  let releaseSettings: () => Promise<void>;
+  let close: () => Promise<void>;
   beforeAll(async () => {
     // Totals here are at the default 3 % fee: no other file may change the settings meanwhile.
-    releaseSettings = await holdSettings('read');
-    stripe = await startStripeFake();
-    t = await startTestApi({}, { stripe });
+    ({ t, stripe, close } = await startCheckoutApi());
   });
-  afterAll(async () => {
-    await t.close();
-    await stripe.close();
-    await releaseSettings();
-  });
+  afterAll(() => close());
 
   /** A grower with two listed lots of 60 lb bales at $300/t (fixture), `bales` left in each. */
   async function growerWithTwoLots(bales: [number, number], opts: { freight?: number } = {}) {
