@@ -68,3 +68,14 @@ export function assertLotDates(dates: LotDates, now: Date, fields: readonly LotD
   const issues = lotDateIssues(dates, now, fields);
   if (issues.length > 0) throw new z.ZodError(issues.map((i) => ({ code: 'custom' as const, path: [i.path], message: i.message, input: dates[i.path] })));
 }
+
+/**
+ * The problem with a buyer's retest report date, or null: the retest is of the hay sold, so its report is
+ * dated on or after the lot's own sample (or, without one, its first day of harvest) and not in the future.
+ */
+export function retestReportDateIssue(reportDate: string, lot: { sampledOn?: string | null; harvestStartedOn: string }, now: Date): string | null {
+  if (reportDate > latestLotDate(now)) return `Retest report date ${reportDate} is in the future; give the date on the lab's report.`;
+  const [earliest, what] = lot.sampledOn ? [lot.sampledOn, 'the lot was sampled for its listing'] : [lot.harvestStartedOn, 'the lot was harvested'];
+  if (reportDate < earliest) return `A retest must be dated on or after the day ${what} (${earliest}); the report says ${reportDate}.`;
+  return null;
+}

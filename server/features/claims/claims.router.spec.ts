@@ -78,6 +78,21 @@ describe('quality claims', () => {
     expect((await buyer.agent.get('/claims?orderId=abc')).status).toBe(400);
   }, 60_000);
 
+  it('refuses a retest dated before the lot was sampled or after today, naming the dates (400)', async () => {
+    // The retest is of the hay sold, so its report cannot predate the listing's own sample (fixture: sampled
+    // 2026-06-28, harvest from 2026-06-01) nor be dated after tomorrow (test clock 2026-09-15). Common practice.
+    const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
+    const order = await deliveredYesterday(g.farm.id);
+    const before = await buyer.agent.post('/claims', { orderId: order.id, reason: 'Leafless and stemmy; our lab found far less protein.', retest: { ...RETEST, reportDate: '2026-06-20' } });
+    expect(before.status).toBe(400);
+    expect(before.body.error.details).toEqual([{ path: 'retest.reportDate', message: expect.stringContaining('2026-06-28') }]);
+    const future = await buyer.agent.post('/claims', { orderId: order.id, reason: 'Leafless and stemmy; our lab found far less protein.', retest: { ...RETEST, reportDate: '2027-01-05' } });
+    expect(future.status).toBe(400);
+    expect(future.body.error.details[0].message).toMatch(/future/);
+    const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
+    expect(o!.status).toBe('delivered');
+  });
+
   it('ends in a partial refund once, e-mails both sides, audits it, and lowers the grower’s payout for the order', async () => {
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
     const order = await deliveredYesterday(g.farm.id);

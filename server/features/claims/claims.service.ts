@@ -3,13 +3,14 @@ import { and, desc, eq, sql } from 'drizzle-orm';
 import Stripe from 'stripe';
 import { judgeRetest } from '@shared/claims/judge-retest';
 import type { ClaimView, OpenClaim, ResolveClaim } from '@shared/contracts/claims';
+import { retestReportDateIssue } from '@shared/contracts/lot-dates';
 import { parseAnalysisValues } from '@shared/contracts/selling';
 import { checkClaimTransition, claimStatusLabel, type ClaimEvent, type ClaimStatus } from '@shared/lifecycle/claim-lifecycle';
 import { checkOrderTransition, type OrderEvent, type OrderStatus } from '@shared/lifecycle/order-lifecycle';
 import { formatCents } from '@shared/units/money';
 import type { OutgoingMail } from '../../adapters/mail/mailer';
 import type { ApiDeps } from '../../api-deps';
-import { farms, labAnalyses, lots, orderEvents, orderRefunds, orders, payoutLines, qualityClaims, storedFiles, users } from '../../db/schema';
+import { farms, labAnalyses, lots, orderEvents, orderRefunds, orders, payoutLines, qualityClaims, samplingRecords, storedFiles, users } from '../../db/schema';
 import { conflict, forbidden, HttpError, notFound } from '../../middleware/http-error';
 import { recordAudit } from '../audit/audit-log';
 import { dmRequestOf } from '../selling/analysis-values';
@@ -52,6 +53,11 @@ export class ClaimsService {
       if (input.lineId !== undefined && !named) throw new HttpError(400, 'unknown_line', 'That lot is not part of this order.', [{ path: 'lineId', message: 'Choose a lot of this order.' }]);
       // A retest is of one lot's hay: with several lots on the order, the buyer says which.
       if (input.retest && !named) throw new HttpError(400, 'name_the_lot', 'This order holds several lots: choose the lot the retest is of.', [{ path: 'lineId', message: 'Choose the lot the retest is of.' }]);
+      if (input.retest) {
+        const [sampling] = await tx.select({ sampledOn: samplingRecords.sampledOn }).from(samplingRecords).where(eq(samplingRecords.lotId, named!.lot.id));
+        const issue = retestReportDateIssue(input.retest.reportDate, { sampledOn: sampling?.sampledOn, harvestStartedOn: named!.lot.harvestStartedOn }, now);
+        if (issue) throw new HttpError(400, 'invalid_input', issue, [{ path: 'retest.reportDate', message: issue }]);
+      }
       // Retest values are checked by the engine's own contract, as the lot form's are.
       const retestValues = input.retest ? (parseAnalysisValues(input.retest.values, named!.lot.forageClass), input.retest.values) : null;
       const [claim] = await tx
