@@ -4,6 +4,7 @@ import { apiRoutes, type ApiRoute } from './support/api-routes';
 import { createLot } from './support/fixtures';
 import { ANALYSIS_STEP, completeLot, LOT_STEP, makePdf, PRICE_STEP, QUANTITY_STEP, SAMPLING_STEP, signedInGrower, signedInUser } from './support/grower-lot';
 import { startTestApi, type TestApi } from './support/test-api';
+import { plusDays } from '@shared/time/days';
 
 /**
  * Who may call what, written down once from the roles the README describes (visitors browse, buyers buy,
@@ -195,7 +196,7 @@ describe('authorization matrix: every API route × every kind of caller', () => 
     const now = t.clock.now();
     const [order] = await t.deps.db
       .insert(orders)
-      .values({ buyerId, farmId: grower.farm.id, status: 'delivered', platformFeeBps: 300, platformFeeCents: 1080, totalCents: 37080, method: 'pickup', paidAt: now, deliveredAt: now, acceptBy: new Date(now.getTime() + 3 * 86_400_000) })
+      .values({ buyerId, farmId: grower.farm.id, status: 'delivered', platformFeeBps: 300, platformFeeCents: 1080, totalCents: 37080, method: 'pickup', paidAt: now, deliveredAt: now, acceptBy: plusDays(now, 3) })
       .returning();
     await t.deps.db.insert(orderLines).values({ orderId: order!.id, lotId: listedLot.id, bales: 20, tons: 1.2, priceCentsPerTon: 30000, goodsCents: 36000 });
     const [claim] = await t.deps.db.insert(qualityClaims).values({ orderId: order!.id, openedBy: buyerId, reason: 'Bales were mouldy inside.' }).returning();

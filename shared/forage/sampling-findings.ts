@@ -1,3 +1,4 @@
+import { calendarDaysBetween, hoursBetween, instantSpan } from '../time/days';
 import type { BaleShape, CorePosition, Finding, SamplingEvaluation, SamplingRecord } from './forage-contract';
 
 /*
@@ -39,25 +40,6 @@ export interface SamplingOptions {
   listedOn: string;
   /** Oldest acceptable sample at listing, days; default 180. */
   maxSampleAgeDays?: number;
-}
-
-const MS_PER_HOUR = 3_600_000;
-const MS_PER_DAY = 24 * MS_PER_HOUR;
-const DATE_ONLY = /^\d{4}-\d{2}-\d{2}$/;
-
-/** Start instant (ms) of an ISO date or date-time. */
-function startOf(iso: string): number {
-  return Date.parse(DATE_ONLY.test(iso) ? `${iso}T00:00:00Z` : iso);
-}
-
-/** End instant (ms): a date alone ends at the following midnight. */
-function endOf(iso: string): number {
-  return DATE_ONLY.test(iso) ? startOf(iso) + MS_PER_DAY : Date.parse(iso);
-}
-
-/** UTC day number of an ISO date or date-time. */
-function dayOf(iso: string): number {
-  return Math.floor(startOf(iso) / MS_PER_DAY);
 }
 
 function corePositionFindings(shape: BaleShape, position: CorePosition): Finding[] {
@@ -176,15 +158,15 @@ function lotFindings(record: SamplingRecord): Finding[] {
 
 function dateFindings(record: SamplingRecord, options: SamplingOptions): Finding[] {
   const findings: Finding[] = [];
-  const harvestStart = startOf(record.harvestStartedOn);
-  const harvestEnd = endOf(record.harvestEndedOn);
-  if (harvestEnd <= harvestStart) {
+  const harvestStart = instantSpan(record.harvestStartedOn).start;
+  const harvestEnd = instantSpan(record.harvestEndedOn).end;
+  if (harvestEnd.getTime() <= harvestStart.getTime()) {
     findings.push({
       severity: 'error',
       code: 'harvest-dates-reversed',
       message: 'The harvest end is not after the harvest start; check the dates.',
     });
-  } else if ((harvestEnd - harvestStart) / MS_PER_HOUR > MAX_HARVEST_WINDOW_HOURS) {
+  } else if (hoursBetween(harvestStart, harvestEnd) > MAX_HARVEST_WINDOW_HOURS) {
     findings.push({
       severity: 'warning',
       code: 'harvest-window-over-48h',
@@ -192,15 +174,14 @@ function dateFindings(record: SamplingRecord, options: SamplingOptions): Finding
     });
   }
 
-  const sampledDay = dayOf(record.sampledOn);
-  const harvestEndDay = dayOf(record.harvestEndedOn);
-  if (sampledDay < harvestEndDay) {
+  const daysAfterHarvest = calendarDaysBetween(record.harvestEndedOn, record.sampledOn);
+  if (daysAfterHarvest < 0) {
     findings.push({
       severity: 'error',
       code: 'sampled-before-harvest-ended',
       message: 'The sample is dated before the harvest ended, so it cannot represent the whole lot.',
     });
-  } else if (sampledDay - harvestEndDay < SWEAT_PERIOD_DAYS) {
+  } else if (daysAfterHarvest < SWEAT_PERIOD_DAYS) {
     findings.push({
       severity: 'info',
       code: 'sampled-during-sweat',
@@ -209,7 +190,7 @@ function dateFindings(record: SamplingRecord, options: SamplingOptions): Finding
   }
 
   const maxAge = options.maxSampleAgeDays ?? DEFAULT_MAX_SAMPLE_AGE_DAYS;
-  const ageDays = dayOf(options.listedOn) - sampledDay;
+  const ageDays = calendarDaysBetween(record.sampledOn, options.listedOn);
   if (ageDays < 0) {
     findings.push({
       severity: 'error',
@@ -232,7 +213,7 @@ function dateFindings(record: SamplingRecord, options: SamplingOptions): Finding
  * (a programming error: it comes from the server, not the user).
  */
 export function evaluateSampling(record: SamplingRecord, options: SamplingOptions): SamplingEvaluation {
-  if (Number.isNaN(startOf(options.listedOn))) {
+  if (Number.isNaN(instantSpan(options.listedOn).start.getTime())) {
     throw new RangeError(`listedOn must be an ISO date or date-time, got "${options.listedOn}"`);
   }
   const findings = [

@@ -1,4 +1,4 @@
-import { isoWeekStart, plusCalendarDays, plusDays } from './days';
+import { calendarDaysBetween, hoursBetween, instantSpan, isoWeekStart, plusCalendarDays, plusDays, utcDateOf } from './days';
 
 describe('day arithmetic', () => {
   it('moves calendar dates across month ends, leap days and the US spring-forward Sunday', () => {
@@ -23,5 +23,27 @@ describe('day arithmetic', () => {
     expect(isoWeekStart(new Date('2026-09-17T23:59:00Z'))).toBe('2026-09-14');
     expect(isoWeekStart(new Date('2026-09-20T00:30:00Z'))).toBe('2026-09-14');
     expect(isoWeekStart(new Date('2026-09-21T00:00:00Z'))).toBe('2026-09-21');
+  });
+
+  it('counts calendar days between dates or date-times, each on its UTC day', () => {
+    // Gregorian calendar: 2028 has 29 February, so 1 Feb → 1 Mar is 29 days; 2027 has 28.
+    expect(calendarDaysBetween('2028-02-01', '2028-03-01')).toBe(29);
+    expect(calendarDaysBetween('2027-02-01', '2027-03-01')).toBe(28);
+    // Across the US spring-forward Sunday (8 March 2026) a calendar day is still one day.
+    expect(calendarDaysBetween('2026-03-07', '2026-03-09')).toBe(2);
+    // 23:30 UTC on 10 June is still 10 June; 00:10 UTC on 11 June is the next day.
+    expect(calendarDaysBetween('2026-06-10', '2026-06-10T23:30:00Z')).toBe(0);
+    expect(calendarDaysBetween('2026-06-10', '2026-06-11T00:10:00Z')).toBe(1);
+    expect(calendarDaysBetween('2026-06-11', '2026-06-10')).toBe(-1);
+    expect(utcDateOf('2026-06-10T20:00:00-05:00')).toBe('2026-06-11');
+  });
+
+  it('spans a date alone over its whole UTC day and a date-time over one instant', () => {
+    const day = instantSpan('2026-06-10');
+    expect(day.start.toISOString()).toBe('2026-06-10T00:00:00.000Z');
+    expect(day.end.toISOString()).toBe('2026-06-11T00:00:00.000Z');
+    expect(instantSpan('2026-06-10T08:00:00Z').end.toISOString()).toBe('2026-06-10T08:00:00.000Z');
+    expect(Number.isNaN(instantSpan('next Tuesday').start.getTime())).toBe(true);
+    expect(hoursBetween(day.start, new Date('2026-06-12T00:30:00Z'))).toBe(48.5);
   });
 });

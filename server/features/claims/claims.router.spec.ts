@@ -8,8 +8,8 @@ import { signedInUser } from '../../../tests/support/grower-lot';
 import { deliveredOrder, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
 import { holdSettings } from '../../../tests/support/settings-lock';
 import { simplePdf } from '../../../tests/support/simple-pdf';
+import { plusDays } from '@shared/time/days';
 
-const DAY = 86_400_000;
 // The listing (tests/support/fixtures createLot): alfalfa, DM 88, CP 20, ADF 30, NDF 40 on DM.
 const RETEST = { labName: 'Invented County Forage Lab', labCertified: true, reportDate: '2026-09-14', values: { basis: 'dm', dryMatterPct: 88, crudeProteinPct: 16.5, adfPct: 34.5, ndfPct: 46 } };
 
@@ -33,7 +33,7 @@ describe('quality claims', () => {
 
   const now = () => t.clock.now().getTime();
   const deliveredYesterday = async (farmId: number) =>
-    deliveredOrder(t.deps.db, t.deps.stripe, farmId, { goodsCents: 120_000, freightCents: 10_000, feeCents: 3_600, status: 'delivered', deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() + 2 * DAY), buyerId });
+    deliveredOrder(t.deps.db, t.deps.stripe, farmId, { goodsCents: 120_000, freightCents: 10_000, feeCents: 3_600, status: 'delivered', deliveredAt: plusDays(new Date(now()), -1), acceptBy: plusDays(new Date(now()), 2), buyerId });
 
   it('lets the buyer report within the window with a retest, and nobody else', async () => {
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
@@ -130,7 +130,7 @@ describe('quality claims', () => {
     // Delivered yesterday with a one-day acceptance time (the settings then), now past: the order is due to the
     // grower and may already be paid out, so a claim now would refund money the grower has been paid.
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
-    const order = await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 50_000, status: 'delivered', deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() - 60_000), buyerId });
+    const order = await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 50_000, status: 'delivered', deliveredAt: plusDays(new Date(now()), -1), acceptBy: new Date(now() - 60_000), buyerId });
     const late = await buyer.agent.post('/claims', { orderId: order.id, reason: 'Found mould after the acceptance date.' });
     expect([late.status, late.body.error?.code]).toEqual([409, 'claim_window_closed']);
     const [o] = await t.deps.db.select().from(orders).where(eq(orders.id, order.id));
@@ -148,7 +148,7 @@ describe('quality claims', () => {
       const outcomes: string[] = [];
       for (let round = 0; round < 10; round += 1) {
         const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
-        const order = await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 40_000, status: 'delivered', deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() - 500), buyerId: racerId });
+        const order = await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 40_000, status: 'delivered', deliveredAt: plusDays(new Date(now()), -1), acceptBy: new Date(now() - 500), buyerId: racerId });
         const [claim, batch] = await Promise.all([
           racer.agent.post('/claims', { orderId: order.id, reason: 'Wet bales in the middle of the stack.' }),
           admin.agent.post('/admin/payouts/batches', { requestKey: randomUUID(), farmIds: [g.farm.id] }),
@@ -182,6 +182,6 @@ describe('quality claims', () => {
   }, 60_000);
 
   async function deliveredTenDaysAgo(farmId: number) {
-    return deliveredOrder(t.deps.db, t.deps.stripe, farmId, { goodsCents: 50_000, status: 'delivered', deliveredAt: new Date(now() - 10 * DAY), acceptBy: new Date(now() + DAY), buyerId });
+    return deliveredOrder(t.deps.db, t.deps.stripe, farmId, { goodsCents: 50_000, status: 'delivered', deliveredAt: plusDays(new Date(now()), -10), acceptBy: plusDays(new Date(now()), 1), buyerId });
   }
 });

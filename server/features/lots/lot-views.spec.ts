@@ -5,6 +5,7 @@ import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { signedInUser } from '../../../tests/support/grower-lot';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { TEST_NOW } from '../../../tests/support/test-clock';
+import { plusDays } from '@shared/time/days';
 
 // Browser and crawler user-agent strings as browsers and crawlers send them (their published formats).
 const FIREFOX = 'Mozilla/5.0 (X11; Linux x86_64; rv:128.0) Gecko/20100101 Firefox/128.0';
@@ -51,14 +52,14 @@ describe('lot view count', () => {
     await buyer.agent.raw.get(`/lots/${lotId}`).set('User-Agent', SAFARI);
     expect(await views()).toBe(start + 4);
     // The next day the same visitor counts again.
-    t.clock.set(new Date(Date.parse(TEST_NOW) + 86_400_000));
+    t.clock.set(plusDays(new Date(TEST_NOW), 1));
     await visit(FIREFOX);
     await visit(FIREFOX);
     expect(await views()).toBe(start + 5);
   });
 
   it('counts parallel first visits of one visitor once (the day mark is unique in PostgreSQL)', async () => {
-    t.clock.set(new Date(Date.parse(TEST_NOW) + 5 * 86_400_000));
+    t.clock.set(plusDays(new Date(TEST_NOW), 5));
     const start = await views();
     const answers = await Promise.all(Array.from({ length: 12 }, () => visit(FIREFOX)));
     expect(answers.every((r) => r.status === 200)).toBe(true);

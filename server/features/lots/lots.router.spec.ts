@@ -3,6 +3,7 @@ import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { approveLot, completeLot, signedInGrower, signedInUser } from '../../../tests/support/grower-lot';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { TEST_NOW } from '../../../tests/support/test-clock';
+import { plusDays } from '@shared/time/days';
 
 describe('lots API', () => {
   let t: TestApi;
@@ -125,7 +126,7 @@ describe('lots API', () => {
     const id = await completeLot(grower.agent, { lot: { title: `${own} aged` } }); // sampled 2026-07-08, saved on TEST_NOW
     expect((await grower.agent.post(`/selling/lots/${id}/submit`)).status).toBe(200);
     try {
-      t.clock.set(new Date(Date.parse(TEST_NOW) + 120 * 86_400_000));
+      t.clock.set(plusDays(new Date(TEST_NOW), 120));
       expect((await approveLot(admin.agent, id)).status).toBe(200);
     } finally {
       t.clock.set(TEST_NOW);

@@ -7,6 +7,7 @@ import { signedInUser } from '../../../tests/support/grower-lot';
 import { holdSettings } from '../../../tests/support/settings-lock';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { SettingsService } from '../settings/settings.service';
+import { plusDays } from '@shared/time/days';
 
 jest.setTimeout(60_000);
 
@@ -66,6 +67,6 @@ describe('orders follow the platform settings', () => {
     expect(handed.status).toBe(200);
     expect(handed.body.refundedCents).toBe(15_000 + 750);
     // The acceptance window in force at hand-over: 5 days (TEST_NOW + 5 × 24 h).
-    expect(handed.body.acceptBy).toBe(new Date(t.clock.now().getTime() + 5 * 86_400_000).toISOString());
+    expect(handed.body.acceptBy).toBe(plusDays(t.clock.now(), 5).toISOString());
   });
 });

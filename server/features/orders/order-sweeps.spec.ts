@@ -5,10 +5,10 @@ import { signedInUser } from '../../../tests/support/grower-lot';
 import { deliveredOrder } from '../../../tests/support/paid-orders';
 import { startStripeFake, startTestApi, type StripeFakeServer, type TestApi } from '../../../tests/support/test-api';
 import { COMPLETE_UNANSWERED, EXPIRE_HOLDS, registerOrderSweeps, scheduleOrderSweeps, SWEEP_CRON } from './order-sweeps';
+import { plusDays } from '@shared/time/days';
 
 jest.setTimeout(90_000);
 
-const DAY = 86_400_000;
 
 /**
  * The order sweeps run as pg-boss jobs. Two APIs stand for two server workers: each has its own pool
@@ -78,7 +78,7 @@ describe('order sweeps (job queue)', () => {
     const now = one.clock.now().getTime();
     const ids: number[] = [];
     for (let i = 0; i < 3; i++) {
-      const order = await deliveredOrder(one.deps.db, one.deps.stripe, grower.farm.id, { goodsCents: 30_000, status: 'delivered', deliveredAt: new Date(now - 5 * DAY), acceptBy: new Date(now - DAY) });
+      const order = await deliveredOrder(one.deps.db, one.deps.stripe, grower.farm.id, { goodsCents: 30_000, status: 'delivered', deliveredAt: plusDays(new Date(now), -5), acceptBy: plusDays(new Date(now), -1) });
       ids.push(order.id);
     }
     await sweepTwiceAtOnce(COMPLETE_UNANSWERED);

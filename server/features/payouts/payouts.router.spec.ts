@@ -6,8 +6,8 @@ import type { TestApi } from '../../../tests/support/test-api';
 import { startAdminApi, type SignedInUser } from '../../../tests/support/start-admin-api';
 import { deliveredOrder, finishPayoutSetup, growerWithPayouts, platformBalance } from '../../../tests/support/paid-orders';
 import { PayoutsService } from './payouts.service';
+import { plusDays } from '@shared/time/days';
 
-const DAY = 86_400_000;
 
 describe('payout settlement', () => {
   let t: TestApi;
@@ -23,7 +23,7 @@ describe('payout settlement', () => {
     const growers = [];
     for (const goods of [100_000, 150_000, 200_000]) {
       const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
-      await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: goods, freightCents: 5_000, deliveredAt: new Date(now() - 5 * DAY), acceptBy: new Date(now() - 2 * DAY) });
+      await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: goods, freightCents: 5_000, deliveredAt: plusDays(new Date(now()), -5), acceptBy: plusDays(new Date(now()), -2) });
       growers.push(g);
     }
     return growers;
@@ -37,8 +37,8 @@ describe('payout settlement', () => {
 
   it('lists what is due: accepted or past the acceptance date, net of refunds; the platform fee stays with the platform', async () => {
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe);
-    await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 80_000, freightCents: 2_000, feeCents: 2_400, deliveredAt: new Date(now() - 6 * DAY), acceptBy: new Date(now() - 3 * DAY), status: 'delivered' });
-    await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 50_000, deliveredAt: new Date(now() - DAY), acceptBy: new Date(now() + 2 * DAY), status: 'delivered' });
+    await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 80_000, freightCents: 2_000, feeCents: 2_400, deliveredAt: plusDays(new Date(now()), -6), acceptBy: plusDays(new Date(now()), -3), status: 'delivered' });
+    await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 50_000, deliveredAt: plusDays(new Date(now()), -1), acceptBy: plusDays(new Date(now()), 2), status: 'delivered' });
     const due = (await admin.agent.get('/admin/payouts/due')).body.items.find((i: { farmId: number }) => i.farmId === g.farm.id);
     // 800.00 hay + 20.00 freight; the 24.00 fee was paid by the buyer on top. The second order is still inside its acceptance window.
     expect(due).toMatchObject({ ready: true, heldReason: null, totalCents: 82_000, orders: [expect.objectContaining({ amountCents: 82_000, platformFeeCents: 2_400 })] });
@@ -113,7 +113,7 @@ describe('payout settlement', () => {
 
   it('holds a grower without finished payout set-up, with the reason, and pays once set-up is done', async () => {
     const g = await growerWithPayouts(t.deps.db, t.deps.stripe, false);
-    await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 60_000, deliveredAt: new Date(now() - 5 * DAY), acceptBy: new Date(now() - 2 * DAY) });
+    await deliveredOrder(t.deps.db, t.deps.stripe, g.farm.id, { goodsCents: 60_000, deliveredAt: plusDays(new Date(now()), -5), acceptBy: plusDays(new Date(now()), -2) });
     const batch = await batchFor([g.farm.id]);
     expect(batch.payouts[0]).toMatchObject({ status: 'held', heldReason: expect.stringMatching(/not finished/) });
     const settled = await admin.agent.post(`/admin/payouts/batches/${batch.id}/settle`);
