@@ -9,6 +9,7 @@ import { cookiesAreSecure } from './env';
 import { authRouter, createAuthenticator } from './features/auth/auth.router';
 import { healthRouter } from './features/health/health.router';
 import { lotsRouter } from './features/lots/lots.router';
+import { keptSearchAnswers } from './features/lots/search-answers';
 import { adminRouter } from './features/admin/admin.router';
 import { adminPayoutsRouter, growerPayoutsRouter } from './features/payouts/payouts.router';
 import { adminClaimsRouter, claimsRouter } from './features/claims/claims.router';
@@ -66,6 +67,9 @@ export function createApi(deps: ApiDeps): Express {
     }),
   );
   api.use(helmet());
+  // A visitor's repeated catalogue search is answered here, with the security headers but before the
+  // session store, passport and CSRF (features/lots/search-answers.ts).
+  api.use(keptSearchAnswers(deps.catalogueCache));
   const orderFeature = createOrderFeature(deps);
   // Verified on the raw bytes, so before the JSON parser; the provider holds no CSRF cookie.
   api.use('/payments/webhook', paymentWebhookRouter(orderFeature));

@@ -4,6 +4,7 @@ import { eq, sql } from 'drizzle-orm';
 import { lots } from '../../db/schema';
 import { createLogger } from '../../logger';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
+import { until } from '../../../tests/support/raw-get';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
 import { CatalogueCache, listenForCatalogueChanges } from './catalogue-cache';
 
@@ -57,11 +58,3 @@ describe('catalogue cache', () => {
     expect(res.body.items[0]).toMatchObject({ priceCentsPerTon: 18_000 });
   });
 });
-
-async function until(condition: () => boolean, timeoutMs = 5000): Promise<void> {
-  const deadline = Date.now() + timeoutMs;
-  while (!condition()) {
-    if (Date.now() > deadline) throw new Error('condition not met in time');
-    await new Promise((r) => setTimeout(r, 20));
-  }
-}

@@ -1,16 +1,7 @@
 import pg from 'pg';
-import type { LotSearchResult } from '@shared/contracts/lots';
 import type { Logger } from '../../logger';
+import type { KeptAnswer } from './kept-answer';
 import { ShortCache } from './short-cache';
-
-/** A server-rendered page as sent to an anonymous visitor. */
-export interface CachedPage {
-  status: number;
-  headers: [string, string][];
-  body: Buffer;
-  /** The body compressed, made on the first request that asks for each encoding. */
-  encoded?: Partial<Record<'br' | 'gzip', Buffer>>;
-}
 
 /**
  * Short-lived caches of what every visitor sees the same: catalogue search results and anonymous
@@ -19,8 +10,10 @@ export interface CachedPage {
  * changes commits), so a change shows at once; the time limit only bounds a missed notice.
  */
 export class CatalogueCache {
-  readonly searches: ShortCache<LotSearchResult>;
-  readonly pages: ShortCache<CachedPage>;
+  /** Search answers (JSON bytes, ETag, compressed copies) by normalised query. */
+  readonly searches: ShortCache<KeptAnswer>;
+  /** Anonymous server-rendered pages by locale and URL. */
+  readonly pages: ShortCache<KeptAnswer>;
 
   constructor(ttlMs: number, now: () => number = Date.now) {
     this.searches = new ShortCache(ttlMs, 1000, now);

@@ -1,8 +1,7 @@
 import compression from 'compression';
 import express from 'express';
-import { get } from 'node:http';
-import type { AddressInfo } from 'node:net';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
+import { rawGet } from '../../../tests/support/raw-get';
 import { CatalogueCache } from './catalogue-cache';
 import { cachedPages } from './page-cache';
 
@@ -33,23 +32,9 @@ describe('cached pages', () => {
     return server;
   }
 
-  /** GET with node:http, so the bytes are seen as sent (supertest would decode them). */
-  async function raw(server: express.Express, acceptEncoding: string, cookie?: string, acceptLanguage?: string): Promise<{ status: number; headers: Record<string, unknown>; body: Buffer }> {
-    const listening = server.listen(0, '127.0.0.1');
-    await new Promise((resolve) => listening.once('listening', resolve));
-    const { port } = listening.address() as AddressInfo;
-    try {
-      return await new Promise((resolve, reject) => {
-        get({ host: '127.0.0.1', port, path: '/hay', headers: { 'accept-encoding': acceptEncoding, ...(cookie ? { cookie } : {}), ...(acceptLanguage ? { 'accept-language': acceptLanguage } : {}) } }, (res) => {
-          const chunks: Buffer[] = [];
-          res.on('data', (chunk: Buffer) => chunks.push(chunk));
-          res.on('end', () => resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }));
-        }).on('error', reject);
-      });
-    } finally {
-      await new Promise((resolve) => listening.close(resolve));
-    }
-  }
+  /** GET /hay as sent (bytes not decoded). */
+  const raw = (server: express.Express, acceptEncoding: string, cookie?: string, acceptLanguage?: string) =>
+    rawGet(server, '/hay', { 'accept-encoding': acceptEncoding, ...(cookie ? { cookie } : {}), ...(acceptLanguage ? { 'accept-language': acceptLanguage } : {}) });
 
   it('renders once and serves later visitors the same page as brotli, gzip or plain, as each asks', async () => {
     const cache = new CatalogueCache(60_000);

@@ -2,11 +2,11 @@ import { Router } from 'express';
 import { LotSearchSchema } from '@shared/contracts/lots';
 import type { ApiDeps } from '../../api-deps';
 import { idParams } from '../../middleware/id-params';
+import { sendKept } from '../catalogue-cache/kept-answer';
 import { viewLotPage } from './lot-page';
 import { visitorKey } from './lot-views';
 import { LotsService } from './lots.service';
-
-const CATALOGUE_READ_CACHE_CONTROL = 'public, max-age=10, stale-while-revalidate=60';
+import { CATALOGUE_READ_CACHE_CONTROL, searchAnswer } from './search-answers';
 
 export function lotsRouter({ db, clock, catalogueCache, env }: Pick<ApiDeps, 'db' | 'clock' | 'catalogueCache' | 'env'>): Router {
   const service = new LotsService(db);
@@ -14,10 +14,7 @@ export function lotsRouter({ db, clock, catalogueCache, env }: Pick<ApiDeps, 'db
 
   router.get('/', async (req, res) => {
     const query = LotSearchSchema.parse(req.query);
-    // The same for every visitor: browsers and proxies may keep it briefly and revalidate by ETag.
-    res.set('Cache-Control', CATALOGUE_READ_CACHE_CONTROL);
-    const search = () => service.search(query);
-    res.json(catalogueCache ? await catalogueCache.searches.getOrLoad(JSON.stringify(query), search) : await search());
+    sendKept(await searchAnswer(req, query, service, catalogueCache), req, res);
   });
 
   router.get('/:id', async (req, res) => {
