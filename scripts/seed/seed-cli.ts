@@ -1,6 +1,8 @@
+import { createStripeClient } from '../../server/adapters/payments/stripe-client';
 import { createLocalStorage } from '../../server/adapters/storage/file-storage';
 import { readEnv } from '../../server/env';
 import { createDb } from '../../server/db/client';
+import { createLogger } from '../../server/logger';
 import { seedDemo } from './seed';
 
 const env = readEnv();
@@ -11,8 +13,7 @@ if (env.NODE_ENV === 'production') {
 }
 const db = createDb(env.DATABASE_URL, 2);
 seedDemo({
-  db,
-  storage: createLocalStorage(env.UPLOAD_DIR),
+  deps: { env, db, logger: createLogger(env.LOG_LEVEL), storage: createLocalStorage(env.UPLOAD_DIR), stripe: createStripeClient(env) },
   adminEmail: env.ADMIN_EMAIL,
   adminPassword: env.ADMIN_PASSWORD,
   log: (line) => console.log(`[baleproof] ${line}`),

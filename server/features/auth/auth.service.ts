@@ -1,5 +1,5 @@
 import { eq, sql } from 'drizzle-orm';
-import type { SessionUser, SignIn, SignUp } from '@shared/contracts/auth';
+import type { SessionUser, SignIn, SignUp, UserRole } from '@shared/contracts/auth';
 import type { Db } from '../../db/client';
 import { auditEvents, users } from '../../db/schema';
 import { conflict, HttpError } from '../../middleware/http-error';
@@ -7,14 +7,29 @@ import { DUMMY_HASH_PROMISE, hashPassword, verifyPassword } from './password';
 
 const sessionColumns = { id: users.id, email: users.email, displayName: users.displayName, role: users.role };
 
+/** A new account of any role: sign-up makes buyers and growers; operators (and the demo) also make admins. */
+export interface NewAccount {
+  email: string;
+  password: string;
+  displayName: string;
+  role: UserRole;
+  /** Where the user is, for distances; optional. */
+  zip?: string | null;
+}
+
 export class AuthService {
   constructor(private readonly db: Db) {}
 
-  async signUp(input: SignUp): Promise<SessionUser> {
+  signUp(input: SignUp): Promise<SessionUser> {
+    return this.createAccount(input);
+  }
+
+  /** Creates an account (409 when the e-mail is taken) and records it in the audit log. */
+  async createAccount(input: NewAccount): Promise<SessionUser> {
     const passwordHash = await hashPassword(input.password);
     const rows = await this.db
       .insert(users)
-      .values({ email: input.email, passwordHash, displayName: input.displayName, role: input.role })
+      .values({ email: input.email.toLowerCase(), passwordHash, displayName: input.displayName, role: input.role, zip: input.zip ?? null })
       .onConflictDoNothing()
       .returning(sessionColumns);
     const user = rows[0];

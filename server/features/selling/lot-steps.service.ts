@@ -59,6 +59,8 @@ export class LotStepsService {
         priceCentsPerTon: 1,
         status: 'draft',
         draftStep: stepIndex('lot'),
+        createdAt: this.clock.now(),
+        updatedAt: this.clock.now(),
       })
       .returning({ id: lots.id });
     return row!.id;
