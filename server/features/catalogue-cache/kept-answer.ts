@@ -58,10 +58,18 @@ export function sendKept(kept: KeptAnswer, req: Request, res: Response): void {
   res.end(body);
 }
 
+/** The encoding chosen for each Accept-Encoding header seen (browsers send a handful of distinct ones). */
+const chosenEncodings = new Map<string, 'br' | 'gzip' | undefined>();
+
 /** Brotli when the browser takes it (browsers list gzip first at equal weight, brotli is smaller), else gzip, else none. */
 function preferredEncoding(req: Request): 'br' | 'gzip' | undefined {
-  if (!req.headers['accept-encoding']) return undefined;
-  return (['br', 'gzip'] as const).find((encoding) => req.acceptsEncodings(encoding) === encoding);
+  const header = req.headers['accept-encoding'];
+  if (!header) return undefined;
+  if (chosenEncodings.has(header)) return chosenEncodings.get(header);
+  const chosen = (['br', 'gzip'] as const).find((encoding) => req.acceptsEncodings(encoding) === encoding);
+  if (chosenEncodings.size >= 100) chosenEncodings.clear();
+  chosenEncodings.set(header, chosen);
+  return chosen;
 }
 
 /** Brotli at quality 5 and gzip at level 6: near the best size for HTML and JSON at a few milliseconds, once per kept answer. */

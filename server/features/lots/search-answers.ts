@@ -10,6 +10,8 @@ export const CATALOGUE_READ_CACHE_CONTROL = 'public, max-age=10, stale-while-rev
 
 /** One key per search, however its query string was written (order of parameters, defaults left out). */
 const searchKey = (query: LotSearch) => JSON.stringify(query);
+/** The same answer under the URL exactly as it was asked, so a repeat of it needs no query parsing at all. */
+const urlKey = (req: Request) => `url ${req.originalUrl}`;
 
 /**
  * A search's answer as ready bytes, from the catalogue cache when it holds one, else searched and kept
@@ -17,7 +19,14 @@ const searchKey = (query: LotSearch) => JSON.stringify(query);
  */
 export async function searchAnswer(req: Request, query: LotSearch, service: LotsService, cache: CatalogueCache | undefined): Promise<KeptAnswer> {
   const search = async () => keepJson(req, await service.search(query), [['cache-control', CATALOGUE_READ_CACHE_CONTROL]]);
-  return cache ? cache.searches.getOrLoad(searchKey(query), search) : search();
+  if (!cache) return search();
+  const kept = cache.searches.get(searchKey(query));
+  if (kept) return kept;
+  const loaded = await search();
+  // Kept at the same moment under both keys, so neither outlives the other.
+  cache.searches.set(searchKey(query), loaded);
+  cache.searches.set(urlKey(req), loaded);
+  return loaded;
 }
 
 /**
@@ -29,8 +38,11 @@ export async function searchAnswer(req: Request, query: LotSearch, service: Lots
 export function keptSearchAnswers(cache: CatalogueCache | undefined): RequestHandler {
   return (req, res, next) => {
     if (!cache || (req.method !== 'GET' && req.method !== 'HEAD') || (req.path !== '/lots' && req.path !== '/lots/') || carriesSessionCookie(req)) return next();
-    const query = LotSearchSchema.safeParse(req.query);
-    const kept = query.success ? cache.searches.get(searchKey(query.data)) : undefined;
+    let kept = cache.searches.get(urlKey(req));
+    if (!kept) {
+      const query = LotSearchSchema.safeParse(req.query);
+      kept = query.success ? cache.searches.get(searchKey(query.data)) : undefined;
+    }
     if (!kept) return next();
     sendKept(kept, req, res);
   };
