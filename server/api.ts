@@ -55,21 +55,23 @@ export function createApi(deps: ApiDeps): Express {
   const api = express();
   api.disable('x-powered-by');
   api.set('trust proxy', 'loopback');
-  api.use(
-    pinoHttp({
-      logger,
-      autoLogging: { ignore: (req) => req.url === '/health' },
-      // Method, path and status are enough; headers (cookies!) and bodies are never logged.
-      serializers: {
-        req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
-        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
-      },
-    }),
-  );
-  api.use(helmet());
-  // A visitor's repeated catalogue search is answered here, with the security headers but before the
-  // session store, passport and CSRF (features/lots/search-answers.ts).
-  api.use(keptSearchAnswers(deps.catalogueCache));
+  const securityHeaders = helmet();
+  const requestLog = pinoHttp({
+    logger,
+    autoLogging: { ignore: (req) => req.url === '/health' },
+    // Method, path and status are enough; headers (cookies!) and bodies are never logged.
+    serializers: {
+      req: (req: { id: unknown; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+      res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+    },
+  });
+  // A visitor's repeated catalogue search is answered from kept bytes, with the security headers but before
+  // the session store, passport and CSRF (features/lots/search-answers.ts). Answered requests are logged at
+  // info; with that level off the request log would write nothing for them, so they are answered before it.
+  const keptSearches = keptSearchAnswers(deps.catalogueCache, securityHeaders);
+  if (logger.isLevelEnabled('info')) api.use(requestLog, keptSearches);
+  else api.use(keptSearches, requestLog);
+  api.use(securityHeaders);
   const orderFeature = createOrderFeature(deps);
   // Verified on the raw bytes, so before the JSON parser; the provider holds no CSRF cookie.
   api.use('/payments/webhook', paymentWebhookRouter(orderFeature));

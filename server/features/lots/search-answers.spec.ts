@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import express from 'express';
+import helmet from 'helmet';
 import request from 'supertest';
 import { eq } from 'drizzle-orm';
 import { LotSearchSchema } from '@shared/contracts/lots';
@@ -30,7 +31,7 @@ describe('kept search answers', () => {
   const path = `/lots?q=${tag}&sort=price`;
   const fastOnly = () => {
     const app = express();
-    app.use(keptSearchAnswers(cache));
+    app.use(keptSearchAnswers(cache, helmet()));
     app.use((_req, res) => void res.status(418).end());
     return app;
   };
@@ -69,11 +70,13 @@ describe('kept search answers', () => {
     expect(reordered.body.equals(full.body)).toBe(true);
   });
 
-  it('keeps the security headers on kept answers (the API sets them before this step)', async () => {
-    await t.agent().get(path);
+  it('keeps the security headers on kept answers: the same as the full chain sends', async () => {
+    const full = await raw(t.api, path, 'identity', { cookie: await sessionCookie() });
     const res = await request(t.api).get(path);
+    expect((await raw(fastOnly(), path, 'identity')).status).toBe(200);
     expect(res.headers['x-content-type-options']).toBe('nosniff');
     expect(res.headers['content-security-policy']).toContain("default-src 'self'");
+    for (const name of ['content-security-policy', 'strict-transport-security', 'x-frame-options', 'referrer-policy', 'cross-origin-resource-policy']) expect(res.headers[name]).toBe(full.headers[name]);
     expect(res.headers['set-cookie']).toBeUndefined();
   });
 

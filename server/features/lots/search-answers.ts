@@ -33,9 +33,10 @@ export async function searchAnswer(req: Request, query: LotSearch, service: Lots
  * Answers a visitor's repeated search (GET /lots, no session cookie) from the kept bytes before the
  * body parser, session store, passport and CSRF check run: none of them changes what a search returns.
  * Everything else (a signed-in request, a search not kept yet, bad input) goes on to the full chain,
- * which searches, keeps the answer and sends the same bytes. Mount it after the security headers.
+ * which searches, keeps the answer and sends the same bytes. `securityHeaders` (the API's helmet) is applied
+ * to every answer sent here.
  */
-export function keptSearchAnswers(cache: CatalogueCache | undefined): RequestHandler {
+export function keptSearchAnswers(cache: CatalogueCache | undefined, securityHeaders: RequestHandler): RequestHandler {
   return (req, res, next) => {
     if (!cache || (req.method !== 'GET' && req.method !== 'HEAD') || (req.path !== '/lots' && req.path !== '/lots/') || carriesSessionCookie(req)) return next();
     let kept = cache.searches.get(urlKey(req));
@@ -44,6 +45,7 @@ export function keptSearchAnswers(cache: CatalogueCache | undefined): RequestHan
       kept = query.success ? cache.searches.get(searchKey(query.data)) : undefined;
     }
     if (!kept) return next();
-    sendKept(kept, req, res);
+    const answer = kept;
+    void securityHeaders(req, res, (err?: unknown) => (err ? next(err) : sendKept(answer, req, res)));
   };
 }
