@@ -18,6 +18,7 @@ import { listenForCatalogueChanges } from '../server/features/catalogue-cache/ca
 import { cachedPages } from '../server/features/catalogue-cache/page-cache';
 import { mediaRouter } from '../server/features/media/media.router';
 import { registerOrderSweeps, scheduleOrderSweeps } from '../server/features/orders/order-sweeps';
+import { registerSamplingVerdictRefresh, startSamplingVerdictRefresh } from '../server/features/lots/sampling-verdict-refresh';
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 import { loopbackRenderRequest } from '../server/middleware/render-request';
@@ -93,12 +94,14 @@ if (isEntry && cluster.isPrimary && workerCount() > 1) {
 } else if (isEntry) {
   const port = deps.env.PORT;
   const stopListening = deps.catalogueCache ? listenForCatalogueChanges(deps.env.DATABASE_URL, deps.catalogueCache, deps.logger) : async () => undefined;
-  // The job queue (e-mail outbox, order sweeps) creates its tables on first start and works in the background;
-  // the sweeps' cron schedule is stored once and ticks once a minute however many workers run.
+  // The job queue (e-mail outbox, order sweeps, sampling verdicts) creates its tables on first start and works in
+  // the background; the cron schedules are stored once and tick however many workers run.
   registerOrderSweeps(deps);
+  registerSamplingVerdictRefresh(deps);
   deps.jobs
     .start()
     .then(() => scheduleOrderSweeps(deps))
+    .then(() => startSamplingVerdictRefresh(deps))
     .catch((err) => deps.logger.error({ err }, 'job queue did not start; jobs wait in the database'));
   const server = app.listen(port, '127.0.0.1', (error) => {
     if (error) throw error;

@@ -32,8 +32,11 @@ export interface DrainOutcome {
  * with backoff and log every failure. Nothing is lost if the process stops: jobs wait in the table.
  */
 export interface JobQueue {
-  /** Adds a job; resolves once it is stored. */
-  enqueue<T extends object>(kind: JobKind<T>, data: T, options?: { startAfter?: Date; singletonKey?: string }): Promise<string>;
+  /**
+   * Adds a job; resolves with its id once it is stored. A 'stately' queue that already has one waiting stores
+   * nothing: that throws, unless `unlessWaiting` is set (the waiting job does the same work), which resolves ''.
+   */
+  enqueue<T extends object>(kind: JobKind<T>, data: T, options?: { startAfter?: Date; singletonKey?: string; unlessWaiting?: boolean }): Promise<string>;
   /** Says what to do with jobs of a kind. Register before or after `start()`. */
   register<T extends object>(kind: JobKind<T>, handler: JobHandler<T>): void;
   /**
@@ -165,6 +168,7 @@ export function createJobQueue(options: JobQueueOptions): JobQueue {
     async enqueue(kind, data, opts = {}) {
       await ensureQueue(kind as JobKind<object>);
       const id = await boss.send(kind.name, kind.parse(data), { startAfter: opts.startAfter, singletonKey: opts.singletonKey });
+      if (!id && opts.unlessWaiting) return '';
       if (!id) throw new Error(`job not stored in queue ${kind.name}`);
       return id;
     },

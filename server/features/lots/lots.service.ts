@@ -6,7 +6,7 @@ import type { Db } from '../../db/client';
 import { farms, labAnalyses, lots, lotSearch, photos, samplingRecords, type PhotoVariant } from '../../db/schema';
 import { farmDistanceSql, farmWithinSql, locateZip } from '../geo/geo';
 import { evaluationOf } from '../selling/analysis-values';
-import { samplingFactsOf } from '@shared/contracts/sampling-record';
+import { samplingFactsOf } from '@shared/forage/sampling-verdict';
 import { storedSamplingVerdict } from './sampling-report';
 import { costPerTonDryMatterCents } from '@shared/pricing/cost-per-nutrient';
 import { balesToTons, roundCents } from '@shared/units';

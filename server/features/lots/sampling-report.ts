@@ -1,6 +1,7 @@
-import { eq, sql } from 'drizzle-orm';
+import { isDeepStrictEqual } from 'node:util';
+import { and, asc, eq, gt, inArray, sql } from 'drizzle-orm';
 import type { Finding, SamplingEvaluation } from '@shared/forage';
-import { samplingVerdictOf } from '@shared/contracts/sampling-record';
+import { samplingVerdictOf } from '@shared/forage/sampling-verdict';
 import type { Db } from '../../db/client';
 import { lots, samplingRecords } from '../../db/schema';
 
@@ -21,4 +22,35 @@ export async function refreshSamplingVerdict(tx: Tx | Db, lotId: number, now: Da
   if (!row) return;
   const verdict = samplingVerdictOf(row.lot, row.s, now);
   await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: sql`now()` }).where(eq(samplingRecords.id, row.s.id));
+}
+
+const PAGE = 500;
+
+/**
+ * Brings every stored verdict up to today's rules: a row stored before a rule changed keeps its old verdict
+ * until one of its inputs changes, and the catalogue filter (which reads the stored verdict) would then
+ * disagree with what the rules say. Only rows whose verdict differs are written, a page at a time, so a
+ * run over an up-to-date table writes nothing. `lotIds` limits the run to those lots. Returns how many changed.
+ */
+export async function refreshStoredSamplingVerdicts(db: Db, now: Date, lotIds?: number[]): Promise<number> {
+  let changed = 0;
+  let after = 0;
+  for (;;) {
+    const page = await db
+      .select({ s: samplingRecords, lot: lots })
+      .from(samplingRecords)
+      .innerJoin(lots, eq(lots.id, samplingRecords.lotId))
+      .where(and(gt(samplingRecords.id, after), lotIds ? inArray(samplingRecords.lotId, lotIds) : undefined))
+      .orderBy(asc(samplingRecords.id))
+      .limit(PAGE);
+    for (const { s, lot } of page) {
+      const verdict = samplingVerdictOf(lot, s, now);
+      // Compared as values: PostgreSQL's jsonb keeps object keys in its own order.
+      if (verdict.compliant === s.compliant && isDeepStrictEqual(verdict.findings, s.findings)) continue;
+      await db.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: now }).where(eq(samplingRecords.id, s.id));
+      changed += 1;
+    }
+    if (page.length < PAGE) return changed;
+    after = page[page.length - 1]!.s.id;
+  }
 }

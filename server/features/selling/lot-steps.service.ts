@@ -14,7 +14,7 @@ import {
 } from '@shared/contracts/selling';
 import { listedPricePerTonCents } from '@shared/pricing/price-per-ton';
 import { afterReviewedChange, factsNeedingReview, statusAfterStockChange } from '@shared/lifecycle/lot-lifecycle';
-import { samplingVerdictOf } from '@shared/contracts/sampling-record';
+import { samplingVerdictOf } from '@shared/forage/sampling-verdict';
 import { assertLotDates, type LotDateField, type LotDates } from '@shared/contracts/lot-dates';
 import { refreshSamplingVerdict } from '../lots/sampling-report';
 import type { Clock } from '../../clock';

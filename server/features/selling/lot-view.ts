@@ -4,7 +4,7 @@ import type { Clock } from '../../clock';
 import type { Db } from '../../db/client';
 import { labAnalyses, photos, samplingRecords, storedFiles } from '../../db/schema';
 import { photoView } from '../lots/lots.service';
-import { samplingFactsOf } from '@shared/contracts/sampling-record';
+import { samplingFactsOf } from '@shared/forage/sampling-verdict';
 import { storedSamplingVerdict } from '../lots/sampling-report';
 import { enteredValuesOf, evaluationOf } from './analysis-values';
 import { findLotWithFarm } from './lot-access';

@@ -8,7 +8,7 @@ import { MatOption, MatSelect } from '@angular/material/select';
 import { CORE_POSITION_LABELS } from '@shared/contracts/labels';
 import { lotDateIssues } from '@shared/contracts/lot-dates';
 import { SamplingStepSchema, type EditableLot } from '@shared/contracts/selling';
-import { samplingVerdictOf } from '@shared/contracts/sampling-record';
+import { samplingVerdictOf } from '@shared/forage/sampling-verdict';
 import { FindingsList } from '../ui/findings-list';
 import { SellingApi } from '../selling-api';
 import { numberOrNull, StepSave } from './step-save';

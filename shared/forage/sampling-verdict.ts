@@ -1,7 +1,8 @@
-import { evaluateSampling, type SamplingEvaluation, type SamplingRecord } from '../forage';
+import type { CorePosition } from '../contracts/enums';
+import { baleShapeOf, type BaleType } from '../contracts/lots';
 import { balesToTons } from '../units/bales';
-import type { CorePosition } from './enums';
-import { baleShapeOf, type BaleType } from './lots';
+import type { SamplingEvaluation, SamplingRecord } from './forage-contract';
+import { evaluateSampling } from './sampling-findings';
 
 /** What the sampling check needs from the lot itself: bale shape, harvest window, size and listing date. */
 export interface SamplingLotFacts {
@@ -55,8 +56,9 @@ export function samplingRecordOf(lot: SamplingLotFacts, s: SamplingFacts): Sampl
 /**
  * The sampling verdict, the one rule for it: the record checked against the protocol as of the day the
  * lot was first listed, or `now` while it never was (the sample-age check needs a date). The server
- * stores it with the sampling record whenever one of its inputs changes, and every reader (catalogue
- * filter, lot page, lot form, review desk) reads that stored verdict, so they cannot disagree.
+ * stores it with the sampling record whenever one of its inputs changes and refreshes every stored one
+ * on start and daily (so rows saved under earlier rules catch up); every reader (catalogue filter, lot
+ * page, lot form, review desk) reads that stored verdict, so they cannot disagree.
  */
 export function samplingVerdictOf(lot: SamplingLotFacts, s: SamplingFacts, now: Date): SamplingEvaluation {
   return evaluateSampling(samplingRecordOf(lot, s), { listedOn: (lot.publishedAt ?? now).toISOString() });
