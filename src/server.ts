@@ -23,6 +23,7 @@ import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 import { loopbackRenderRequest } from '../server/middleware/render-request';
 import { pageErrorHandler } from '../server/middleware/page-error';
+import { STATIC_CONTENT_SECURITY_POLICY } from '../server/middleware/page-csp';
 
 const browserDistFolder = join(import.meta.dirname, '../browser');
 
@@ -36,9 +37,13 @@ app.use(compression());
 app.use('/api', createApi(deps));
 app.use('/media', mediaRouter(deps.storage));
 
-// Security headers for pages; the API sets its own stricter set. Angular's inline hydration script
-// needs a nonce-based CSP, left for when one is configured.
-app.use(helmet({ contentSecurityPolicy: false }));
+// Security headers for pages; the API sets its own stricter set. The Content-Security-Policy here allows
+// no inline script (static files, error pages); each rendered page replaces it with one that also allows its
+// own inline scripts by hash (cachedPages, server/middleware/page-csp.ts).
+app.use(helmet({ contentSecurityPolicy: false }), (_req, res, next) => {
+  res.setHeader('Content-Security-Policy', STATIC_CONTENT_SECURITY_POLICY);
+  next();
+});
 
 // Static files: the brotli or gzip copy made at build time (scripts/build/precompress.ts) when the browser
 // takes it, else the file itself.

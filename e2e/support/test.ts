@@ -1,4 +1,4 @@
-import { test as base, type Browser, type Page } from '@playwright/test';
+import { test as base, expect, type Browser, type Page } from '@playwright/test';
 
 export * from '@playwright/test';
 
@@ -8,9 +8,19 @@ export * from '@playwright/test';
  * field before hydration would put text in the DOM that its form never sees, as a person typing that
  * early would find too.
  */
-export const test = base.extend({
+export const test = base.extend<{ cspViolations: string[] }>({
+  // Every journey fails if the browser reports a Content-Security-Policy violation on any of its pages: a
+  // blocked inline script stops hydration, which a journey might otherwise only notice as a slow page.
+  cspViolations: [
+    async ({}, use) => {
+      violations.length = 0;
+      await use(violations);
+      expect(violations, 'Content-Security-Policy violations').toEqual([]);
+    },
+    { auto: true },
+  ],
   page: async ({ page }, use) => {
-    await use(waitingForTheApp(page));
+    await use(await waitingForTheApp(page));
   },
 });
 
@@ -19,12 +29,25 @@ export async function freshPage(browser: Browser): Promise<Page> {
   return waitingForTheApp(await (await browser.newContext()).newPage());
 }
 
+/** CSP violations reported by the current journey's pages (the browser's console message, or the DOM event). */
+const violations: string[] = [];
+
+async function watchingForCspViolations(page: Page): Promise<void> {
+  page.on('console', (message) => {
+    if (/Content Security Policy/i.test(message.text())) violations.push(`${page.url()}: ${message.text()}`);
+  });
+  await page.addInitScript(() =>
+    document.addEventListener('securitypolicyviolation', (e) => console.error(`Content Security Policy violation: ${e.violatedDirective} blocked ${e.blockedURI || 'inline'} (${e.sample})`)),
+  );
+}
+
 /** Resolves once the app on this page is interactive. */
 export async function whenInteractive(page: Page): Promise<void> {
   await page.locator('html[data-interactive]').waitFor({ state: 'attached' });
 }
 
-function waitingForTheApp(page: Page): Page {
+async function waitingForTheApp(page: Page): Promise<Page> {
+  await watchingForCspViolations(page);
   const goto = page.goto.bind(page);
   const reload = page.reload.bind(page);
   const settle = async <R extends Awaited<ReturnType<Page['goto']>>>(response: R): Promise<R> => {

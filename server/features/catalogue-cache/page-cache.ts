@@ -1,5 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
 import { localeOfHeader } from '@shared/contracts/locales';
+import { pageContentSecurityPolicy } from '../../middleware/page-csp';
 import { carriesSessionCookie } from '../../middleware/session-cookie';
 import type { CatalogueCache } from './catalogue-cache';
 import { sendKept, type KeptAnswer } from './kept-answer';
@@ -12,6 +13,7 @@ type Render = (req: Request) => Promise<globalThis.Response | null | undefined>;
  * the renderer) for the cache's short life so the next visitor to the same URL in the same locale gets it
  * without rendering.
  * A kept page is also kept compressed (brotli, gzip) once asked for, so a hit costs no compression.
+ * Every rendered page, kept or not, gets a Content-Security-Policy hashed from its own inline scripts.
  */
 export function cachedPages(render: Render, write: (response: globalThis.Response, res: Response) => Promise<void>, cache: CatalogueCache | undefined) {
   return async (req: Request, res: Response, next: NextFunction): Promise<void> => {
@@ -20,13 +22,27 @@ export function cachedPages(render: Render, write: (response: globalThis.Respons
     const key = `${localeOfHeader(req.headers['accept-language'])} ${req.originalUrl}`;
     const hit = anonymous ? cache?.pages.get(key) : undefined;
     if (hit) return send(hit, req, res);
-    const response = await render(req);
-    if (!response) return next();
+    const rendered = await render(req);
+    if (!rendered) return next();
+    const response = await withPagePolicy(rendered);
     if (!cache || !anonymous || response.status !== 200 || response.headers.has('set-cookie')) return write(response, res);
     const page: KeptAnswer = { status: response.status, headers: [...response.headers], body: Buffer.from(await response.arrayBuffer()) };
     cache.pages.set(key, page);
     send(page, req, res);
   };
+}
+
+/**
+ * The rendered page with its Content-Security-Policy, worked out from its HTML once: a kept page keeps the
+ * header, so the hashes always match the bytes sent (no per-request nonce to stamp into a kept copy).
+ */
+async function withPagePolicy(response: globalThis.Response): Promise<globalThis.Response> {
+  if (!response.body || !response.headers.get('content-type')?.startsWith('text/html')) return response;
+  const html = await response.text();
+  const headers = new Headers(response.headers);
+  headers.set('content-security-policy', pageContentSecurityPolicy(html));
+  headers.delete('content-length');
+  return new Response(html, { status: response.status, statusText: response.statusText, headers });
 }
 
 function send(page: KeptAnswer, req: Request, res: Response): void {
