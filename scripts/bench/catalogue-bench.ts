@@ -1,7 +1,7 @@
 /**
  * `npm run bench`: the catalogue at scale, measured against a bare Express route in the same run.
  *
- * scripts/bench/run.sh prepares a scratch database (baleproof_bench) and the production build, then runs
+ * scripts/bench/run.sh prepares a scratch database (baleproof_bench plus the checkout's DB_SUFFIX) and the production build, then runs
  * this file, which fills the database with synthetic lots (BENCH_LOTS, default 100,000), prints the
  * EXPLAIN (ANALYZE) plan of every SQL statement behind each typical catalogue query, starts the built
  * server (dist/) and a bare Express 5 route answering a 12-item JSON, loads each with autocannon
