@@ -16,6 +16,8 @@ import { createAuthenticator } from '../server/features/auth/auth.router';
 import { createAppDeps } from '../server/app-deps';
 import { listenForCatalogueChanges } from '../server/features/catalogue-cache/catalogue-cache';
 import { cachedPages } from '../server/features/catalogue-cache/page-cache';
+import { countKeptLotPageView } from '../server/features/lots/lot-views';
+import { registerViewMarkPrune, scheduleViewMarkPrune } from '../server/features/lots/view-mark-prune';
 import { mediaRouter } from '../server/features/media/media.router';
 import { registerOrderSweeps, scheduleOrderSweeps } from '../server/features/orders/order-sweeps';
 import { registerSamplingVerdictRefresh, startSamplingVerdictRefresh } from '../server/features/lots/sampling-verdict-refresh';
@@ -62,7 +64,8 @@ app.use(createSessionMiddleware(deps), createAuthenticator(deps.db).session(), c
 
 // The renderer sees the page on the app's own loopback port, so its API calls (with the visitor's cookie)
 // can never be sent where a Host or X-Forwarded-Host header points.
-app.use(cachedPages((req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)), writeResponseToNodeResponse, deps.catalogueCache));
+// A kept lot page still counts its visitor's view (the render's API call would have).
+app.use(cachedPages((req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)), writeResponseToNodeResponse, deps.catalogueCache, countKeptLotPageView(deps)));
 // A friendly page (503 when the database is unreachable) instead of Express's default error output.
 app.use(pageErrorHandler(deps.logger));
 
@@ -103,9 +106,10 @@ if (isEntry && cluster.isPrimary && workerCount() > 1) {
   // the background; the cron schedules are stored once and tick however many workers run.
   registerOrderSweeps(deps);
   registerSamplingVerdictRefresh(deps);
+  registerViewMarkPrune(deps);
   deps.jobs
     .start()
-    .then(() => scheduleOrderSweeps(deps))
+    .then(() => Promise.all([scheduleOrderSweeps(deps), scheduleViewMarkPrune(deps)]))
     .then(() => startSamplingVerdictRefresh(deps))
     .catch((err) => deps.logger.error({ err }, 'job queue did not start; jobs wait in the database'));
   const server = app.listen(port, '127.0.0.1', (error) => {

@@ -14,14 +14,19 @@ type Render = (req: Request) => Promise<globalThis.Response | null | undefined>;
  * without rendering.
  * A kept page is also kept compressed (brotli, gzip) once asked for, so a hit costs no compression.
  * Every rendered page, kept or not, gets a Content-Security-Policy hashed from its own inline scripts.
+ * `onHit` runs after a kept page is sent.
  */
-export function cachedPages(render: Render, write: (response: globalThis.Response, res: Response) => Promise<void>, cache: CatalogueCache | undefined) {
+export function cachedPages(render: Render, write: (response: globalThis.Response, res: Response) => Promise<void>, cache: CatalogueCache | undefined, onHit?: (req: Request) => void) {
   return async (req: Request, res: Response, next: NextFunction): Promise<void> => {
     const anonymous = req.method === 'GET' && !carriesSessionCookie(req);
     // Pages are rendered in the reader's locale (dates, numbers, money), so each locale keeps its own copy.
     const key = `${localeOfHeader(req.headers['accept-language'])} ${req.originalUrl}`;
     const hit = anonymous ? cache?.pages.get(key) : undefined;
-    if (hit) return send(hit, req, res);
+    if (hit) {
+      send(hit, req, res);
+      // What a render would have done besides rendering (counting a lot's view), after the page is sent.
+      return onHit?.(req);
+    }
     const rendered = await render(req);
     if (!rendered) return next();
     const response = await withPagePolicy(rendered);

@@ -1,6 +1,11 @@
 import { eq } from 'drizzle-orm';
+import express from 'express';
 import request from 'supertest';
-import { lots } from '../../db/schema';
+import { CatalogueCache } from '../catalogue-cache/catalogue-cache';
+import { cachedPages } from '../catalogue-cache/page-cache';
+import { countKeptLotPageView } from './lot-views';
+import { PRUNE_VIEW_MARKS, PRUNE_VIEW_MARKS_CRON, registerViewMarkPrune, scheduleViewMarkPrune } from './view-mark-prune';
+import { lots, lotViewMarks } from '../../db/schema';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { signedInUser } from '../../../tests/support/grower-lot';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
@@ -65,4 +70,64 @@ describe('lot view count', () => {
     expect(answers.every((r) => r.status === 200)).toBe(true);
     expect(await views()).toBe(start + 1);
   });
+
+  it('counts a visitor served a kept lot page (no render, no API call) by the same once-a-day rule', async () => {
+    t.clock.set(new Date(Date.parse(TEST_NOW) + 9 * 86_400_000));
+    const grower = await createGrower(t.deps.db);
+    const paused = (await createLot(t.deps.db, grower.farm.id, { title: 'Not listed', status: 'in_review' })).id;
+    const cache = new CatalogueCache(60_000);
+    cache.setListening(true);
+    // The renderer stands in for Angular's: it renders any lot page once; later visitors get the kept copy.
+    const pages = express();
+    pages.use(
+      cachedPages(
+        async () => new Response('<!doctype html><html><body><app-root>Lot</app-root></body></html>', { status: 200, headers: { 'content-type': 'text/html' } }),
+        async (response, res) => void res.status(response.status).send(Buffer.from(await response.arrayBuffer())),
+        cache,
+        countKeptLotPageView(t.deps),
+      ),
+    );
+    const page = (path: string, agent: string) => request(pages).get(path).set('User-Agent', agent);
+    const start = await views();
+    // The first visit renders (the renderer's API call counts that one); the hits after it are kept copies.
+    await page(`/hay/${lotId}`, SAFARI);
+    for (let i = 0; i < 3; i += 1) expect((await page(`/hay/${lotId}`, FIREFOX)).status).toBe(200);
+    await page(`/hay/${lotId}`, CRAWLER);
+    await page(`/hay/${lotId}?sort=price`, FIREFOX);
+    await waitForCounting();
+    expect(await views()).toBe(start + 1);
+    // A lot that is not on sale is not counted, whatever page the visitor was served.
+    await page(`/hay/${paused}`, SAFARI);
+    await page(`/hay/${paused}`, FIREFOX);
+    await waitForCounting();
+    expect((await t.deps.db.select({ n: lots.viewCount }).from(lots).where(eq(lots.id, paused)))[0]!.n).toBe(0);
+  });
+
+  it('drops view marks of days before yesterday in a daily job, keeping the counts and still counting a visit once today', async () => {
+    registerViewMarkPrune(t.deps);
+    await scheduleViewMarkPrune(t.deps);
+    expect((await t.deps.jobs.schedules()).filter((s) => s.name === PRUNE_VIEW_MARKS.name)).toEqual([{ name: PRUNE_VIEW_MARKS.name, cron: PRUNE_VIEW_MARKS_CRON }]);
+    const today = new Date(Date.parse(TEST_NOW) + 20 * 86_400_000);
+    const day = (offset: number) => new Date(today.getTime() + offset * 86_400_000).toISOString().slice(0, 10);
+    t.clock.set(new Date(today.getTime() - 86_400_000));
+    await visit(FIREFOX);
+    t.clock.set(today);
+    await visit(FIREFOX);
+    const before = await views();
+    await t.deps.db.insert(lotViewMarks).values([{ lotId, visitor: 'v:old-visitor', day: day(-30) }, { lotId, visitor: 'v:old-visitor', day: day(-2) }]);
+
+    await t.deps.jobs.enqueue(PRUNE_VIEW_MARKS, {});
+    expect((await t.drainJobs()).failed).toBe(0);
+    const left = (await t.deps.db.select({ day: lotViewMarks.day }).from(lotViewMarks).where(eq(lotViewMarks.lotId, lotId))).map((m) => m.day).sort();
+    expect(left.every((d) => d >= day(-1))).toBe(true);
+    expect(left).toEqual(expect.arrayContaining([day(-1), day(0)]));
+    expect(await views()).toBe(before);
+    // Today's mark is kept, so the same visitor is still counted once today.
+    await visit(FIREFOX);
+    expect(await views()).toBe(before);
+  });
 });
+
+
+/** A kept page is sent before its view is counted; give the count a moment to land. */
+const waitForCounting = () => new Promise((resolve) => setTimeout(resolve, 300));

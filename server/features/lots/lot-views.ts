@@ -1,6 +1,7 @@
 import { createHmac } from 'node:crypto';
 import type { Request } from 'express';
 import { sql } from 'drizzle-orm';
+import type { ApiDeps } from '../../api-deps';
 import type { Db } from '../../db/client';
 
 /** User agents of crawlers, link previewers and scripts (common practice: these words name them); their reads are not views. */
@@ -17,14 +18,35 @@ export function visitorKey(req: Pick<Request, 'ip' | 'headers'> & { user?: Expre
   return `v:${createHmac('sha256', secret).update(`${req.ip ?? ''}\n${agent}`).digest('base64url').slice(0, 32)}`;
 }
 
-/** Counts one view of a lot per visitor per day (UTC): the day's mark and the count change in one statement. */
+/**
+ * Counts one view of a listed lot per visitor per day (UTC): the day's mark and the count change in one
+ * statement. A lot not on sale gets no mark and no view.
+ */
 export async function countLotView(db: Db, lotId: number, visitor: string, now: Date): Promise<boolean> {
   const day = now.toISOString().slice(0, 10);
   const counted = await db.execute(sql`
     with mark as (
-      insert into lot_view_marks (lot_id, visitor, day) values (${lotId}, ${visitor}, ${day})
+      insert into lot_view_marks (lot_id, visitor, day)
+      select id, ${visitor}, ${day} from lots where id = ${lotId} and status = 'listed'
       on conflict do nothing returning lot_id
     )
     update lots set view_count = view_count + 1 where id in (select lot_id from mark) returning id`);
   return counted.rows.length > 0;
+}
+
+/** A lot page's path (`/hay/42`, any query) as the app routes it. */
+const LOT_PAGE_PATH = /^\/hay\/([1-9]\d{0,9})(?:[?#]|$)/;
+
+/**
+ * Counts the view of a lot page served from the page cache: no render and no API call happen then, so the
+ * count is taken here with the same rule (a visitor's key, once a day, robots not). Kept pages are only
+ * anonymous visitors' pages. The page goes out first; a failed count is logged, never the visitor's problem.
+ */
+export function countKeptLotPageView({ db, clock, env, logger }: Pick<ApiDeps, 'db' | 'clock' | 'env' | 'logger'>) {
+  return (req: Request): void => {
+    const id = Number(LOT_PAGE_PATH.exec(req.originalUrl)?.[1]);
+    const visitor = visitorKey(req, env.SESSION_SECRET);
+    if (!visitor || !Number.isSafeInteger(id) || id > 2_147_483_647) return;
+    countLotView(db, id, visitor, clock.now()).catch((err) => logger.warn({ err, lotId: id }, 'kept lot page: view not counted'));
+  };
 }
