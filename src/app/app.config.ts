@@ -1,6 +1,6 @@
 import { HttpXsrfTokenExtractor, provideHttpClient, withFetch, withInterceptors } from '@angular/common/http';
 import { ApplicationConfig, inject, provideAppInitializer, provideBrowserGlobalErrorListeners } from '@angular/core';
-import { provideClientHydration, withEventReplay } from '@angular/platform-browser';
+import { provideClientHydration, withEventReplay, withIncrementalHydration } from '@angular/platform-browser';
 import { provideRouter, withComponentInputBinding, withInMemoryScrolling } from '@angular/router';
 import { MatIconRegistry } from '@angular/material/icon';
 import { routes } from './app.routes';
@@ -18,7 +18,8 @@ export const appConfig: ApplicationConfig = {
     provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer, pageUnavailableOnServer])),
     // After provideHttpClient, so it replaces Angular's one-name cookie reader.
     { provide: HttpXsrfTokenExtractor, useClass: XsrfTokenFromCookie },
-    provideClientHydration(withEventReplay()),
+    // Incremental: `@defer (hydrate …)` blocks keep the server's DOM and wake on their trigger (catalogue grid).
+    provideClientHydration(withEventReplay(), withIncrementalHydration()),
     provideAppInitializer(() => {
       inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');
       return inject(Session).load();

@@ -1,5 +1,5 @@
 import { DecimalPipe } from '@angular/common';
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, effect, inject, signal } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, DOCUMENT, effect, inject, signal } from '@angular/core';
 import { takeUntilDestroyed, toSignal } from '@angular/core/rxjs-interop';
 import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
@@ -12,6 +12,7 @@ import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { debounceTime, switchMap } from 'rxjs';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
 import type { LotSearchResult } from '@shared/contracts/lots';
+import { KeepTypedValue } from '../../../core/keep-typed-value';
 import { errorOf, requestState, valueOf, type RequestState } from '../../../core/request-state';
 import { LotCard } from '../lot-card/lot-card';
 import { LotMap } from '../lot-map/lot-map';
@@ -25,7 +26,7 @@ import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, queryFromForm, S
 /** The catalogue: filters in the URL, results rendered on the server. */
 @Component({
   selector: 'app-lot-search-page',
-  imports: [DecimalPipe, ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar, LotMap],
+  imports: [DecimalPipe, ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar, LotMap, KeepTypedValue],
   templateUrl: './lot-search-page.html',
   styleUrl: './lot-search-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -45,6 +46,9 @@ export class LotSearchPage {
   );
 
   protected readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
+  private readonly firstParams = this.params();
+  /** The URL has moved on from the one the page opened with (the server's page no longer shows it). */
+  protected readonly searchMoved = computed(() => this.params() !== this.firstParams);
 
   /** What the API is asked (a distance sort without a ZIP is dropped, with a note). */
   protected readonly apiQuery = computed(() => apiQueryFor(this.params()));
@@ -83,6 +87,14 @@ export class LotSearchPage {
 
   constructor() {
     afterNextRender(() => this.compare.restore());
+    // Until the filters wake (they hydrate on interaction), Enter or "Show hay" would submit the server's form
+    // natively and reload the page; the submit is replayed to the form once it is live.
+    const document = inject(DOCUMENT);
+    const keepFormHere = (event: Event) => {
+      if ((event.target as Element | null)?.id === 'lot-filters') event.preventDefault();
+    };
+    afterNextRender(() => document.addEventListener('submit', keepFormHere, true));
+    inject(DestroyRef).onDestroy(() => document.removeEventListener('submit', keepFormHere, true));
     // Filters apply as they change, once typing pauses.
     this.filters.valueChanges.pipe(debounceTime(450), takeUntilDestroyed()).subscribe(() => this.applyFilters());
     // Keep the form showing what the URL says (also after back/forward).
