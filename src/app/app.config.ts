@@ -18,7 +18,7 @@ export const appConfig: ApplicationConfig = {
     provideHttpClient(withFetch(), withInterceptors([forwardCookiesOnServer, pageUnavailableOnServer])),
     // After provideHttpClient, so it replaces Angular's one-name cookie reader.
     { provide: HttpXsrfTokenExtractor, useClass: XsrfTokenFromCookie },
-    // Incremental: `@defer (hydrate …)` blocks keep the server's DOM and wake on their trigger (catalogue grid).
+    // Incremental: `@defer (hydrate …)` blocks keep the server's DOM until their trigger (the catalogue page).
     provideClientHydration(withEventReplay(), withIncrementalHydration()),
     provideAppInitializer(() => {
       inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');
