@@ -200,6 +200,7 @@ test('a new grower sets up the farm profile and a payout account before listing'
   await page.getByLabel('E-mail').fill(`grower.${Date.now()}@e2e.baleproof.example`);
   await page.getByLabel('Password').fill('a-long-enough-password');
   await page.getByRole('button', { name: 'Create account' }).click();
+  await page.getByRole('link', { name: 'Continue' }).click();
 
   await expect(page).toHaveURL(/\/selling$/);
   await expect(page.getByRole('note')).toContainText('set up your farm profile');

@@ -1,4 +1,5 @@
 import { expect, test } from './support/test';
+import { waitForMail } from './support/mail-catcher';
 
 // Demo accounts from the seed (README lists them).
 const accounts = [
@@ -32,13 +33,36 @@ test.describe('signing in', () => {
     await expect(page).toHaveURL(/\/sign-in/);
   });
 
-  test('a new buyer signs up and is signed in', async ({ page }) => {
+  test('a new buyer signs up, is signed in, and confirms the address from the e-mail', async ({ page }) => {
+    const email = `new.${Date.now()}@e2e.baleproof.example`;
     await page.goto('/sign-up');
     await page.getByLabel('Your name').fill('New Buyer');
-    await page.getByLabel('E-mail').fill(`new.${Date.now()}@e2e.baleproof.example`);
+    await page.getByLabel('E-mail').fill(email);
     await page.getByLabel('Password').fill('a-long-enough-password');
     await page.getByRole('button', { name: 'Create account' }).click();
+    await expect(page.getByRole('status').filter({ hasText: `We sent a message to ${email}` })).toBeVisible();
+    await page.getByRole('link', { name: 'Continue' }).click();
     await expect(page).toHaveURL(/\/hay/);
     await expect(page.getByRole('button', { name: /Account menu for New Buyer/ })).toBeVisible();
+    await expect(page.getByText('E-mail not confirmed yet.')).toBeVisible();
+
+    const mail = await waitForMail(email, 'Confirm your e-mail address');
+    const link = /(\/confirm-email\?token=\S+)/.exec(mail.text)![1]!;
+    await page.goto(link);
+    await expect(page.getByRole('status').filter({ hasText: `Thank you: ${email} is confirmed.` })).toBeVisible();
+    await page.goto('/hay');
+    await expect(page.getByRole('heading', { name: 'Saved searches' })).toBeVisible();
+    await expect(page.getByText('E-mail not confirmed yet.')).toHaveCount(0);
+  });
+
+  test('signing up with a registered address looks the same and signs nobody in', async ({ page }) => {
+    await page.goto('/sign-up');
+    await page.getByLabel('Your name').fill('Someone Else');
+    await page.getByLabel('E-mail').fill('buyer@demo.baleproof.example');
+    await page.getByLabel('Password').fill('a-long-enough-password');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect(page.getByRole('status').filter({ hasText: 'We sent a message to buyer@demo.baleproof.example' })).toBeVisible();
+    await expect(page.getByRole('alert')).toHaveCount(0);
+    await expect(page.getByRole('button', { name: /Account menu/ })).toHaveCount(0);
   });
 });

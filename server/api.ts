@@ -82,7 +82,7 @@ export function createApi(deps: ApiDeps): Express {
   api.use(csrf.requireToken);
 
   api.use('/health', healthRouter(db));
-  api.use('/auth', authRouter(db, { signInLimit: env.SIGN_IN_RATE_LIMIT, signInIpLimit: env.SIGN_IN_IP_RATE_LIMIT, signUpIpLimit: env.SIGN_UP_IP_RATE_LIMIT, csrf, secureCookies: cookiesAreSecure(env), clock: deps.clock, rateLimitScope: env.RATE_LIMIT_SCOPE }));
+  api.use('/auth', authRouter(deps, { signInLimit: env.SIGN_IN_RATE_LIMIT, signInIpLimit: env.SIGN_IN_IP_RATE_LIMIT, signUpIpLimit: env.SIGN_UP_IP_RATE_LIMIT, csrf, secureCookies: cookiesAreSecure(env), rateLimitScope: env.RATE_LIMIT_SCOPE }));
   api.use('/lots/compare', lotCompareRouter(db));
   api.use('/lots', lotsRouter(deps));
   api.use('/admin/payouts', adminPayoutsRouter(deps));

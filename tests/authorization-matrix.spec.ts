@@ -50,6 +50,9 @@ const POLICY: Record<string, Rule> = {
   'POST /auth/sign-up': ANYONE,
   'POST /auth/sign-in': ANYONE,
   'POST /auth/sign-out': { allow: 'anyone', endsSession: true },
+  // The signed token names the account, so opening the link needs no session.
+  'POST /auth/confirm-email': { allow: 'anyone', body: () => ({ token: 'not-a-real-token' }) },
+  'POST /auth/confirmation-link': { allow: 'signed-in' },
   'GET /lots/compare': ANYONE,
   'GET /lots': ANYONE,
   // A lot with the reviewer is its grower's and the admins' only; to anyone else it does not exist.

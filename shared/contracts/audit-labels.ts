@@ -9,6 +9,7 @@ export const AUDIT_ACTION_LABELS: Record<string, string> = {
   'lot.withdrawn': 'Taken off sale',
   'lot.relisted': 'Put back on sale',
   'user.signed_up': 'Signed up',
+  'user.email_confirmed': 'E-mail address confirmed',
   'user.role_changed': 'Role changed',
   'user.suspended': 'Suspended',
   'user.reinstated': 'Reinstated',

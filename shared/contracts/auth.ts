@@ -38,5 +38,21 @@ export const SessionUserSchema = z.object({
   email: z.string(),
   displayName: z.string(),
   role: z.enum(USER_ROLES),
+  /** Whether the owner opened the confirmation link sent to this address; saved-search alerts wait for it. */
+  emailVerified: z.boolean(),
 });
 export type SessionUser = z.infer<typeof SessionUserSchema>;
+
+/**
+ * The answer to a sign-up, the same for a new address and one that already has an account, so the form
+ * does not tell anyone which addresses are registered. A new account is also signed in (ask `/auth/me`).
+ */
+export const SignUpAnswerSchema = z.object({ email: z.string(), message: z.string() });
+export type SignUpAnswer = z.infer<typeof SignUpAnswerSchema>;
+
+/** The token from a confirmation link. */
+export const VerifyEmailSchema = z.object({ token: z.string().min(1, 'The link has no token.').max(1000) }).strict();
+
+/** The answer to opening a confirmation link. */
+export const VerifyEmailAnswerSchema = z.object({ email: z.string(), alreadyConfirmed: z.boolean(), message: z.string() });
+export type VerifyEmailAnswer = z.infer<typeof VerifyEmailAnswerSchema>;

@@ -17,5 +17,6 @@ export const serverRoutes: ServerRoute[] = [
   { path: 'messages/**', renderMode: RenderMode.Client },
   { path: 'sign-in', renderMode: RenderMode.Server },
   { path: 'sign-up', renderMode: RenderMode.Server },
+  { path: 'confirm-email', renderMode: RenderMode.Server },
   { path: '**', renderMode: RenderMode.Server, status: 404 },
 ];

@@ -14,5 +14,6 @@ export const routes: Routes = [
   { path: 'messages/:id', title: 'Messages — Baleproof', canMatch: [roleGuard('buyer', 'grower')], loadComponent: () => import('./features/messages/inbox-page').then((m) => m.InboxPage) },
   { path: 'sign-in', title: 'Sign in — Baleproof', loadComponent: () => import('./features/account/sign-in-page').then((m) => m.SignInPage) },
   { path: 'sign-up', title: 'Create an account — Baleproof', loadComponent: () => import('./features/account/sign-up-page').then((m) => m.SignUpPage) },
+  { path: 'confirm-email', title: 'Confirm your e-mail — Baleproof', loadComponent: () => import('./features/account/confirm-email-page').then((m) => m.ConfirmEmailPage) },
   { path: '**', title: 'Page not found — Baleproof', loadComponent: () => import('./features/not-found/not-found-page').then((m) => m.NotFoundPage) },
 ];

@@ -3,13 +3,15 @@ import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
 import { Passport } from 'passport';
 import { Strategy as LocalStrategy } from 'passport-local';
 import { cookieNames } from '@shared/contracts/cookies';
-import { SignInSchema, SignUpSchema, type SessionUser } from '@shared/contracts/auth';
-import type { Clock } from '../../clock';
+import { SignInSchema, SignUpSchema, VerifyEmailSchema, type SessionUser, type SignUpAnswer } from '@shared/contracts/auth';
+import type { ApiDeps } from '../../api-deps';
 import type { Db } from '../../db/client';
 import { PgRateLimitStore } from '../../middleware/pg-rate-limit-store';
 import type { Csrf } from '../../middleware/csrf';
-import { HttpError } from '../../middleware/http-error';
+import { conflict, HttpError } from '../../middleware/http-error';
+import { requireSignedIn } from '../../middleware/require-role';
 import { AuthService } from './auth.service';
+import { EmailVerification } from './email-verification';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -39,12 +41,18 @@ export function createAuthenticator(db: Db) {
   return passport;
 }
 
+/** Confirmation links a signed-in user may ask for again per hour (each is an e-mail to the address). */
+export const CONFIRMATION_RESENDS_PER_HOUR = 3;
+
 export function authRouter(
-  db: Db,
-  options: { signInLimit: number; signInIpLimit: number; signUpIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean; clock: Clock; rateLimitScope: string },
+  deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' | 'clock'>,
+  options: { signInLimit: number; signInIpLimit: number; signUpIpLimit: number; csrf: Pick<Csrf, 'issueCookie' | 'renew'>; secureCookies: boolean; rateLimitScope: string },
 ): Router {
+  const { db } = deps;
   const auth = new AuthService(db);
+  const verification = new EmailVerification(deps);
   const router = Router();
+  const clock = deps.clock;
 
   // Two limits on failed sign-ins (successes are not counted): per account, keyed on the e-mail as the
   // sign-in form normalises it (so " Name@X" is the same account), and per client address, so one
@@ -63,13 +71,13 @@ export function authRouter(
     });
   const accountKey = (req: Request) => `account:${normalisedEmail(req.body?.email)}`;
   const addressKey = (req: Request) => `ip:${ipKeyGenerator(req.ip ?? '')}`;
-  const accountCounts = new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-in:`);
-  const addressCounts = new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-in-ip:`);
+  const accountCounts = new PgRateLimitStore(db, clock, `${options.rateLimitScope}sign-in:`);
+  const addressCounts = new PgRateLimitStore(db, clock, `${options.rateLimitScope}sign-in-ip:`);
   const perAccount = failedSignIns(options.signInLimit, accountCounts, accountKey);
   const perAddress = failedSignIns(options.signInIpLimit, addressCounts, addressKey);
   // New accounts per client address per hour, so one address cannot create accounts (or probe e-mails) in bulk.
   const signUpsPerAddress = rateLimit({
-    store: new PgRateLimitStore(db, options.clock, `${options.rateLimitScope}sign-up-ip:`),
+    store: new PgRateLimitStore(db, clock, `${options.rateLimitScope}sign-up-ip:`),
     windowMs: 60 * 60 * 1000,
     limit: options.signUpIpLimit,
     standardHeaders: 'draft-8',
@@ -84,12 +92,44 @@ export function authRouter(
     res.json({ user: req.user ?? null });
   });
 
+  // A new address gets an account, a session and a confirmation link; an address that already has an
+  // account gets no session, and its owner a warning e-mail. Both answer the same status and body.
   router.post('/sign-up', signUpsPerAddress, async (req, res) => {
     const input = SignUpSchema.parse(req.body);
     const user = await auth.signUp(input);
-    await logIn(req, user);
+    if (user) {
+      await verification.sendLink(user);
+      await logIn(req, user);
+    } else {
+      await verification.warnOwner(input.email);
+    }
     options.csrf.renew(req, res);
-    res.status(201).json({ user });
+    const answer: SignUpAnswer = { email: input.email, message: `We sent a message to ${input.email}. Open the link in it to confirm your address.` };
+    res.status(201).json(answer);
+  });
+
+  // Opening the link from the e-mail; it works signed in or not (the token names the account).
+  router.post('/confirm-email', async (req, res) => {
+    const { token } = VerifyEmailSchema.parse(req.body);
+    res.json(await verification.confirm(token));
+  });
+
+  const resendsPerUser = rateLimit({
+    store: new PgRateLimitStore(db, clock, `${options.rateLimitScope}confirmation-link:`),
+    windowMs: 60 * 60 * 1000,
+    limit: CONFIRMATION_RESENDS_PER_HOUR,
+    standardHeaders: 'draft-8',
+    legacyHeaders: false,
+    keyGenerator: (req) => `user:${req.user?.id ?? 0}`,
+    handler: (_req, _res, next) => next(new HttpError(429, 'too_many_links', 'We already sent several links this hour. Look for them in your e-mail (and its spam folder), or wait an hour.')),
+  });
+
+  // Sends the signed-in user a new confirmation link.
+  router.post('/confirmation-link', requireSignedIn, resendsPerUser, async (req, res) => {
+    const user = req.user!;
+    if (user.emailVerified) throw conflict('already_confirmed', `${user.email} is already confirmed.`);
+    await verification.sendLink(user);
+    res.status(202).json({ email: user.email, message: `We sent a new link to ${user.email}.` });
   });
 
   router.post('/sign-in', perAddress, perAccount, async (req, res) => {

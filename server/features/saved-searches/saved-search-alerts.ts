@@ -1,4 +1,4 @@
-import { and, eq, isNull } from 'drizzle-orm';
+import { and, eq, isNotNull, isNull } from 'drizzle-orm';
 import { LotSearchSchema, type LotSummary } from '@shared/contracts/lots';
 import type { ApiDeps } from '../../api-deps';
 import { savedSearches, users } from '../../db/schema';
@@ -15,7 +15,8 @@ export interface AlertOutcome {
  * After a lot is approved and listed: e-mails the owner of every saved search (alerts on) that the lot
  * matches, and stamps `lastAlertedAt`. Matching runs the catalogue's own SQL with the saved query,
  * narrowed to this lot, so an alert means the buyer would see the lot in that search.
- * A stored query that no longer parses (the catalogue changed) is skipped, not fatal.
+ * A stored query that no longer parses (the catalogue changed) is skipped, not fatal. Only confirmed
+ * addresses get alerts: an unconfirmed one may belong to someone who never asked for them.
  */
 export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'jobs' | 'env' | 'logger' | 'clock'>, lotId: number): Promise<AlertOutcome> {
   const { db, jobs, env, logger } = deps;
@@ -24,7 +25,7 @@ export async function alertSavedSearches(deps: Pick<ApiDeps, 'db' | 'jobs' | 'en
     .select({ search: savedSearches, email: users.email, displayName: users.displayName })
     .from(savedSearches)
     .innerJoin(users, eq(users.id, savedSearches.userId))
-    .where(and(eq(savedSearches.alerts, true), isNull(users.disabledAt)));
+    .where(and(eq(savedSearches.alerts, true), isNull(users.disabledAt), isNotNull(users.emailVerifiedAt)));
 
   const alerted: number[] = [];
   for (const { search, email, displayName } of candidates) {

@@ -1,6 +1,6 @@
 import { randomUUID } from 'node:crypto';
-import { eq } from 'drizzle-orm';
-import { savedSearches } from '../../db/schema';
+import { eq, inArray } from 'drizzle-orm';
+import { savedSearches, users } from '../../db/schema';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { startTestApi, uniqueEmail, type TestApi } from '../../../tests/support/test-api';
 import { alertSavedSearches } from './saved-search-alerts';
@@ -17,7 +17,7 @@ describe('saved searches', () => {
     const email = uniqueEmail(role);
     const res = await agent.post('/auth/sign-up', { email, password: 'a-long-password', displayName: 'Saver', role });
     expect(res.status).toBe(201);
-    return { agent, email, userId: res.body.user.id as number };
+    return { agent, email, userId: (await agent.get('/auth/me')).body.user.id as number };
   };
 
   it('saves, lists and deletes a buyer’s catalogue query, dropping paging', async () => {
@@ -74,6 +74,8 @@ describe('saved searches', () => {
       await missed.agent.post('/saved-searches', { name: 'Protein 25+', query: { q: tag, cpMin: '25' } });
       const quiet = await muted.agent.post('/saved-searches', { name: 'Muted', query: { q: tag }, alerts: false });
       expect(quiet.body.alerts).toBe(false);
+      // Alerts go to confirmed addresses only (tests/email-confirmation.spec.ts); here all three are confirmed.
+      await t.deps.db.update(users).set({ emailVerifiedAt: t.clock.now() }).where(inArray(users.email, [matcher.email, missed.email, muted.email]));
 
       const grower = await createGrower(t.deps.db, '66502');
       const lot = await createLot(t.deps.db, grower.farm.id, { title: `${tag} fresh alfalfa`, analysis: { adfPct: 28, ndfPct: 36, crudeProteinPct: 22 } });
@@ -87,7 +89,7 @@ describe('saved searches', () => {
       expect(outcome.alerted).toContain(ok.body.id);
       expect(outcome.alerted).not.toContain(missedId);
       expect(outcome.alerted).not.toContain(quiet.body.id);
-      const mine = t.mails.filter((m) => [matcher.email, missed.email, muted.email].includes(m.to));
+      const mine = t.mails.filter((m) => [matcher.email, missed.email, muted.email].includes(m.to) && m.subject.startsWith('New hay'));
       expect(mine).toHaveLength(1);
       expect(mine[0]!.to).toBe(matcher.email);
       expect(mine[0]!.subject).toContain('Near rich hay');
@@ -106,7 +108,7 @@ describe('saved searches', () => {
       t.mails.length = 0;
       expect((await alertSavedSearches(t.deps, lot.id)).alerted).toEqual([]);
       await t.drainJobs();
-      expect(t.mails.filter((m) => m.to === buyer.email)).toEqual([]);
+      expect(t.mails.filter((m) => m.to === buyer.email && m.subject.startsWith('New hay'))).toEqual([]);
     });
   });
 });

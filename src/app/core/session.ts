@@ -1,7 +1,7 @@
 import { HttpClient } from '@angular/common/http';
 import { computed, inject, Injectable, signal } from '@angular/core';
 import { firstValueFrom } from 'rxjs';
-import type { SessionUser, SignIn, SignUp, UserRole } from '@shared/contracts/auth';
+import type { SessionUser, SignIn, SignUp, SignUpAnswer, UserRole, VerifyEmailAnswer } from '@shared/contracts/auth';
 
 /** Who is signed in. The only place that calls the auth API. */
 @Injectable({ providedIn: 'root' })
@@ -28,10 +28,24 @@ export class Session {
     return res.user;
   }
 
-  async signUp(input: SignUp): Promise<SessionUser> {
-    const res = await firstValueFrom(this.http.post<{ user: SessionUser }>('/api/auth/sign-up', input));
-    this.current.set(res.user);
-    return res.user;
+  /** The answer is the same whether or not the address was new; a new account is signed in afterwards. */
+  async signUp(input: SignUp): Promise<SignUpAnswer> {
+    const answer = await firstValueFrom(this.http.post<SignUpAnswer>('/api/auth/sign-up', input));
+    await this.load();
+    return answer;
+  }
+
+  /** Opens a confirmation link's token; the signed-in user's state follows. */
+  async confirmEmail(token: string): Promise<VerifyEmailAnswer> {
+    const answer = await firstValueFrom(this.http.post<VerifyEmailAnswer>('/api/auth/confirm-email', { token }));
+    if (this.current()) await this.load();
+    return answer;
+  }
+
+  /** Sends the signed-in user a new confirmation link. */
+  async resendConfirmation(): Promise<string> {
+    const res = await firstValueFrom(this.http.post<{ message: string }>('/api/auth/confirmation-link', {}));
+    return res.message;
   }
 
   async signOut(): Promise<void> {

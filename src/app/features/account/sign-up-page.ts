@@ -4,7 +4,7 @@ import { MatButton } from '@angular/material/button';
 import { MatError, MatFormField, MatHint, MatLabel } from '@angular/material/form-field';
 import { MatInput } from '@angular/material/input';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
-import { Router, RouterLink } from '@angular/router';
+import { RouterLink } from '@angular/router';
 import { apiErrorMessage } from '../../core/api-error';
 import { Session } from '../../core/session';
 
@@ -17,7 +17,6 @@ import { Session } from '../../core/session';
 })
 export class SignUpPage {
   private readonly session = inject(Session);
-  private readonly router = inject(Router);
   /** Pre-selected role from the link (`?role=grower`). */
   readonly role = input<string>();
 
@@ -29,6 +28,8 @@ export class SignUpPage {
   });
   protected readonly error = signal('');
   protected readonly busy = signal(false);
+  /** The answer, shown alike whether the address was new or already had an account. */
+  protected readonly sent = signal<{ message: string; next: string } | null>(null);
 
   constructor() {
     effect(() => {
@@ -45,8 +46,9 @@ export class SignUpPage {
     this.busy.set(true);
     this.error.set('');
     try {
-      const user = await this.session.signUp(this.form.getRawValue());
-      await this.router.navigateByUrl(user.role === 'grower' ? '/selling' : '/hay');
+      const input = this.form.getRawValue();
+      const answer = await this.session.signUp(input);
+      this.sent.set({ message: answer.message, next: input.role === 'grower' ? '/selling' : '/hay' });
     } catch (e) {
       this.error.set(apiErrorMessage(e));
     } finally {

@@ -11,12 +11,13 @@ import type { SavedSearchView } from '@shared/contracts/saved-searches';
 import { describeQuery, hasAnyFilter } from '../lot-search/search-query';
 import { apiErrorMessage } from '../../../core/api-error';
 import { Session } from '../../../core/session';
+import { EmailConfirmationNotice } from '../../account/email-confirmation-notice';
 import { SavedSearchesApi } from './saved-searches-api';
 
 /** Save the catalogue query in the URL, with an e-mail when a newly approved lot matches; list and delete saved ones. */
 @Component({
   selector: 'app-saved-searches-panel',
-  imports: [FormsModule, RouterLink, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatInput],
+  imports: [FormsModule, RouterLink, EmailConfirmationNotice, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatInput],
   templateUrl: './saved-searches-panel.html',
   styleUrl: './saved-searches-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
