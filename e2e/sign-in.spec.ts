@@ -45,6 +45,8 @@ test.describe('signing in', () => {
     await expect(page).toHaveURL(/\/hay/);
     await expect(page.getByRole('button', { name: /Account menu for New Buyer/ })).toBeVisible();
     await expect(page.getByText('E-mail not confirmed yet.')).toBeVisible();
+    await page.getByRole('button', { name: 'Send the link again' }).click();
+    await expect(page.getByRole('status').filter({ hasText: `We sent a new link to ${email}.` })).toBeVisible();
 
     const mail = await waitForMail(email, 'Confirm your e-mail address');
     const link = /(\/confirm-email\?token=\S+)/.exec(mail.text)![1]!;
