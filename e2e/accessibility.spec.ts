@@ -27,6 +27,7 @@ const PAGES: { who: string; account?: { email: string; password: string }; order
   { who: 'visitor', path: () => '/cart' },
   { who: 'visitor', path: () => '/sign-in' },
   { who: 'visitor', path: () => '/sign-up' },
+  { who: 'visitor', path: () => '/confirm-email?token=not-a-token' },
   { who: 'buyer', account: BUYER, path: ([a]) => `/hay/${a}` },
   { who: 'grower', account: GROWER, path: () => '/selling' },
   { who: 'grower', account: GROWER, path: () => '/selling/lots/new' },
