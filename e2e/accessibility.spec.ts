@@ -43,6 +43,9 @@ const PAGES: { who: string; account?: { email: string; password: string }; order
   { who: 'admin', account: ADMIN, path: () => '/admin/claims' },
 ];
 
+// Each page is judged on its own, so the pages spread over the workers.
+test.describe.configure({ mode: 'parallel' });
+
 for (const viewport of [{ width: 1366, height: 900 }, { width: 390, height: 844 }]) {
   test.describe(`axe-core at ${viewport.width} px`, () => {
     test.use({ viewport });

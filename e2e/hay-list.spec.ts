@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { BUYER, signInAs } from './support/accounts';
 import { lotsFromTwoGrowers, putOnHayList } from './support/hay-list';
 

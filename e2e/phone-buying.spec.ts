@@ -1,4 +1,4 @@
-import { expect, test, type Page } from '@playwright/test';
+import { expect, test, type Page } from './support/test';
 import { BUYER, signInAs } from './support/accounts';
 import { lotsForTheList, putOnHayList } from './support/hay-list';
 

@@ -1,4 +1,4 @@
-import { expect, test } from '@playwright/test';
+import { expect, test } from './support/test';
 import { readdirSync, readFileSync } from 'node:fs';
 import { get } from 'node:http';
 import { join } from 'node:path';

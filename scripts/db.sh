@@ -64,6 +64,13 @@ recreate() {
   create "$1"
 }
 
+# Replaces database COPY with a copy of SOURCE (which must have no open connections): db.sh clone SOURCE COPY
+clone() {
+  "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT_LOCAL" -U postgres -qc "drop database if exists \"$2\" with (force)" >/dev/null
+  "$PG_BIN/psql" -h 127.0.0.1 -p "$PGPORT_LOCAL" -U postgres -qc "create database \"$2\" template \"$1\"" >/dev/null
+  log "copied database $1 to $2"
+}
+
 case "${1:-}" in
   start) start ;;
   stop) stop ;;
@@ -71,5 +78,6 @@ case "${1:-}" in
   dir) echo "$DATA" ;;
   create) create "$2" ;;
   recreate) recreate "$2" ;;
-  *) echo "usage: db.sh start|stop|status|dir|create NAME|recreate NAME" >&2; exit 2 ;;
+  clone) clone "$2" "$3" ;;
+  *) echo "usage: db.sh start|stop|status|dir|create NAME|recreate NAME|clone SOURCE COPY" >&2; exit 2 ;;
 esac

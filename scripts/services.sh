@@ -56,7 +56,7 @@ start_fakes() {
   claim_ports "stripe-fake-$STRIPE_FAKE_PORT" "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" "$STRIPE_FAKE_PORT"
 
   node "$ROOT/node_modules/.bin/maildev" --smtp "$SMTP_PORT" --web "$MAILDEV_WEB_PORT" \
-    --ip 127.0.0.1 --web-ip 127.0.0.1 --mail-directory "$MAIL_DIR" >"$logdir/maildev.log" 2>&1 &
+    --ip 127.0.0.1 --web-ip 127.0.0.1 --mail-directory "$MAIL_DIR" >"$logdir/maildev${FAKE_LOG_SUFFIX:-}.log" 2>&1 &
   pid=$!
   SERVICE_PIDS+=("$pid")
   echo "$pid" >"$RUN_DIR/maildev-$MAILDEV_WEB_PORT.pid"
@@ -65,7 +65,7 @@ start_fakes() {
 
   # Payment events go to the app that the fakes serve (npm start: PORT; npm test: E2E_PORT).
   STRIPE_FAKE_PORT="$STRIPE_FAKE_PORT" STRIPE_WEBHOOK_URL="${STRIPE_WEBHOOK_URL:-http://127.0.0.1:${APP_PORT:-${PORT:-4000}}/api/payments/webhook}" \
-    node --import tsx "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" >"$logdir/stripe-fake.log" 2>&1 &
+    node --import tsx "$ROOT/docker-local-fakes/stripe/stripe-fake-cli.ts" >"$logdir/stripe-fake${FAKE_LOG_SUFFIX:-}.log" 2>&1 &
   pid=$!
   SERVICE_PIDS+=("$pid")
   echo "$pid" >"$RUN_DIR/stripe-fake-$STRIPE_FAKE_PORT.pid"
@@ -75,6 +75,22 @@ start_fakes() {
   export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
   export MAIL_CATCHER_URL="http://127.0.0.1:$MAILDEV_WEB_PORT"
   export STRIPE_FAKE_PORT
+}
+
+# Fakes for copy i of the app that the journeys run on side by side (e2e/support/stack.ts): the same
+# services on the base ports + 5·i, webhooks to that copy's app, mail kept in MAIL_DIR-s<i>. Leaves the
+# exported addresses of copy 0 as they were.
+start_stack_fakes() {
+  local i="$1" step=5
+  (
+    SMTP_PORT=$((SMTP_PORT + step * i)) MAILDEV_WEB_PORT=$((MAILDEV_WEB_PORT + step * i))
+    STRIPE_FAKE_PORT=$((STRIPE_FAKE_PORT + step * i)) APP_PORT=$((${APP_PORT:-$PORT} + step * i))
+    MAIL_DIR="${MAIL_DIR:-$ROOT/.data/mail}-s$i" FAKE_LOG_SUFFIX="-s$i"
+    unset STRIPE_WEBHOOK_URL
+    SERVICE_PIDS=()
+    start_fakes >&2
+    echo "${SERVICE_PIDS[@]}"
+  )
 }
 
 stop_services() {

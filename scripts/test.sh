@@ -55,5 +55,15 @@ log "preparing the end-to-end database"
 DATABASE_URL="${E2E_DATABASE_URL:?E2E_DATABASE_URL is required}" node --import tsx server/db/migrate-cli.ts
 DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node --import tsx scripts/seed/seed-cli.ts
 
-log "end-to-end tests (Playwright, Chromium)"
+# The journeys run on E2E_STACKS copies of the app side by side, one per Playwright worker (e2e/support/stack.ts):
+# copy i gets a clone of the seeded database and uploads, and fakes of its own on the base ports + 5·i.
+export E2E_STACKS="${E2E_STACKS:-2}"
+for i in $(seq 1 $((E2E_STACKS - 1))); do
+  bash scripts/db.sh clone "${E2E_DATABASE_URL##*/}" "${E2E_DATABASE_URL##*/}_s$i"
+  rm -rf "$ROOT/.data/e2e-uploads-s$i" && cp -a "$ROOT/.data/e2e-uploads" "$ROOT/.data/e2e-uploads-s$i"
+  read -ra stack_pids <<<"$(start_stack_fakes "$i")"
+  SERVICE_PIDS+=("${stack_pids[@]}")
+done
+
+log "end-to-end tests (Playwright, Chromium, $E2E_STACKS workers)"
 DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node_modules/.bin/playwright test

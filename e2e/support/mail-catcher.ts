@@ -3,6 +3,8 @@
  * (`GET /api/email`). Used by the Playwright journeys and by integration tests in Jest.
  * `npm test` starts the catcher and exports MAIL_CATCHER_URL; MAILDEV_WEB_PORT is the fallback.
  */
+import { stackUrl } from './stack';
+
 export interface CaughtMail {
   id: string;
   subject: string;
@@ -16,7 +18,8 @@ export interface CaughtMail {
 export function mailCatcherUrl(): string {
   const url = process.env['MAIL_CATCHER_URL'] ?? (process.env['MAILDEV_WEB_PORT'] ? `http://127.0.0.1:${process.env['MAILDEV_WEB_PORT']}` : undefined);
   if (!url) throw new Error('No mail catcher: run through `npm test`, which starts maildev and sets MAIL_CATCHER_URL.');
-  return url;
+  // A journey reads the catcher of the app copy its worker uses (e2e/support/stack.ts).
+  return stackUrl(url);
 }
 
 /** Every message the catcher holds. */

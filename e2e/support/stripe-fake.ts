@@ -1,8 +1,9 @@
 import { expect } from '@playwright/test';
+import { stackPort } from './stack';
 
-/** The local Stripe fake the e2e server pays through (started by `npm test` on STRIPE_FAKE_PORT). */
+/** The local Stripe fake the e2e server pays through (started by `npm test` on STRIPE_FAKE_PORT, moved per app copy). */
 function fakeBase(): string {
-  return `http://127.0.0.1:${process.env['STRIPE_FAKE_PORT'] ?? '12112'}`;
+  return `http://127.0.0.1:${stackPort(process.env['STRIPE_FAKE_PORT'] ?? '12112')}`;
 }
 
 /** Reads an object from the fake's Stripe-shaped API, as the platform's own secret key would. */

@@ -1,14 +1,20 @@
 import { test as base, expect, type Browser, type Page } from '@playwright/test';
+import { stackUrl } from './stack';
 
 export * from '@playwright/test';
 
 /**
- * Playwright's `test`, with pages that wait after every full page load (goto, reload) until the app has
+ * Playwright's `test`, on this worker's copy of the app, with pages that wait after every full page load (goto, reload) until the app has
  * hydrated the server-rendered page (`<html data-interactive>`, set by the root component). Typing into a
  * field before hydration would put text in the DOM that its form never sees, as a person typing that
  * early would find too.
  */
 export const test = base.extend<{ cspViolations: string[] }>({
+  // Each worker talks to its own copy of the app (e2e/support/stack.ts); every page, context and request
+  // of a journey, including contexts opened by hand, takes its address from here.
+  baseURL: async ({ baseURL }, use) => {
+    await use(baseURL ? stackUrl(baseURL) : baseURL);
+  },
   // Every journey fails if the browser reports a Content-Security-Policy violation on any of its pages: a
   // blocked inline script stops hydration, which a journey might otherwise only notice as a slow page.
   cspViolations: [
