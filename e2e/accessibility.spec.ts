@@ -8,7 +8,9 @@ import { demoOrderWithMessage, type DemoOrder } from './support/demo-order';
  * Run at desktop and phone widths, since the phone top bar is laid out differently.
  */
 async function expectNoSeriousViolations(page: Page, path: string): Promise<void> {
-  await page.goto(path, { waitUntil: 'load' });
+  // Every page judged here exists: it must answer 200, not the catch-all's 404 behind a page that still shows.
+  const response = await page.goto(path, { waitUntil: 'load' });
+  expect(response?.status(), path).toBe(200);
   await expect(page.locator('main h1').first()).toBeVisible();
   const result = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
   const serious = result.violations

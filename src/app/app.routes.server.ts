@@ -8,6 +8,9 @@ export const serverRoutes: ServerRoute[] = [
   { path: 'hay/:id', renderMode: RenderMode.Server },
   { path: 'planner', renderMode: RenderMode.Server },
   { path: 'cart', renderMode: RenderMode.Server },
+  // Orders render on the server for the signed-in reader (never kept: the page cache holds visitors' pages only).
+  { path: 'orders', renderMode: RenderMode.Server },
+  { path: 'orders/:id', renderMode: RenderMode.Server },
   // Signed-in working pages: rendered in the browser (nothing there for search engines or first paint).
   { path: 'selling', renderMode: RenderMode.Client },
   { path: 'selling/**', renderMode: RenderMode.Client },
