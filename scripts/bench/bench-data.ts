@@ -1,11 +1,12 @@
 import { sql } from 'drizzle-orm';
 import type { Db } from '../../server/db/client';
+import { refreshStoredSamplingVerdicts } from '../../server/features/lots/sampling-report';
 
 /**
  * Fills an empty, migrated database with synthetic catalogue data in a few set-based statements
  * (INSERT … SELECT over generate_series): `farmCount` farms scattered over the central US and `lotCount`
  * lots round-robin over them, 90 % listed (one in seven of those sold out), each with a current analysis
- * whose figures are random within usual hay ranges and, for two lots in three, a sampling record.
+ * whose figures are random within usual hay ranges and, for two lots in three, a sampling record with its verdict.
  * The figures exist only to load the database; they are not forage data.
  */
 export async function fillBenchData(db: Db, lotCount: number, farmCount = 2000): Promise<void> {
@@ -37,5 +38,8 @@ export async function fillBenchData(db: Db, lotCount: number, farmCount = 2000):
   await db.execute(sql`insert into sampling_records (lot_id, sampled_on, cores_taken, bales_sampled, probe_diameter_in, probe_length_in,
       core_position, sampled_by, compliant)
     select l.id, date '2026-06-28', 20, 20, 0.5, 18, 'butt-end-centre', 'Bench', l.id % 4 <> 0 from lots l where l.id % 3 <> 0`);
+  // The verdicts the app itself would store: otherwise the server's start-up refresh rewrites them while the
+  // load runs, and every page of rewrites empties the catalogue caches being measured.
+  await refreshStoredSamplingVerdicts(db, new Date());
   await db.execute(sql`vacuum analyze`);
 }

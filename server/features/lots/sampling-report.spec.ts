@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { eq } from 'drizzle-orm';
+import { eq, inArray, sql } from 'drizzle-orm';
 import { samplingRecords } from '../../db/schema';
 import { createGrower, createLot } from '../../../tests/support/fixtures';
 import { startTestApi, type TestApi } from '../../../tests/support/test-api';
@@ -35,6 +35,20 @@ describe('stored sampling verdicts', () => {
     expect(await titles('&compliantOnly=true')).toEqual([]);
     // An up-to-date row is left alone.
     expect(await refreshStoredSamplingVerdicts(t.deps.db, t.clock.now(), [lot.id])).toBe(0);
+  });
+
+  // A refresh that fixes many rows must not empty the servers' catalogue caches once per row: at 100,000 lots a
+  // row-by-row refresh sent tens of thousands of notices and kept every cache cold for minutes. One page is
+  // written in one transaction, and PostgreSQL delivers a notice repeated in one transaction once (PostgreSQL manual, NOTIFY).
+  it('writes a page of changed verdicts in one transaction, so the catalogue caches are emptied once, not once per row', async () => {
+    const grower = await createGrower(t.deps.db);
+    const made = await Promise.all([1, 2, 3].map((i) => createLot(t.deps.db, grower.farm.id, { title: `stale ${i}` })));
+    const ids = made.map((l) => l.id);
+    await t.deps.db.update(samplingRecords).set({ coresTaken: 12, balesSampled: 12, compliant: true, findings: [] }).where(inArray(samplingRecords.lotId, ids));
+    expect(await refreshStoredSamplingVerdicts(t.deps.db, t.clock.now(), ids)).toBe(3);
+    // Rows written by one transaction share its id (xmin); other suites' writes at the same time cannot blur this.
+    const writers = await t.deps.db.execute<{ xmin: string }>(sql`select distinct xmin::text as xmin from sampling_records where lot_id in ${ids}`);
+    expect(writers.rows).toHaveLength(1);
   });
 
   it('stores one daily refresh schedule however many workers start (common practice: a cron per job, not per process)', async () => {

@@ -29,27 +29,34 @@ const PAGE = 500;
 /**
  * Brings every stored verdict up to today's rules: a row stored before a rule changed keeps its old verdict
  * until one of its inputs changes, and the catalogue filter (which reads the stored verdict) would then
- * disagree with what the rules say. Only rows whose verdict differs are written, a page at a time, so a
+ * disagree with what the rules say. Only rows whose verdict differs are written, a page per transaction, so a
  * run over an up-to-date table writes nothing. `lotIds` limits the run to those lots. Returns how many changed.
  */
 export async function refreshStoredSamplingVerdicts(db: Db, now: Date, lotIds?: number[]): Promise<number> {
   let changed = 0;
   let after = 0;
   for (;;) {
-    const page = await db
-      .select({ s: samplingRecords, lot: lots })
-      .from(samplingRecords)
-      .innerJoin(lots, eq(lots.id, samplingRecords.lotId))
-      .where(and(gt(samplingRecords.id, after), lotIds ? inArray(samplingRecords.lotId, lotIds) : undefined))
-      .orderBy(asc(samplingRecords.id))
-      .limit(PAGE);
-    for (const { s, lot } of page) {
-      const verdict = samplingVerdictOf(lot, s, now);
-      // Compared as values: PostgreSQL's jsonb keeps object keys in its own order.
-      if (verdict.compliant === s.compliant && isDeepStrictEqual(verdict.findings, s.findings)) continue;
-      await db.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: now }).where(eq(samplingRecords.id, s.id));
-      changed += 1;
-    }
+    // One transaction per page: each committed write empties every server's catalogue cache (the
+    // catalogue_changed notice), and a notice repeated in one transaction is delivered once. The page's
+    // records are locked while judged, so a grower's edit in between waits and then stores its own verdict.
+    const page = await db.transaction(async (tx) => {
+      const rows = await tx
+        .select({ s: samplingRecords, lot: lots })
+        .from(samplingRecords)
+        .innerJoin(lots, eq(lots.id, samplingRecords.lotId))
+        .where(and(gt(samplingRecords.id, after), lotIds ? inArray(samplingRecords.lotId, lotIds) : undefined))
+        .orderBy(asc(samplingRecords.id))
+        .limit(PAGE)
+        .for('update', { of: samplingRecords });
+      for (const { s, lot } of rows) {
+        const verdict = samplingVerdictOf(lot, s, now);
+        // Compared as values: PostgreSQL's jsonb keeps object keys in its own order.
+        if (verdict.compliant === s.compliant && isDeepStrictEqual(verdict.findings, s.findings)) continue;
+        await tx.update(samplingRecords).set({ compliant: verdict.compliant, findings: verdict.findings, updatedAt: now }).where(eq(samplingRecords.id, s.id));
+        changed += 1;
+      }
+      return rows;
+    });
     if (page.length < PAGE) return changed;
     after = page[page.length - 1]!.s.id;
   }
