@@ -19,13 +19,18 @@ function percentile(sorted: number[], p: number): number {
 /**
  * Loads one URL with autocannon for `seconds` at `connections` concurrent connections and reports the
  * request rate and the 50th/95th/99th percentile latencies over every response (autocannon's own summary
- * has no 95th percentile, so each response time is kept).
+ * has no 95th percentile, so each response time is kept). With `nextPath`, each request asks for the path it returns.
  */
-export function loadTest(url: string, opts: { connections: number; seconds: number; headers?: Record<string, string> }): Promise<LoadResult> {
+export function loadTest(
+  url: string,
+  opts: { connections: number; seconds: number; headers?: Record<string, string>; /** A path per request, instead of the URL's. */ nextPath?: () => string },
+): Promise<LoadResult> {
   const times: number[] = [];
   let failures = 0;
   return new Promise((resolve, reject) => {
-    const instance = autocannon({ url, connections: opts.connections, duration: opts.seconds, headers: opts.headers, timeout: 20 }, (err, result) => {
+    const nextPath = opts.nextPath;
+    const requests = nextPath ? [{ setupRequest: (req: autocannon.Request) => ({ ...req, path: nextPath() }) }] : undefined;
+    const instance = autocannon({ url, connections: opts.connections, duration: opts.seconds, headers: opts.headers, timeout: 20, requests }, (err, result) => {
       if (err) return reject(err);
       times.sort((a, b) => a - b);
       resolve({
