@@ -43,3 +43,24 @@ test.describe('precompressed static files', () => {
     expect(plain.body.equals(original)).toBe(true);
   });
 });
+
+test.describe('fonts', () => {
+  // The brand's type (Source Sans 3, bundled from @fontsource) must reach the browser: a font the page's styles
+  // name but the server answers 404 leaves every page in the reader's fallback font.
+  test('every font file a page names is served as a font', async ({ page, baseURL }) => {
+    const failed: string[] = [];
+    page.on('response', (r) => {
+      if (/\.woff2?$/.test(new URL(r.url()).pathname) && r.status() !== 200) failed.push(`${r.status()} ${r.url()}`);
+    });
+    await page.goto('/hay');
+    const html = await (await page.request.get(`${baseURL}/hay`)).text();
+    const named = [...new Set([...html.matchAll(/url\("?([^")]+\.woff2)"?\)/g)].map((m) => new URL(m[1]!, `${baseURL}/hay`).href))];
+    expect(named.length).toBeGreaterThan(0);
+    for (const url of named) {
+      const res = await page.request.get(url);
+      expect([url, res.status(), res.headers()['content-type']]).toEqual([url, 200, 'font/woff2']);
+    }
+    expect(await page.evaluate(async () => (await document.fonts.ready, [...document.fonts].filter((f) => f.status === 'error').map((f) => `${f.family} ${f.weight}`)))).toEqual([]);
+    expect(failed).toEqual([]);
+  });
+});

@@ -2,13 +2,13 @@ import { HttpXsrfTokenExtractor, provideHttpClient, withFetch, withInterceptors 
 import { ApplicationConfig, inject, provideAppInitializer, provideBrowserGlobalErrorListeners } from '@angular/core';
 import { provideClientHydration, withEventReplay, withIncrementalHydration } from '@angular/platform-browser';
 import { provideRouter, withComponentInputBinding, withInMemoryScrolling } from '@angular/router';
-import { MatIconRegistry } from '@angular/material/icon';
 import { routes } from './app.routes';
 import { provideReaderLocale } from './core/locale';
 import { Session } from './core/session';
 import { forwardCookiesOnServer } from './core/ssr-cookie-interceptor';
 import { pageUnavailableOnServer } from './core/ssr-unavailable-interceptor';
 import { XsrfTokenFromCookie } from './core/xsrf-token';
+import { Icon } from './shared/ui/icon';
 
 export const appConfig: ApplicationConfig = {
   providers: [
@@ -20,9 +20,6 @@ export const appConfig: ApplicationConfig = {
     { provide: HttpXsrfTokenExtractor, useClass: XsrfTokenFromCookie },
     // Incremental: `@defer (hydrate …)` blocks keep the server's DOM until their trigger (the catalogue page).
     provideClientHydration(withEventReplay(), withIncrementalHydration()),
-    provideAppInitializer(() => {
-      inject(MatIconRegistry).setDefaultFontSetClass('material-symbols-outlined');
-      return inject(Session).load();
-    }),
+    provideAppInitializer(() => inject(Session).load()),
   ],
 };

@@ -1,9 +1,10 @@
 import type { UserRole } from '@shared/contracts/auth';
+import type { IconName } from '../icon-names';
 
 export interface NavLink {
   path: string;
   label: string;
-  icon: string;
+  icon: IconName;
 }
 
 /** Navigation for each role; everyone can browse hay. */

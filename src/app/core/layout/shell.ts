@@ -1,15 +1,15 @@
 import { ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
-import { MatIcon } from '@angular/material/icon';
 import { MatMenu, MatMenuItem, MatMenuTrigger } from '@angular/material/menu';
 import { Router, RouterLink, RouterLinkActive, RouterOutlet } from '@angular/router';
 import { ROLE_LABELS } from '@shared/contracts/labels';
 import { BrandMark } from '../../shared/ui/brand-mark';
 import { Session } from '../session';
 import { navLinksFor } from './nav-links';
+import { Icon } from '../../shared/ui/icon';
 
 @Component({
   selector: 'app-shell',
-  imports: [RouterOutlet, RouterLink, RouterLinkActive, MatIcon, MatMenu, MatMenuItem, MatMenuTrigger, BrandMark],
+  imports: [RouterOutlet, RouterLink, RouterLinkActive, Icon, MatMenu, MatMenuItem, MatMenuTrigger, BrandMark],
   templateUrl: './shell.html',
   styleUrl: './shell.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -4,7 +4,6 @@ import { DatePipe } from '@angular/common';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
-import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { DomSanitizer } from '@angular/platform-browser';
 import { RouterLink } from '@angular/router';
@@ -19,6 +18,7 @@ import { cautionInputOf, CautionsList } from '../selling/ui/cautions-list';
 import { FindingsList } from '../selling/ui/findings-list';
 import { STATUS_LABELS } from '../selling/ui/status-label';
 import { ReviewApi } from './review-api';
+import { Icon } from '../../shared/ui/icon';
 
 /**
  * One submitted lot: the report PDF at a readable width beside each entered value and the value read
@@ -27,7 +27,7 @@ import { ReviewApi } from './review-api';
  */
 @Component({
   selector: 'app-review-lot-page',
-  imports: [RouterLink, ReactiveFormsModule, MatButton, MatIcon, MatFormField, MatLabel, MatInput, MatCheckbox, AnalysisPreview, FindingsList, CautionsList, DatePipe],
+  imports: [RouterLink, ReactiveFormsModule, MatButton, Icon, MatFormField, MatLabel, MatInput, MatCheckbox, AnalysisPreview, FindingsList, CautionsList, DatePipe],
   templateUrl: './review-lot-page.html',
   styleUrl: './review-lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,20 +1,20 @@
 import { ChangeDetectionStrategy, Component, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { DatePipe } from '@angular/common';
-import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { catchError, map, of } from 'rxjs';
 import type { ReviewQueueRow } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../core/api-error';
 import { ReviewApi } from './review-api';
 import { AdminTabs } from './admin-tabs';
+import { Icon } from '../../shared/ui/icon';
 
 type QueueState = { status: 'loading' } | { status: 'ok'; items: ReviewQueueRow[] } | { status: 'error'; message: string };
 
 /** Lots waiting for an admin to check their lab report, oldest first. */
 @Component({
   selector: 'app-review-queue-page',
-  imports: [RouterLink, MatIcon, AdminTabs, DatePipe],
+  imports: [RouterLink, Icon, AdminTabs, DatePipe],
   template: `
     <div class="bp-page">
       <app-admin-tabs />
@@ -31,8 +31,8 @@ type QueueState = { status: 'loading' } | { status: 'ok'; items: ReviewQueueRow[
                 <a [routerLink]="['/admin/lots', row.id]" class="title">{{ row.title }}</a>
                 <span class="meta">{{ row.farmName }} · {{ row.growerEmail }} · submitted {{ row.submittedAt | date: 'medium' : 'UTC' }} UTC</span>
                 <span class="meta">{{ row.labName ?? 'no lab' }}{{ row.labCertified ? ' (certified)' : row.labCertified === false ? ' (not certified)' : '' }}
-                  @if (row.errorFindings > 0) { · <mat-icon inline class="err">error</mat-icon> {{ row.errorFindings }} {{ row.errorFindings === 1 ? 'problem' : 'problems' }} }
-                  @if (row.warningFindings > 0) { · <mat-icon inline class="warn">warning</mat-icon> {{ row.warningFindings }} {{ row.warningFindings === 1 ? 'point to check' : 'points to check' }} }
+                  @if (row.errorFindings > 0) { · <app-icon name="error" inline class="err" /> {{ row.errorFindings }} {{ row.errorFindings === 1 ? 'problem' : 'problems' }} }
+                  @if (row.warningFindings > 0) { · <app-icon name="warning" inline class="warn" /> {{ row.warningFindings }} {{ row.warningFindings === 1 ? 'point to check' : 'points to check' }} }
                 </span>
               </li>
             }

@@ -4,7 +4,6 @@ import { toSignal } from '@angular/core/rxjs-interop';
 import { FormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
-import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
@@ -18,11 +17,12 @@ import { HerdResults } from './herd-results';
 import { PlannerApi } from './planner-api';
 import { PurchasePlanPanel } from './purchase-plan-panel';
 import { massIn, readerUnit } from './reader-units';
+import { Icon } from '../../shared/ui/icon';
 
 /** Herd needs (NRC 2007) → hay per day, tons and bales of a chosen lot → the least-cost purchase. */
 @Component({
   selector: 'app-planner-page',
-  imports: [DecimalPipe, FormsModule, RouterLink, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, HerdResults, PurchasePlanPanel],
+  imports: [DecimalPipe, FormsModule, RouterLink, MatButton, MatIconButton, Icon, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, HerdResults, PurchasePlanPanel],
   templateUrl: './planner-page.html',
   styleUrl: './planner-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,7 +1,6 @@
 import { DatePipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, inject, input, LOCALE_ID, RESPONSE_INIT } from '@angular/core';
 import { toObservable, toSignal } from '@angular/core/rxjs-interop';
-import { MatIcon } from '@angular/material/icon';
 import { RouterLink } from '@angular/router';
 import { switchMap, tap } from 'rxjs';
 import { BALE_TYPE_LABELS, CORE_POSITION_LABELS, FORAGE_TYPE_LABELS, LOT_STATUS_LABELS, STORAGE_LABELS } from '@shared/contracts/labels';
@@ -16,10 +15,11 @@ import { LotAnalysisPanel } from './lot-analysis-panel';
 import { BuyPanel } from '../../orders/buy-panel';
 import { Session } from '../../../core/session';
 import { LotThread } from '../../messages/lot-thread';
+import { Icon } from '../../../shared/ui/icon';
 
 @Component({
   selector: 'app-lot-page',
-  imports: [MoneyPipe, RouterLink, MatIcon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel, LotThread],
+  imports: [MoneyPipe, RouterLink, Icon, DatePipe, LotGallery, LotAnalysisPanel, BuyPanel, LotThread],
   templateUrl: './lot-page.html',
   styleUrl: './lot-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -2,7 +2,6 @@ import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject, 
 import { FormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
-import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
@@ -13,11 +12,12 @@ import { apiErrorMessage } from '../../../core/api-error';
 import { Session } from '../../../core/session';
 import { EmailConfirmationNotice } from '../../account/email-confirmation-notice';
 import { SavedSearchesApi } from './saved-searches-api';
+import { Icon } from '../../../shared/ui/icon';
 
 /** Save the catalogue query in the URL, with an e-mail when a newly approved lot matches; list and delete saved ones. */
 @Component({
   selector: 'app-saved-searches-panel',
-  imports: [FormsModule, RouterLink, EmailConfirmationNotice, MatButton, MatIconButton, MatIcon, MatFormField, MatLabel, MatInput],
+  imports: [FormsModule, RouterLink, EmailConfirmationNotice, MatButton, MatIconButton, Icon, MatFormField, MatLabel, MatInput],
   templateUrl: './saved-searches-panel.html',
   styleUrl: './saved-searches-panel.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,7 +1,6 @@
 import { PayoutHistory } from './payout-history';
 import { ChangeDetectionStrategy, Component, inject, input, OnInit, signal } from '@angular/core';
 import { MatButton } from '@angular/material/button';
-import { MatIcon } from '@angular/material/icon';
 import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
 import { BALE_TYPE_LABELS } from '@shared/contracts/labels';
@@ -12,11 +11,12 @@ import { MoneyPipe } from '../../../shared/ui/money-pipe';
 import { SellingApi } from '../selling-api';
 import { STATUS_LABELS } from '../ui/status-label';
 import { draftProgress } from '../lot-form/form-steps';
+import { Icon } from '../../../shared/ui/icon';
 
 /** The grower's lots: status, stock left, views and orders, with withdraw, relist and copy. */
 @Component({
   selector: 'app-selling-dashboard',
-  imports: [MoneyPipe, RouterLink, MatButton, MatIcon, PayoutHistory],
+  imports: [MoneyPipe, RouterLink, MatButton, Icon, PayoutHistory],
   templateUrl: './selling-dashboard.html',
   styleUrl: './selling-dashboard.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -3,7 +3,6 @@ import { ChangeDetectionStrategy, Component, inject, input, OnInit, signal } fro
 import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
-import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
@@ -11,11 +10,12 @@ import type { FarmProfile } from '@shared/contracts/selling';
 import { FARM_TIME_ZONES } from '@shared/time/farm-time';
 import { apiErrorMessage, apiFieldErrors } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
+import { Icon } from '../../../shared/ui/icon';
 
 /** Farm profile (where hay is loaded, how far it goes) and payout account set-up. */
 @Component({
   selector: 'app-farm-profile-page',
-  imports: [ReactiveFormsModule, RouterLink, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatButton, MatIcon],
+  imports: [ReactiveFormsModule, RouterLink, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatButton, Icon],
   templateUrl: './farm-profile-page.html',
   styleUrl: './farm-profile-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

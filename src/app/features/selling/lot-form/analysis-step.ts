@@ -4,7 +4,6 @@ import { FormBuilder, ReactiveFormsModule, Validators } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
 import { MatCheckbox } from '@angular/material/checkbox';
 import { MatFormField, MatHint, MatLabel, MatSuffix } from '@angular/material/form-field';
-import { MatIcon } from '@angular/material/icon';
 import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { MatRadioButton, MatRadioGroup } from '@angular/material/radio';
@@ -21,6 +20,7 @@ import { SellingApi } from '../selling-api';
 import { AnalysisPreview } from './analysis-preview';
 import { numberOrNull, StepSave } from './step-save';
 import type { AnalysisMethod } from '@shared/contracts/enums';
+import { Icon } from '../../../shared/ui/icon';
 
 /** One input of the analysis step, from the analysis-field table. */
 interface ValueInput {
@@ -42,7 +42,7 @@ const NUMBER_FIELDS: readonly ValueField[] = ENTERED_FIELDS.map((f) => f.key);
 /** Step 4: the lab's report — who, when, how — its values with a live preview of the engine's figures, and the PDF. */
 @Component({
   selector: 'app-analysis-step',
-  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatRadioGroup, MatRadioButton, MatButton, MatIcon, MatProgressBar, AnalysisPreview],
+  imports: [ReactiveFormsModule, MatFormField, MatLabel, MatHint, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatRadioGroup, MatRadioButton, MatButton, Icon, MatProgressBar, AnalysisPreview],
   templateUrl: './analysis-step.html',
   styleUrls: ['./step-form.scss', './analysis-step.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,

@@ -1,5 +1,4 @@
 import { ChangeDetectionStrategy, Component, computed, inject, input, OnInit, signal, viewChild } from '@angular/core';
-import { MatIcon } from '@angular/material/icon';
 import { MatStep, MatStepper } from '@angular/material/stepper';
 import { Router, RouterLink } from '@angular/router';
 import { firstValueFrom } from 'rxjs';
@@ -15,6 +14,7 @@ import { PriceStep } from './price-step';
 import { QuantityStep } from './quantity-step';
 import { ReviewStep } from './review-step';
 import { SamplingStep } from './sampling-step';
+import { Icon } from '../../../shared/ui/icon';
 
 /**
  * The guided lot form: one step per part of the listing, each saved as a draft when the grower moves on,
@@ -22,7 +22,7 @@ import { SamplingStep } from './sampling-step';
  */
 @Component({
   selector: 'app-lot-form-page',
-  imports: [RouterLink, MatIcon, MatStepper, MatStep, LotStep, QuantityStep, SamplingStep, AnalysisStep, PhotosStep, PriceStep, ReviewStep],
+  imports: [RouterLink, Icon, MatStepper, MatStep, LotStep, QuantityStep, SamplingStep, AnalysisStep, PhotosStep, PriceStep, ReviewStep],
   templateUrl: './lot-form-page.html',
   styleUrl: './lot-form-page.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,

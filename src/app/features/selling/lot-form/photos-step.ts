@@ -1,7 +1,6 @@
 import { CdkDrag, CdkDragDrop, CdkDropList, moveItemInArray } from '@angular/cdk/drag-drop';
 import { ChangeDetectionStrategy, Component, inject, input, output, signal } from '@angular/core';
 import { MatButton, MatIconButton } from '@angular/material/button';
-import { MatIcon } from '@angular/material/icon';
 import { MatProgressBar } from '@angular/material/progress-bar';
 import { firstValueFrom, last, tap } from 'rxjs';
 import type { PhotoView } from '@shared/contracts/lots';
@@ -9,6 +8,7 @@ import type { EditableLot } from '@shared/contracts/selling';
 import { apiErrorMessage } from '../../../core/api-error';
 import { SellingApi } from '../selling-api';
 import { StepSave } from './step-save';
+import { Icon } from '../../../shared/ui/icon';
 
 interface UploadRow {
   key: number;
@@ -23,7 +23,7 @@ const MAX_BYTES = 15 * 1024 * 1024;
 /** Step 5: photos — dropped or chosen, uploaded one by one with progress, reordered, one chosen as cover. */
 @Component({
   selector: 'app-photos-step',
-  imports: [CdkDropList, CdkDrag, MatButton, MatIconButton, MatIcon, MatProgressBar],
+  imports: [CdkDropList, CdkDrag, MatButton, MatIconButton, Icon, MatProgressBar],
   templateUrl: './photos-step.html',
   styleUrls: ['./step-form.scss', './photos-step.scss'],
   changeDetection: ChangeDetectionStrategy.OnPush,

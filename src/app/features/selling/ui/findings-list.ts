@@ -1,22 +1,22 @@
 import { ChangeDetectionStrategy, Component, input } from '@angular/core';
-import { MatIcon } from '@angular/material/icon';
 import type { Finding } from '@shared/forage';
+import { Icon } from '../../../shared/ui/icon';
 
 const ICONS = { error: 'error', warning: 'warning', info: 'info' } as const;
 
 /** The engine's findings, most serious first, each coloured by severity. */
 @Component({
   selector: 'app-findings-list',
-  imports: [MatIcon],
+  imports: [Icon],
   template: `
     @if (findings().length > 0) {
       <ul class="findings" [attr.aria-label]="label()">
         @for (f of sorted(); track f.code) {
-          <li [class]="f.severity"><mat-icon>{{ icons[f.severity] }}</mat-icon><span>{{ f.message }}</span></li>
+          <li [class]="f.severity"><app-icon [name]="icons[f.severity]" /><span>{{ f.message }}</span></li>
         }
       </ul>
     } @else if (emptyText()) {
-      <p class="ok"><mat-icon>check_circle</mat-icon> {{ emptyText() }}</p>
+      <p class="ok"><app-icon name="check_circle" /> {{ emptyText() }}</p>
     }
   `,
   styles: `
@@ -26,9 +26,9 @@ const ICONS = { error: 'error', warning: 'warning', info: 'info' } as const;
     li.warning { background: var(--bp-warn-bg); color: var(--bp-warn); }
     li.info { background: var(--bp-info-bg); color: var(--bp-info); }
     li span { color: var(--mat-sys-on-surface); }
-    li mat-icon { flex: none; }
+    li app-icon { flex: none; }
     .ok { display: flex; gap: 8px; align-items: center; color: var(--bp-ok); }
-    .ok mat-icon { flex: none; }
+    .ok app-icon { flex: none; }
   `,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
