@@ -38,9 +38,10 @@ node_modules/.bin/madge --circular --no-spinner --extensions ts --ts-config tsco
 
 DATABASE_URL="$TEST_DATABASE_URL" node --import tsx server/db/migrate-cli.ts
 # The fakes start before Jest: integration tests send real mail through SMTP and read it back from the catcher.
-# A fresh mail folder per run, so no test can find a message an earlier run left.
+# Fresh mail folders per run, so no test can find a message an earlier run left: the app copies' catchers
+# (start_stack_fakes) keep theirs in MAIL_DIR-s<i>, and maildev reloads what a folder holds when it starts.
 export MAIL_DIR="$ROOT/.data/test-mail"
-rm -rf "$MAIL_DIR"
+rm -rf "$MAIL_DIR" "$MAIL_DIR"-s*
 APP_PORT="$E2E_PORT" # The Stripe fake signs webhooks with the secret the production-mode e2e server expects.
 export STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_e2e_only_secret}"
 start_fakes
