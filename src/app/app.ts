@@ -1,4 +1,4 @@
-import { ApplicationRef, ChangeDetectionStrategy, Component, DOCUMENT, PLATFORM_ID, inject } from '@angular/core';
+import { ApplicationRef, ChangeDetectionStrategy, Component, DOCUMENT, PLATFORM_ID, ViewEncapsulation, inject } from '@angular/core';
 import { isPlatformBrowser } from '@angular/common';
 import { Shell } from './core/layout/shell';
 
@@ -6,6 +6,11 @@ import { Shell } from './core/layout/shell';
   selector: 'app-root',
   imports: [Shell],
   template: '<app-shell />',
+  // The brand's font faces, declared with the root component (not in the global stylesheet): a page's component
+  // styles arrive inline with its HTML, while the global sheet loads after first paint, and a face declared
+  // again there would be swapped in late and move the whole page (see src/fonts.css).
+  styleUrl: '../fonts.css',
+  encapsulation: ViewEncapsulation.None,
   changeDetection: ChangeDetectionStrategy.OnPush,
 })
 export class App {
