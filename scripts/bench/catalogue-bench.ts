@@ -6,7 +6,8 @@
  * EXPLAIN (ANALYZE) plan of every SQL statement behind each typical catalogue query, starts the built
  * server (dist/) and a bare Express 5 route answering a 12-item JSON, loads each with autocannon
  * (BENCH_CONNECTIONS, default 32, for BENCH_SECONDS each, default 10) and prints req/s, p50/p95/p99 and
- * each ratio to the baseline, then the bytes a first visit to /hay downloads in Chromium.
+ * each ratio to the baseline, then the bytes a first visit to /hay downloads in Chromium and Lighthouse's
+ * mobile Performance score for /hay (BENCH_LIGHTHOUSE_RUNS runs, default 5, each printed, and the median; 0 skips).
  * Results are also written to .data/bench/latest.json. Not part of `npm test`.
  */
 import { fork, spawn, type ChildProcess } from 'node:child_process';
@@ -23,6 +24,7 @@ import * as schema from '../../server/db/schema';
 import { LotsService } from '../../server/features/lots/lots.service';
 import { fillBenchData } from './bench-data';
 import { measureFirstLoad } from './first-load';
+import { lighthouseRuns, median } from './lighthouse-score';
 import { loadTest, type LoadResult } from './load-test';
 
 const root = join(import.meta.dirname, '../..');
@@ -30,6 +32,7 @@ const databaseUrl = process.env['BENCH_DATABASE_URL'] ?? 'postgres://postgres@12
 const lotCount = Number(process.env['BENCH_LOTS'] ?? 100_000);
 const seconds = Number(process.env['BENCH_SECONDS'] ?? 10);
 const connections = Number(process.env['BENCH_CONNECTIONS'] ?? 32);
+const lighthouseRunCount = Number(process.env['BENCH_LIGHTHOUSE_RUNS'] ?? 5);
 const appPort = Number(process.env['BENCH_PORT'] ?? 4090);
 const basePort = appPort + 1;
 
@@ -55,7 +58,7 @@ function freshSearchPath(): string {
   return `/api/lots?rfvMin=${100 + Math.floor(Math.random() * 100)}&cpMin=${8 + Math.floor(Math.random() * 15)}${forage ? `&forageType=${forage}` : ''}&sort=${pick(SORT_CHOICES)}`;
 }
 
-const TARGETS = { apiP95Ms: 25, apiRatio: 0.25, pageP95Ms: 150, firstLoadBytes: 400_000, initialJsBytes: 250_000 };
+const TARGETS = { apiP95Ms: 25, apiRatio: 0.25, pageP95Ms: 150, firstLoadBytes: 400_000, initialJsBytes: 250_000, lighthouseScore: 90 };
 
 async function main(): Promise<void> {
   const captured: { query: string; params: unknown[] }[] = [];
@@ -104,8 +107,20 @@ async function main(): Promise<void> {
       ` (target < ${kB(TARGETS.initialJsBytes)} compressed); fonts ${kB(firstLoad.fontBytes)}`);
     for (const l of firstLoad.largest) console.log(`  ${kB(l.bytes).padStart(9)}  ${l.url}`);
 
+    const lighthouse = lighthouseRunCount > 0 ? await lighthouseRuns(`http://127.0.0.1:${appPort}/hay`, lighthouseRunCount) : [];
+    if (lighthouse.length > 0) {
+      console.log(`\nLighthouse, mobile preset (simulated slow 4G, 4× CPU slowdown), /hay, ${lighthouse.length} runs:`);
+      console.log('  score    FCP     LCP     TBT    CLS     SI   server  benchmark index');
+      for (const r of lighthouse) {
+        const s = (ms: number) => `${(ms / 1000).toFixed(1)} s`.padStart(7);
+        console.log(`  ${String(r.score).padStart(5)} ${s(r.fcpMs)} ${s(r.lcpMs)} ${`${Math.round(r.tbtMs)} ms`.padStart(7)} ${r.cls.toFixed(3).padStart(6)} ${s(r.speedIndexMs)} ${`${Math.round(r.serverResponseMs)} ms`.padStart(7)}  ${Math.round(r.benchmarkIndex)}`);
+      }
+      const score = median(lighthouse.map((r) => r.score));
+      console.log(`  median score ${score} (target ≥ ${TARGETS.lighthouseScore}: ${score >= TARGETS.lighthouseScore ? 'met' : 'NOT met'}); median TBT ${Math.round(median(lighthouse.map((r) => r.tbtMs)))} ms, median LCP ${(median(lighthouse.map((r) => r.lcpMs)) / 1000).toFixed(1)} s`);
+    }
+
     mkdirSync(join(root, '.data/bench'), { recursive: true });
-    const report = { date: new Date().toISOString(), cores: cpus().length, cpu: cpus()[0]?.model, loadavg: loadavg(), lots: lotCount, connections, seconds, results, firstLoad };
+    const report = { date: new Date().toISOString(), cores: cpus().length, cpu: cpus()[0]?.model, loadavg: loadavg(), lots: lotCount, connections, seconds, results, firstLoad, lighthouse };
     writeFileSync(join(root, '.data/bench/latest.json'), JSON.stringify(report, null, 2));
   } finally {
     for (const c of children) c.kill('SIGTERM');
