@@ -17,6 +17,7 @@ import { errorOf, requestState, valueOf, type RequestState } from '../../../core
 import { LotCard } from '../lot-card/lot-card';
 import { LotMap } from '../lot-map/lot-map';
 import { CompareSelection } from '../lot-compare/compare-selection';
+import { HELD_SUBMIT, LIVE_FORM, SAVE_SEARCH_FORM_ID } from '../saved-searches/held-submit';
 import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { LotsApi } from '../lots-api';
 import { Pager, type PagerChange } from '../../../shared/ui/pager';
@@ -88,10 +89,16 @@ export class LotSearchPage {
   constructor() {
     afterNextRender(() => this.compare.restore());
     // Until the filters wake (they hydrate on interaction), Enter or "Show hay" would submit the server's form
-    // natively and reload the page; the submit is replayed to the form once it is live.
+    // natively and reload the page (filters apply as they change, so nothing is lost). The same press on the
+    // saved-search form is held and replayed by its panel once live (saved-searches/held-submit.ts).
     const document = inject(DOCUMENT);
     const keepFormHere = (event: Event) => {
-      if ((event.target as Element | null)?.id === 'lot-filters') event.preventDefault();
+      const form = event.target as Element | null;
+      if (form?.id === 'lot-filters') event.preventDefault();
+      else if (form?.id === SAVE_SEARCH_FORM_ID && !form.hasAttribute(LIVE_FORM)) {
+        event.preventDefault();
+        form.setAttribute(HELD_SUBMIT, '');
+      }
     };
     afterNextRender(() => document.addEventListener('submit', keepFormHere, true));
     inject(DestroyRef).onDestroy(() => document.removeEventListener('submit', keepFormHere, true));

@@ -1,4 +1,4 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject, input, signal } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, ElementRef, inject, input, signal, viewChild } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
@@ -12,6 +12,7 @@ import { apiErrorMessage } from '../../../core/api-error';
 import { Session } from '../../../core/session';
 import { EmailConfirmationNotice } from '../../account/email-confirmation-notice';
 import { SavedSearchesApi } from './saved-searches-api';
+import { HELD_SUBMIT, LIVE_FORM, SAVE_SEARCH_FORM_ID } from './held-submit';
 import { Icon } from '../../../shared/ui/icon';
 
 /** Save the catalogue query in the URL, with an e-mail when a newly approved lot matches; list and delete saved ones. */
@@ -30,7 +31,9 @@ export class SavedSearchesPanel {
   readonly query = input.required<Record<string, string>>();
 
   protected readonly saved = signal<SavedSearchView[]>([]);
-  protected readonly name = signal('');
+  protected readonly formId = SAVE_SEARCH_FORM_ID;
+  private readonly saveForm = viewChild<ElementRef<HTMLFormElement>>('saveForm');
+  private readonly nameField = viewChild<ElementRef<HTMLInputElement>>('nameField');
   protected readonly message = signal<string | null>(null);
   protected readonly busy = signal(false);
   protected readonly isBuyer = computed(() => this.session.role() === 'buyer');
@@ -42,7 +45,16 @@ export class SavedSearchesPanel {
   });
 
   constructor() {
-    afterNextRender(() => void this.load());
+    afterNextRender(() => {
+      // Live now: a press of "Save and alert me" held while the catalogue slept (lot-search-page.ts) is replayed.
+      const form = this.saveForm()?.nativeElement;
+      form?.setAttribute(LIVE_FORM, '');
+      if (form?.hasAttribute(HELD_SUBMIT)) {
+        form.removeAttribute(HELD_SUBMIT);
+        void this.saveSearch();
+      }
+      void this.load();
+    });
   }
 
   protected describe(query: Record<string, string>): string {
@@ -51,12 +63,13 @@ export class SavedSearchesPanel {
 
   protected async saveSearch(): Promise<void> {
     if (!this.canSave()) return;
-    const name = this.name().trim() || 'My hay search';
+    const field = this.nameField()?.nativeElement;
+    const name = field?.value.trim() || 'My hay search';
     this.busy.set(true);
     try {
       const created = await firstValueFrom(this.api.save({ name, query: this.query(), alerts: true }));
       this.saved.update((list) => [created, ...list]);
-      this.name.set('');
+      if (field) field.value = '';
       this.message.set(`Saved “${created.name}”. We'll e-mail you when a newly approved lot matches.`);
     } catch (error) {
       this.message.set(apiErrorMessage(error));
