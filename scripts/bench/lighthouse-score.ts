@@ -20,8 +20,8 @@ export interface LighthouseRun {
 /**
  * Lighthouse's Performance score for `url` with its default (mobile) settings: a phone-sized screen, simulated
  * slow 4G and a 4× CPU slowdown worked out from the unthrottled load. Each run starts a fresh headless Chromium
- * (Debian's, `CHROMIUM_PATH`), so nothing is cached between runs. The score moves from run to run, most with the machine's load,
- * so the bench reports every run and the median.
+ * (Debian's, or `CHROMIUM_PATH`), so nothing is cached between runs. The score moves from run to run, most with
+ * the machine's load, so the bench reports every run and the median.
  */
 export async function lighthouseRuns(url: string, runs: number): Promise<LighthouseRun[]> {
   const out: LighthouseRun[] = [];
