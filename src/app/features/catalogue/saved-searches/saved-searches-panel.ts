@@ -1,4 +1,4 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, ElementRef, inject, input, signal, viewChild } from '@angular/core';
+import { afterNextRender, afterRenderEffect, ChangeDetectionStrategy, Component, computed, ElementRef, inject, input, signal, untracked, viewChild } from '@angular/core';
 import { FormsModule } from '@angular/forms';
 import { MatButton, MatIconButton } from '@angular/material/button';
 import { MatFormField, MatLabel } from '@angular/material/form-field';
@@ -45,16 +45,18 @@ export class SavedSearchesPanel {
   });
 
   constructor() {
-    afterNextRender(() => {
-      // Live now: a press of "Save and alert me" held while the catalogue slept (lot-search-page.ts) is replayed.
+    // Whenever the form is on the page and live: a press of "Save and alert me" held while the catalogue slept
+    // (lot-search-page.ts) is replayed.
+    afterRenderEffect(() => {
       const form = this.saveForm()?.nativeElement;
-      form?.setAttribute(LIVE_FORM, '');
-      if (form?.hasAttribute(HELD_SUBMIT)) {
+      if (!form || form.hasAttribute(LIVE_FORM)) return;
+      form.setAttribute(LIVE_FORM, '');
+      if (form.hasAttribute(HELD_SUBMIT)) {
         form.removeAttribute(HELD_SUBMIT);
-        void this.saveSearch();
+        untracked(() => void this.saveSearch());
       }
-      void this.load();
     });
+    afterNextRender(() => void this.load());
   }
 
   protected describe(query: Record<string, string>): string {
