@@ -8,7 +8,6 @@ import { Session } from './core/session';
 import { forwardCookiesOnServer } from './core/ssr-cookie-interceptor';
 import { pageUnavailableOnServer } from './core/ssr-unavailable-interceptor';
 import { XsrfTokenFromCookie } from './core/xsrf-token';
-import { Icon } from './shared/ui/icon';
 
 export const appConfig: ApplicationConfig = {
   providers: [
