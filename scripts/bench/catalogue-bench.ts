@@ -7,7 +7,9 @@
  * server (dist/) and a bare Express 5 route answering a 12-item JSON, loads each with autocannon
  * (BENCH_CONNECTIONS, default 32, for BENCH_SECONDS each, default 10) and prints req/s, p50/p95/p99 and
  * each ratio to the baseline, then the bytes a first visit to /hay downloads in Chromium and Lighthouse's
- * mobile Performance score for /hay (BENCH_LIGHTHOUSE_RUNS runs, default 5, each printed, and the median; 0 skips).
+ * mobile Performance score for /hay (BENCH_LIGHTHOUSE_RUNS runs, default 5, each printed, and the median; 0 skips)
+ * beside the same score for /hay with its JavaScript blocked and for a bare Angular app built like this one
+ * (scripts/bench/bare-angular), runs taken in turn.
  * Results are also written to .data/bench/latest.json. Not part of `npm test`.
  */
 import { fork, spawn, type ChildProcess } from 'node:child_process';
@@ -24,7 +26,7 @@ import * as schema from '../../server/db/schema';
 import { LotsService } from '../../server/features/lots/lots.service';
 import { fillBenchData } from './bench-data';
 import { measureFirstLoad } from './first-load';
-import { lighthouseRuns, median } from './lighthouse-score';
+import { lighthouseRuns, median, type LighthouseRun } from './lighthouse-score';
 import { loadTest, type LoadResult } from './load-test';
 
 const root = join(import.meta.dirname, '../..');
@@ -35,6 +37,7 @@ const connections = Number(process.env['BENCH_CONNECTIONS'] ?? 32);
 const lighthouseRunCount = Number(process.env['BENCH_LIGHTHOUSE_RUNS'] ?? 5);
 const appPort = Number(process.env['BENCH_PORT'] ?? 4090);
 const basePort = appPort + 1;
+const bareAngularPort = appPort - 1;
 
 /** The typical catalogue queries: what a buyer asks most (issue figures were taken on the first three). */
 const API_QUERIES: Record<string, string> = {
@@ -107,16 +110,26 @@ async function main(): Promise<void> {
       ` (target < ${kB(TARGETS.initialJsBytes)} compressed); fonts ${kB(firstLoad.fontBytes)}`);
     for (const l of firstLoad.largest) console.log(`  ${kB(l.bytes).padStart(9)}  ${l.url}`);
 
-    const lighthouse = lighthouseRunCount > 0 ? await lighthouseRuns(`http://127.0.0.1:${appPort}/hay`, lighthouseRunCount) : [];
-    if (lighthouse.length > 0) {
-      console.log(`\nLighthouse, mobile preset (simulated slow 4G, 4× CPU slowdown), /hay, ${lighthouse.length} runs:`);
-      console.log('  score    FCP     LCP     TBT    CLS     SI   server  benchmark index');
-      for (const r of lighthouse) {
-        const s = (ms: number) => `${(ms / 1000).toFixed(1)} s`.padStart(7);
-        console.log(`  ${String(r.score).padStart(5)} ${s(r.fcpMs)} ${s(r.lcpMs)} ${`${Math.round(r.tbtMs)} ms`.padStart(7)} ${r.cls.toFixed(3).padStart(6)} ${s(r.speedIndexMs)} ${`${Math.round(r.serverResponseMs)} ms`.padStart(7)}  ${Math.round(r.benchmarkIndex)}`);
-      }
-      const score = median(lighthouse.map((r) => r.score));
-      console.log(`  median score ${score} (target ≥ ${TARGETS.lighthouseScore}: ${score >= TARGETS.lighthouseScore ? 'met' : 'NOT met'}); median TBT ${Math.round(median(lighthouse.map((r) => r.tbtMs)))} ms, median LCP ${(median(lighthouse.map((r) => r.lcpMs)) / 1000).toFixed(1)} s`);
+    if (lighthouseRunCount > 0) children.push(await startBareAngular());
+    const lighthouse = lighthouseRunCount > 0
+      ? await lighthouseRuns(
+          {
+            app: { url: `http://127.0.0.1:${appPort}/hay` },
+            appWithoutScripts: { url: `http://127.0.0.1:${appPort}/hay`, blocked: ['*.js'] },
+            bareAngular: { url: `http://127.0.0.1:${bareAngularPort}/cards` },
+          },
+          lighthouseRunCount,
+        )
+      : { app: [], appWithoutScripts: [], bareAngular: [] };
+    if (lighthouseRunCount > 0) {
+      console.log(`\nLighthouse, mobile preset (simulated slow 4G, 4× CPU slowdown), ${lighthouseRunCount} runs each, the three pages in turn:`);
+      printLighthouse('/hay', lighthouse.app);
+      const score = median(lighthouse.app.map((r) => r.score));
+      console.log(`  median score ${score} (target ≥ ${TARGETS.lighthouseScore}: ${score >= TARGETS.lighthouseScore ? 'met' : 'NOT met'})`);
+      printLighthouse('/hay with its JavaScript blocked: what the server\'s HTML and styles cost alone', lighthouse.appWithoutScripts);
+      console.log(`  median score ${median(lighthouse.appWithoutScripts.map((r) => r.score))}`);
+      printLighthouse('bare Angular (scripts/bench/bare-angular: SSR, hydration, router, 24 plain cards), /cards', lighthouse.bareAngular);
+      console.log(`  median score ${median(lighthouse.bareAngular.map((r) => r.score))}: what this machine gives the framework alone`);
     }
 
     mkdirSync(join(root, '.data/bench'), { recursive: true });
@@ -189,6 +202,25 @@ function startBaseline(): Promise<ChildProcess> {
     child.once('message', () => resolve(child));
     child.once('exit', (code) => reject(new Error(`baseline server exited (${code})`)));
   });
+}
+
+/** The Lighthouse baseline: the smallest Angular app built like this one (scripts/bench/bare-angular). */
+function startBareAngular(): Promise<ChildProcess> {
+  const child = fork(join(root, 'dist/bench-bare-angular/server/server.mjs'), { env: { ...process.env, PORT: String(bareAngularPort) }, stdio: 'inherit' });
+  return new Promise((resolve, reject) => {
+    child.once('message', () => resolve(child));
+    child.once('exit', (code) => reject(new Error(`bare Angular server exited (${code})`)));
+  });
+}
+
+function printLighthouse(title: string, runs: LighthouseRun[]): void {
+  console.log(`  ${title}`);
+  console.log('  score    FCP     LCP     TBT    CLS     SI   server  benchmark index');
+  const s = (ms: number) => `${(ms / 1000).toFixed(1)} s`.padStart(7);
+  for (const r of runs) {
+    console.log(`  ${String(r.score).padStart(5)} ${s(r.fcpMs)} ${s(r.lcpMs)} ${`${Math.round(r.tbtMs)} ms`.padStart(7)} ${r.cls.toFixed(3).padStart(6)} ${s(r.speedIndexMs)} ${`${Math.round(r.serverResponseMs)} ms`.padStart(7)}  ${Math.round(r.benchmarkIndex)}`);
+  }
+  console.log(`  median TBT ${Math.round(median(runs.map((r) => r.tbtMs)))} ms, median FCP ${(median(runs.map((r) => r.fcpMs)) / 1000).toFixed(1)} s, median LCP ${(median(runs.map((r) => r.lcpMs)) / 1000).toFixed(1)} s`);
 }
 
 /** The production build, as `npm run serve:ssr` starts it, on the bench database. */

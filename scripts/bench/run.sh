@@ -1,7 +1,8 @@
 #!/usr/bin/env bash
 # npm run bench: a scratch database with synthetic lots, the production build, then the measurements
-# (scripts/bench/catalogue-bench.ts). BENCH_SKIP_BUILD=1 reuses dist/; BENCH_KEEP_DB=1 reuses a filled database.
-# The database (baleproof_bench plus DB_SUFFIX) and the ports (BENCH_PORT, default PORT + 8, and the one after it)
+# (scripts/bench/catalogue-bench.ts), with the bare Angular app Lighthouse scores beside /hay (scripts/bench/bare-angular).
+# BENCH_SKIP_BUILD=1 reuses dist/; BENCH_KEEP_DB=1 reuses a filled database.
+# The database (baleproof_bench plus DB_SUFFIX) and the ports (BENCH_PORT, default PORT + 8, the one after it and the one before)
 # follow the worktree's .wtenv, so benches in two checkouts never drop each other's database or share a port.
 set -euo pipefail
 source "$(dirname "$0")/../env.sh"
@@ -18,5 +19,9 @@ fi
 if [ "${BENCH_SKIP_BUILD:-}" != 1 ] || [ ! -f dist/baleproof/server/server.mjs ]; then
   log "building the production app"
   npm run --silent build:production
+fi
+if [ "${BENCH_SKIP_BUILD:-}" != 1 ] || [ ! -f dist/bench-bare-angular/server/server.mjs ]; then
+  log "building the bare Angular baseline (scripts/bench/bare-angular)"
+  (cd scripts/bench/bare-angular && ../../../node_modules/.bin/ng build >/dev/null)
 fi
 node --import tsx scripts/bench/catalogue-bench.ts
