@@ -1,3 +1,4 @@
+import { layoutShiftSoFar, watchLayoutShifts } from './support/layout-shift';
 import { expect, test } from './support/test';
 import { readdirSync, readFileSync } from 'node:fs';
 import { get } from 'node:http';
@@ -81,18 +82,12 @@ test.describe('late fonts and styles', () => {
         await new Promise((r) => setTimeout(r, 1_500));
         await route.continue();
       });
-      await page.addInitScript(() => {
-        const w = window as unknown as { shifted: number };
-        w.shifted = 0;
-        new PerformanceObserver((list) => {
-          for (const entry of list.getEntries() as unknown as { value: number; hadRecentInput: boolean }[]) if (!entry.hadRecentInput) w.shifted += entry.value;
-        }).observe({ type: 'layout-shift', buffered: true });
-      });
+      await watchLayoutShifts(page);
       const arrived = page.waitForResponse((r) => late.test(new URL(r.url()).pathname));
       await page.goto('/hay');
       await arrived;
       await page.waitForTimeout(1_000);
-      expect(await page.evaluate(() => (window as unknown as { shifted: number }).shifted)).toBeLessThan(0.001);
+      expect(await layoutShiftSoFar(page)).toBeLessThan(0.001);
     });
   }
 });

@@ -18,7 +18,7 @@ export interface LighthouseRun {
 }
 
 /**
- * Lighthouse's Performance score for each page in `urls` with its default (mobile) settings: a phone-sized
+ * Lighthouse's Performance score for each of `pages` with its default (mobile) settings: a phone-sized
  * screen, simulated slow 4G and a 4× CPU slowdown worked out from the unthrottled load. Each run starts a fresh
  * headless Chromium (Debian's, or `CHROMIUM_PATH`), so nothing is cached between runs. The pages are scored in
  * turn (a, b, a, b, …) so a change in the machine's load weighs on all of them alike. The score moves from
