@@ -7,7 +7,7 @@ import { expect, test } from './support/test';
  * A page arrives in pieces on a slow line, and the browser draws what it has parsed so far. On a phone the
  * header's main links sit in a row of their own under the mark and the account links; if that first row only
  * takes its height (or wraps) once the account links arrive, the links row jumps down on screen. Seen as a layout
- * shift of 0.008–0.014 when the parser paused between the two on a busy machine (fallback font, 412 px). Layout
+ * shift of 0.007–0.014 when the parser paused between the two on a busy machine (fallback font, 412 px). Layout
  * shifts as the browser reports them (Layout Instability API, W3C); CLS 0.1 is the usual "good" limit, and the
  * header must add nothing.
  */
