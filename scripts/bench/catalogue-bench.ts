@@ -110,27 +110,7 @@ async function main(): Promise<void> {
       ` (target < ${kB(TARGETS.initialJsBytes)} compressed); fonts ${kB(firstLoad.fontBytes)}`);
     for (const l of firstLoad.largest) console.log(`  ${kB(l.bytes).padStart(9)}  ${l.url}`);
 
-    if (lighthouseRunCount > 0) children.push(await startBareAngular());
-    const lighthouse = lighthouseRunCount > 0
-      ? await lighthouseRuns(
-          {
-            app: { url: `http://127.0.0.1:${appPort}/hay` },
-            appWithoutScripts: { url: `http://127.0.0.1:${appPort}/hay`, blocked: ['*.js'] },
-            bareAngular: { url: `http://127.0.0.1:${bareAngularPort}/cards` },
-          },
-          lighthouseRunCount,
-        )
-      : { app: [], appWithoutScripts: [], bareAngular: [] };
-    if (lighthouseRunCount > 0) {
-      console.log(`\nLighthouse, mobile preset (simulated slow 4G, 4× CPU slowdown), ${lighthouseRunCount} runs each, the three pages in turn:`);
-      printLighthouse('/hay', lighthouse.app);
-      const score = median(lighthouse.app.map((r) => r.score));
-      console.log(`  median score ${score} (target ≥ ${TARGETS.lighthouseScore}: ${score >= TARGETS.lighthouseScore ? 'met' : 'NOT met'})`);
-      printLighthouse('/hay with its JavaScript blocked: what the server\'s HTML and styles cost alone', lighthouse.appWithoutScripts);
-      console.log(`  median score ${median(lighthouse.appWithoutScripts.map((r) => r.score))}`);
-      printLighthouse('bare Angular (scripts/bench/bare-angular: SSR, hydration, router, 24 plain cards), /cards', lighthouse.bareAngular);
-      console.log(`  median score ${median(lighthouse.bareAngular.map((r) => r.score))}: what this machine gives the framework alone`);
-    }
+    const lighthouse = lighthouseRunCount > 0 ? await scoreWithLighthouse(children) : undefined;
 
     mkdirSync(join(root, '.data/bench'), { recursive: true });
     const report = { date: new Date().toISOString(), cores: cpus().length, cpu: cpus()[0]?.model, loadavg: loadavg(), lots: lotCount, connections, seconds, results, firstLoad, lighthouse };
@@ -213,14 +193,39 @@ function startBareAngular(): Promise<ChildProcess> {
   });
 }
 
-function printLighthouse(title: string, runs: LighthouseRun[]): void {
+/**
+ * Lighthouse on /hay, on /hay with its JavaScript blocked (the server's HTML and styles alone) and on the bare
+ * Angular app, the three in turn; prints each page's runs and medians.
+ */
+async function scoreWithLighthouse(children: ChildProcess[]): Promise<Record<'app' | 'appWithoutScripts' | 'bareAngular', LighthouseRun[]>> {
+  children.push(await startBareAngular());
+  const runs = await lighthouseRuns(
+    {
+      app: { url: `http://127.0.0.1:${appPort}/hay` },
+      appWithoutScripts: { url: `http://127.0.0.1:${appPort}/hay`, blocked: ['*.js'] },
+      bareAngular: { url: `http://127.0.0.1:${bareAngularPort}/cards` },
+    },
+    lighthouseRunCount,
+  );
+  console.log(`\nLighthouse, mobile preset (simulated slow 4G, 4× CPU slowdown), ${lighthouseRunCount} runs each, the three pages in turn:`);
+  const score = printLighthouse('/hay', runs.app);
+  console.log(`  target ≥ ${TARGETS.lighthouseScore}: ${score >= TARGETS.lighthouseScore ? 'met' : 'NOT met'}`);
+  printLighthouse("/hay with its JavaScript blocked: what the server's HTML and styles cost alone", runs.appWithoutScripts);
+  printLighthouse('bare Angular (scripts/bench/bare-angular: SSR, hydration, router, 24 plain cards), /cards: what this machine gives the framework alone', runs.bareAngular);
+  return runs;
+}
+
+/** Prints each run and the medians; returns the median score. */
+function printLighthouse(title: string, runs: LighthouseRun[]): number {
   console.log(`  ${title}`);
   console.log('  score    FCP     LCP     TBT    CLS     SI   server  benchmark index');
   const s = (ms: number) => `${(ms / 1000).toFixed(1)} s`.padStart(7);
   for (const r of runs) {
     console.log(`  ${String(r.score).padStart(5)} ${s(r.fcpMs)} ${s(r.lcpMs)} ${`${Math.round(r.tbtMs)} ms`.padStart(7)} ${r.cls.toFixed(3).padStart(6)} ${s(r.speedIndexMs)} ${`${Math.round(r.serverResponseMs)} ms`.padStart(7)}  ${Math.round(r.benchmarkIndex)}`);
   }
-  console.log(`  median TBT ${Math.round(median(runs.map((r) => r.tbtMs)))} ms, median FCP ${(median(runs.map((r) => r.fcpMs)) / 1000).toFixed(1)} s, median LCP ${(median(runs.map((r) => r.lcpMs)) / 1000).toFixed(1)} s`);
+  const score = median(runs.map((r) => r.score));
+  console.log(`  median score ${score}, median TBT ${Math.round(median(runs.map((r) => r.tbtMs)))} ms, median FCP ${(median(runs.map((r) => r.fcpMs)) / 1000).toFixed(1)} s, median LCP ${(median(runs.map((r) => r.lcpMs)) / 1000).toFixed(1)} s`);
+  return score;
 }
 
 /** The production build, as `npm run serve:ssr` starts it, on the bench database. */
