@@ -64,8 +64,17 @@ app.use(createSessionMiddleware(deps), createAuthenticator(deps.db).session(), c
 
 // The renderer sees the page on the app's own loopback port, so its API calls (with the visitor's cookie)
 // can never be sent where a Host or X-Forwarded-Host header points.
-// A kept lot page still counts its visitor's view (the render's API call would have).
-app.use(cachedPages((req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)), writeResponseToNodeResponse, deps.catalogueCache, countKeptLotPageView(deps)));
+// A kept lot page still counts its visitor's view (the render's API call would have). A kept page past its
+// time is sent while a fresh one renders behind it (server/features/catalogue-cache/page-cache.ts).
+app.use(
+  cachedPages(
+    (req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)),
+    writeResponseToNodeResponse,
+    deps.catalogueCache,
+    countKeptLotPageView(deps),
+    (err, req) => deps.logger.warn({ err, url: req.originalUrl }, 'kept page: render behind it failed'),
+  ),
+);
 // A friendly page (503 when the database is unreachable) instead of Express's default error output.
 app.use(pageErrorHandler(deps.logger));
 

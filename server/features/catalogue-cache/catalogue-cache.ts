@@ -15,9 +15,13 @@ export class CatalogueCache {
   /** Anonymous server-rendered pages by locale and URL. */
   readonly pages: ShortCache<KeptAnswer>;
 
-  constructor(ttlMs: number, now: () => number = Date.now) {
+  /**
+   * A kept page past its time is still sent for up to `pageStaleMs` while a fresh one renders behind it, so no
+   * visitor waits for a render of a page that was kept (a change still empties the cache at once).
+   */
+  constructor(ttlMs: number, now: () => number = Date.now, pageStaleMs = 60_000) {
     this.searches = new ShortCache(ttlMs, 1000, now);
-    this.pages = new ShortCache(ttlMs, 300, now);
+    this.pages = new ShortCache(ttlMs, 300, now, pageStaleMs);
     this.setListening(false);
   }
 

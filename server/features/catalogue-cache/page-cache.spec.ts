@@ -91,3 +91,108 @@ describe('cached pages', () => {
     expect(renders).toBe(2);
   });
 });
+
+/**
+ * A kept page past its time: sent at once while a fresh one renders behind it (stale-while-revalidate, RFC 5861,
+ * applied to the server's own page cache). The renderer here answers with its render count, held until released.
+ */
+describe('cached pages past their time', () => {
+  const ttl = 10_000;
+  const stale = 60_000;
+
+  function setup(fail = false) {
+    let now = 1_000_000;
+    const cache = new CatalogueCache(ttl, () => now, stale);
+    cache.setListening(true);
+    let renders = 0;
+    const waiting: Array<() => void> = [];
+    const hits: string[] = [];
+    const errors: unknown[] = [];
+    let hold = false;
+    const server = express();
+    server.use(
+      cachedPages(
+        async () => {
+          const n = ++renders;
+          if (hold) await new Promise<void>((release) => waiting.push(release));
+          if (fail && n > 1) throw new Error('renderer down');
+          return new Response(`<p>render ${n}</p>`, { status: 200, headers: { 'content-type': 'text/html;charset=UTF-8' } });
+        },
+        async (response, res) => {
+          res.status(response.status).type('html').send(Buffer.from(await response.arrayBuffer()));
+        },
+        cache,
+        (req) => hits.push(req.originalUrl),
+        (error) => errors.push(error),
+      ),
+    );
+    const page = async () => (await rawGet(server, '/hay', { 'accept-encoding': 'identity' })).body.toString();
+    /** Lets the renders behind sent pages finish (each answers after its release). */
+    const settle = async () => {
+      for (let i = 0; i < 20; i++) await new Promise((r) => setImmediate(r));
+    };
+    return {
+      cache,
+      page,
+      settle,
+      hits,
+      errors,
+      renders: () => renders,
+      advance: (ms: number) => (now += ms),
+      holdRenders: (on: boolean) => (hold = on),
+      release: () => waiting.splice(0).forEach((go) => go()),
+    };
+  }
+
+  it('sends the kept page at once and renders a fresh one behind it, which the next visitor gets', async () => {
+    const t = setup();
+    expect(await t.page()).toBe('<p>render 1</p>');
+    t.advance(ttl + 1);
+    t.holdRenders(true);
+    // Sent while the render behind it is still held.
+    expect(await t.page()).toBe('<p>render 1</p>');
+    expect(t.renders()).toBe(2);
+    // A second visitor meanwhile: the same kept page, and no second render of the same page.
+    expect(await t.page()).toBe('<p>render 1</p>');
+    expect(t.renders()).toBe(2);
+    t.release();
+    await t.settle();
+    expect(await t.page()).toBe('<p>render 2</p>');
+    // The render behind the first stale visit stands for that visitor's view; the others count as kept hits.
+    expect(t.hits).toEqual(['/hay', '/hay']);
+  });
+
+  it('renders in front again once a page is past its stale time too', async () => {
+    const t = setup();
+    await t.page();
+    t.advance(ttl + stale);
+    t.holdRenders(true);
+    const pending = t.page();
+    await t.settle();
+    t.release();
+    expect(await pending).toBe('<p>render 2</p>');
+  });
+
+  it('keeps no page rendered across a change: a render that began before the cache was emptied is sent but not kept', async () => {
+    const t = setup();
+    await t.page();
+    t.advance(ttl + 1);
+    t.holdRenders(true);
+    await t.page(); // stale page sent, render 2 held behind it
+    t.cache.clear(); // the catalogue changed meanwhile
+    t.release();
+    await t.settle();
+    t.holdRenders(false);
+    expect(await t.page()).toBe('<p>render 3</p>');
+  });
+
+  it('reports a render behind a sent page that failed, and keeps sending the stale page until its time', async () => {
+    const t = setup(true);
+    await t.page();
+    t.advance(ttl + 1);
+    expect(await t.page()).toBe('<p>render 1</p>');
+    await t.settle();
+    expect(t.errors).toEqual([new Error('renderer down')]);
+    expect(await t.page()).toBe('<p>render 1</p>');
+  });
+});

@@ -35,3 +35,34 @@ describe('ShortCache', () => {
     expect(off.get('c')).toBeUndefined();
   });
 });
+
+describe('ShortCache past its time', () => {
+  it('offers an entry as stale for staleMs after its time, then forgets it (RFC 5861 stale-while-revalidate)', () => {
+    let now = 0;
+    const cache = new ShortCache<string>(10_000, 10, () => now, 60_000);
+    cache.set('a', 'A');
+    now = 9_999;
+    expect(cache.peek('a')).toEqual({ value: 'A', fresh: true });
+    now = 10_000;
+    expect(cache.peek('a')).toEqual({ value: 'A', fresh: false });
+    expect(cache.get('a')).toBeUndefined();
+    now = 69_999;
+    expect(cache.peek('a')).toEqual({ value: 'A', fresh: false });
+    now = 70_000;
+    expect(cache.peek('a')).toBeUndefined();
+  });
+
+  it('drops a value loaded across a clear, so nothing read before a change is kept after it', async () => {
+    const cache = new ShortCache<string>(10_000);
+    const mark = cache.mark;
+    cache.clear();
+    cache.set('a', 'read before the change', mark);
+    expect(cache.get('a')).toBeUndefined();
+    let release!: () => void;
+    const loading = cache.getOrLoad('b', () => new Promise<string>((r) => (release = () => r('old'))));
+    cache.clear();
+    release();
+    expect(await loading).toBe('old');
+    expect(cache.get('b')).toBeUndefined();
+  });
+});
