@@ -39,7 +39,8 @@ export function inlineScriptHashes(html: string): string[] {
 
 /**
  * Hash sources of inline event handlers on `<link>` elements in `<head>`: Angular's critical-CSS inlining
- * loads the full stylesheet with `media="print" onload="this.media='all'"`. They run only under
+ * loads a global stylesheet, when the build has one, with `media="print" onload="this.media='all'"` (this app
+ * declares its global styles with the root component instead, src/app/app.ts). They run only under
  * 'unsafe-hashes' with their exact hash; handlers anywhere else are not allowed.
  */
 export function inlineHandlerHashes(html: string): string[] {
