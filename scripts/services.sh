@@ -78,10 +78,11 @@ start_fakes() {
 }
 
 # Fakes for copy i of the app that the journeys run on side by side (e2e/support/stack.ts): the same
-# services on the base ports + 5·i, webhooks to that copy's app, mail kept in MAIL_DIR-s<i>. Leaves the
-# exported addresses of copy 0 as they were.
+# services on the base ports + STACK_PORT_STEP·i (the step read from that file, its one home), webhooks to
+# that copy's app, mail kept in MAIL_DIR-s<i>. Leaves the exported addresses of copy 0 as they were.
 start_stack_fakes() {
-  local i="$1" step=5
+  local i="$1" step
+  step=$(cd "$ROOT" && node --import tsx -p "require('./e2e/support/stack.ts').STACK_PORT_STEP")
   (
     SMTP_PORT=$((SMTP_PORT + step * i)) MAILDEV_WEB_PORT=$((MAILDEV_WEB_PORT + step * i))
     STRIPE_FAKE_PORT=$((STRIPE_FAKE_PORT + step * i)) APP_PORT=$((${APP_PORT:-$PORT} + step * i))

@@ -57,7 +57,8 @@ DATABASE_URL="${E2E_DATABASE_URL:?E2E_DATABASE_URL is required}" node --import t
 DATABASE_URL="$E2E_DATABASE_URL" UPLOAD_DIR="$ROOT/.data/e2e-uploads" node --import tsx scripts/seed/seed-cli.ts
 
 # The journeys run on E2E_STACKS copies of the app side by side, one per Playwright worker (e2e/support/stack.ts):
-# copy i gets a clone of the seeded database and uploads, and fakes of its own on the base ports + 5·i.
+# copy i gets a clone of the seeded database and uploads, and fakes of its own on the base ports moved by
+# STACK_PORT_STEP·i (start_stack_fakes).
 export E2E_STACKS="${E2E_STACKS:-2}"
 for i in $(seq 1 $((E2E_STACKS - 1))); do
   bash scripts/db.sh clone "${E2E_DATABASE_URL##*/}" "${E2E_DATABASE_URL##*/}_s$i"
