@@ -176,21 +176,22 @@ function printLoadTable(results: { name: string; kind: string; result: LoadResul
 
 const kB = (bytes: number) => `${(bytes / 1000).toFixed(1)} kB`;
 
-function startBaseline(): Promise<ChildProcess> {
-  const child = fork(join(import.meta.dirname, 'bare-express.mjs'), { env: { ...process.env, PORT: String(basePort) }, stdio: 'inherit' });
+/** A baseline server in a child process on `port`, resolved once it says it is listening (an IPC message). */
+function forkReadyServer(script: string, port: number, name: string): Promise<ChildProcess> {
+  const child = fork(script, { env: { ...process.env, PORT: String(port) }, stdio: 'inherit' });
   return new Promise((resolve, reject) => {
     child.once('message', () => resolve(child));
-    child.once('exit', (code) => reject(new Error(`baseline server exited (${code})`)));
+    child.once('exit', (code) => reject(new Error(`${name} server exited (${code})`)));
   });
+}
+
+function startBaseline(): Promise<ChildProcess> {
+  return forkReadyServer(join(import.meta.dirname, 'bare-express.mjs'), basePort, 'baseline');
 }
 
 /** The Lighthouse baseline: the smallest Angular app built like this one (scripts/bench/bare-angular). */
 function startBareAngular(): Promise<ChildProcess> {
-  const child = fork(join(root, 'dist/bench-bare-angular/server/server.mjs'), { env: { ...process.env, PORT: String(bareAngularPort) }, stdio: 'inherit' });
-  return new Promise((resolve, reject) => {
-    child.once('message', () => resolve(child));
-    child.once('exit', (code) => reject(new Error(`bare Angular server exited (${code})`)));
-  });
+  return forkReadyServer(join(root, 'dist/bench-bare-angular/server/server.mjs'), bareAngularPort, 'bare Angular');
 }
 
 /**
