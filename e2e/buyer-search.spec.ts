@@ -39,6 +39,40 @@ test.describe('buyers find and choose hay', () => {
     await expect(page.getByLabel('RFV from')).toHaveValue('');
   });
 
+  // The filters' form is plain HTML named like the URL's filters: a browser that never runs the page's scripts
+  // (blocked, failed to load, or not arrived yet on a slow line) still searches with it.
+  test('without scripts the filters still search, and the page sent back shows what was chosen', async ({ browser, baseURL, request }) => {
+    const context = await browser.newContext({ javaScriptEnabled: false, baseURL });
+    const page = await context.newPage();
+    await page.goto('/hay');
+    await page.getByLabel('RFV from').fill('120');
+    await page.getByLabel('Forage', { exact: true }).selectOption({ label: 'Alfalfa' });
+    await page.getByLabel('Sampled to protocol only').check();
+    await page.getByRole('combobox', { name: 'Sort by' }).selectOption({ label: 'Price per ton' });
+    await page.getByRole('button', { name: 'Show hay' }).click();
+
+    await expect(page).toHaveURL(/rfvMin=120/);
+    const matching = await apiTitles(request, 'rfvMin=120&forageType=alfalfa&compliantOnly=true&sort=price');
+    expect(matching.length).toBeGreaterThan(0);
+    const cards = page.getByRole('list', { name: 'Hay lots' }).getByRole('heading', { level: 3 });
+    expect(await cards.allTextContents()).toEqual(matching.map((t) => expect.stringContaining(t)));
+    await expect(page.getByLabel('RFV from')).toHaveValue('120');
+    await expect(page.getByLabel('Forage', { exact: true })).toHaveValue('alfalfa');
+    await expect(page.getByLabel('Sampled to protocol only')).toBeChecked();
+    await expect(page.getByRole('combobox', { name: 'Sort by' })).toHaveValue('price');
+    await context.close();
+  });
+
+  test('a list choice and a tick made before the filters wake are kept and searched', async ({ page }) => {
+    await page.goto('/hay');
+    await page.getByLabel('Forage', { exact: true }).selectOption({ label: 'Alfalfa' });
+    await page.getByLabel('Nitrate tested').check();
+    await expect(page).toHaveURL(/forageType=alfalfa/);
+    await expect(page).toHaveURL(/nitrateTestedOnly=true/);
+    await expect(page.getByLabel('Forage', { exact: true })).toHaveValue('alfalfa');
+    await expect(page.getByLabel('Nitrate tested')).toBeChecked();
+  });
+
   test('an empty result says so and offers to drop one filter at a time', async ({ page }) => {
     await page.goto('/hay?rfvMin=390&forageType=alfalfa');
     await expect(page.getByRole('heading', { name: 'No lots match' })).toBeVisible();
@@ -49,8 +83,7 @@ test.describe('buyers find and choose hay', () => {
 
   test('sorts by price and pages through the results with a stable total', async ({ page, request }) => {
     await page.goto('/hay');
-    await page.getByRole('combobox', { name: 'Sort by' }).click();
-    await page.getByRole('option', { name: 'Price per ton', exact: true }).click();
+    await page.getByRole('combobox', { name: 'Sort by' }).selectOption({ label: 'Price per ton' });
     await expect(page).toHaveURL(/sort=price/);
 
     const byPrice = await apiTitles(request, 'sort=price&pageSize=100');

@@ -2,33 +2,40 @@ import { AfterViewInit, Directive, ElementRef, PLATFORM_ID, inject } from '@angu
 import { isPlatformBrowser } from '@angular/common';
 
 /**
- * Keeps what a person typed into a server-rendered field before its form woke up.
+ * Keeps what a person typed, picked or ticked in a server-rendered field before its form woke up.
  *
  * A field inside a block that hydrates on interaction is live only after the first touch; until then
- * the browser types into the server's `<input>`. When the block hydrates, the form writes its own value
- * into the field (usually empty), which would wipe those keystrokes. This follows the field's text from
- * the moment hydration finds it until the form is set up and, if the form then shows something else,
- * puts the typed text back and announces it with an `input` event, so the form's own value accessor
- * parses it (numbers as numbers) as if typed now.
+ * the browser types into the server's `<input>` (or changes its `<select>`, ticks its checkbox). When the
+ * block hydrates, the form writes its own value into the field (usually empty), which would wipe that.
+ * This follows the field from the moment hydration finds it until the form is set up and, if the form then
+ * shows something else, puts the person's entry back and announces it with the event the form's own value
+ * accessor listens to (`input`, or `change` for lists and boxes), so it is parsed as if entered now.
  */
-@Directive({ selector: 'input[bpKeepTypedValue]' })
+@Directive({ selector: 'input[bpKeepTypedValue], select[bpKeepTypedValue]' })
 export class KeepTypedValue implements AfterViewInit {
-  private readonly input = inject<ElementRef<HTMLInputElement>>(ElementRef).nativeElement;
-  /** The field's latest text while hydration sets the form up; null when the field is new (client-rendered). */
-  private typed = isPlatformBrowser(inject(PLATFORM_ID)) && this.input.isConnected ? this.input.value : null;
+  private readonly field = inject<ElementRef<HTMLInputElement | HTMLSelectElement>>(ElementRef).nativeElement;
+  private readonly isBox = this.field.tagName === 'INPUT' && /^(checkbox|radio)$/i.test(this.field.getAttribute('type') ?? '');
+  private readonly eventName = this.isBox || this.field.tagName === 'SELECT' ? 'change' : 'input';
+  /** The field's latest entry while hydration sets the form up; null when the field is new (client-rendered). */
+  private entered = isPlatformBrowser(inject(PLATFORM_ID)) && this.field.isConnected ? this.read() : null;
   private readonly follow = (): void => {
-    this.typed = this.input.value;
+    this.entered = this.read();
   };
 
   constructor() {
-    if (this.typed !== null) this.input.addEventListener('input', this.follow);
+    if (this.entered !== null) this.field.addEventListener(this.eventName, this.follow);
   }
 
   ngAfterViewInit(): void {
-    if (this.typed === null) return;
-    this.input.removeEventListener('input', this.follow);
-    if (this.input.value === this.typed) return;
-    this.input.value = this.typed;
-    this.input.dispatchEvent(new Event('input', { bubbles: true }));
+    if (this.entered === null) return;
+    this.field.removeEventListener(this.eventName, this.follow);
+    if (this.read() === this.entered) return;
+    if (this.isBox) (this.field as HTMLInputElement).checked = this.entered === 'true';
+    else this.field.value = this.entered;
+    this.field.dispatchEvent(new Event(this.eventName, { bubbles: true }));
+  }
+
+  private read(): string {
+    return this.isBox ? String((this.field as HTMLInputElement).checked) : this.field.value;
   }
 }

@@ -1,13 +1,13 @@
 import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, DOCUMENT, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { ActivatedRoute } from '@angular/router';
-import { switchMap } from 'rxjs';
+import { map, switchMap } from 'rxjs';
 import type { LotSearchResult } from '@shared/contracts/lots';
 import { requestState, type RequestState } from '../../../core/request-state';
 import { CompareSelection } from '../lot-compare/compare-selection';
 import { HELD_SUBMIT, LIVE_FORM, SAVE_SEARCH_FORM_ID } from '../saved-searches/held-submit';
 import { LotsApi } from '../lots-api';
-import { apiQueryFor } from './search-query';
+import { apiQueryFor, filledParams } from './search-query';
 import { LotSearchView } from './lot-search-view';
 
 /**
@@ -35,7 +35,7 @@ export class LotSearchPage {
   private readonly route = inject(ActivatedRoute);
   protected readonly compare = inject(CompareSelection);
 
-  protected readonly params = toSignal(this.route.queryParams, { initialValue: {} as Record<string, string> });
+  protected readonly params = toSignal(this.route.queryParams.pipe(map(filledParams)), { initialValue: {} as Record<string, string> });
   private readonly firstParams = this.params();
   /** The URL has moved on from the one the page opened with (the server's page no longer shows it). */
   protected readonly searchMoved = computed(() => this.params() !== this.firstParams);

@@ -1,13 +1,9 @@
 import { DecimalPipe } from '@angular/common';
 import { ChangeDetectionStrategy, Component, computed, effect, inject, input, signal } from '@angular/core';
 import { takeUntilDestroyed } from '@angular/core/rxjs-interop';
-import { FormBuilder, ReactiveFormsModule } from '@angular/forms';
+import { FormBuilder, FormControl, ReactiveFormsModule } from '@angular/forms';
 import { MatButton } from '@angular/material/button';
-import { MatCheckbox } from '@angular/material/checkbox';
-import { MatFormField, MatLabel, MatSuffix } from '@angular/material/form-field';
-import { MatInput } from '@angular/material/input';
 import { MatProgressBar } from '@angular/material/progress-bar';
-import { MatOption, MatSelect } from '@angular/material/select';
 import { ActivatedRoute, Router, RouterLink } from '@angular/router';
 import { debounceTime } from 'rxjs';
 import { BALE_TYPE_LABELS, FORAGE_TYPE_LABELS } from '@shared/contracts/labels';
@@ -28,7 +24,7 @@ import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, queryFromForm, S
  */
 @Component({
   selector: 'app-lot-search-view',
-  imports: [DecimalPipe, ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatFormField, MatLabel, MatSuffix, MatInput, MatSelect, MatOption, MatCheckbox, MatButton, Pager, MatProgressBar, LotMap, KeepTypedValue],
+  imports: [DecimalPipe, ReactiveFormsModule, RouterLink, LotCard, SavedSearchesPanel, MatButton, Pager, MatProgressBar, LotMap, KeepTypedValue],
   templateUrl: './lot-search-view.html',
   styleUrl: './lot-search-view.scss',
   changeDetection: ChangeDetectionStrategy.OnPush,
@@ -38,8 +34,11 @@ export class LotSearchView {
   private readonly router = inject(Router);
   protected readonly compare = inject(CompareSelection);
 
-  protected readonly forageTypes = Object.entries(FORAGE_TYPE_LABELS);
-  protected readonly baleTypes = Object.entries(BALE_TYPE_LABELS);
+  /** The filters chosen from a list. */
+  protected readonly lists = [
+    { key: 'forageType', label: FILTER_LABELS.forageType, options: Object.entries(FORAGE_TYPE_LABELS) },
+    { key: 'baleType', label: FILTER_LABELS.baleType, options: Object.entries(BALE_TYPE_LABELS) },
+  ] as const;
   protected readonly sorts = SORT_OPTIONS;
 
   protected readonly filters = inject(FormBuilder).nonNullable.group(
@@ -71,6 +70,8 @@ export class LotSearchView {
   /** The query last sent from the form, so the URL echo does not overwrite what is being typed. */
   private lastApplied = '';
   protected readonly sort = computed(() => this.apiQuery().query['sort'] ?? 'newest');
+  /** The sort box, kept showing the URL's order. */
+  protected readonly sortControl = new FormControl('newest', { nonNullable: true });
   /** The comparison link carries the ZIP so delivered prices use the same place. */
   protected readonly compareParams = computed(() => ({ ids: this.compare.ids().join(','), zip: this.params()['zip'] }));
   /** Filters in the URL, each removable on its own from the empty state. */
@@ -86,7 +87,9 @@ export class LotSearchView {
   constructor() {
     // Filters apply as they change, once typing pauses.
     this.filters.valueChanges.pipe(debounceTime(450), takeUntilDestroyed()).subscribe(() => this.applyFilters());
-    // Keep the form showing what the URL says (also after back/forward).
+    this.sortControl.valueChanges.pipe(takeUntilDestroyed()).subscribe((sort) => this.changeSort(sort));
+    // Keep the form and the sort box showing what the URL says (also after back/forward).
+    effect(() => this.sortControl.setValue(this.sort(), { emitEvent: false }));
     effect(() => {
       const p = this.params();
       if (JSON.stringify(pickFilters(p)) === this.lastApplied) return;
@@ -95,6 +98,14 @@ export class LotSearchView {
         { emitEvent: false },
       );
     });
+  }
+
+  /**
+   * Marks the URL's choice in a list on the server's page (an attribute, which the browser shows before the
+   * page wakes; once awake, the form sets the list itself).
+   */
+  protected chosen(key: string, value: string): '' | null {
+    return (this.params()[key] ?? '') === value ? '' : null;
   }
 
   protected applyFilters(): void {
@@ -135,6 +146,8 @@ export class LotSearchView {
     if (sort === 'distance' && !this.params()['zip']) {
       this.sortNotice.set('Give your ZIP code under “Price, quantity and distance” to sort by distance.');
       this.filtersOpen.set(true);
+      // The list stays in its order, so the box says so too.
+      this.sortControl.setValue(this.sort(), { emitEvent: false });
       return;
     }
     this.sortNotice.set(null);

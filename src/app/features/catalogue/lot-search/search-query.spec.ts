@@ -1,4 +1,4 @@
-import { apiQueryFor, describeQuery, hasAnyFilter, queryFromForm } from './search-query';
+import { apiQueryFor, describeQuery, filledParams, hasAnyFilter, queryFromForm } from './search-query';
 
 describe('queryFromForm', () => {
   it('treats an emptied number field (null) as no filter, never the text "null" in the URL', () => {
@@ -41,5 +41,13 @@ describe('describeQuery', () => {
     expect(describeQuery({ rfvMin: '150', cpMin: '18', forageType: 'alfalfa', zip: '66502', radiusMi: '50', sort: 'price' }, { alfalfa: 'Alfalfa' })).toBe(
       'RFV from 150 · CP from 18% · Forage: Alfalfa · within 50 mi of 66502 · sorted by price per ton',
     );
+  });
+});
+
+describe('filledParams', () => {
+  it('reads a form the browser sent itself (every field named, most of them empty) as only the filled filters', () => {
+    const sent = Object.fromEntries(new URLSearchParams('q=&rfvMin=120&rfvMax=&forageType=&compliantOnly=true&sort=price'));
+    expect(filledParams(sent)).toEqual({ rfvMin: '120', compliantOnly: 'true', sort: 'price' });
+    expect(hasAnyFilter(filledParams({ q: '', cpMin: '' }))).toBe(false);
   });
 });

@@ -67,6 +67,14 @@ export function queryFromForm(values: Record<string, string | number | boolean |
   return out;
 }
 
+/**
+ * The URL's query without empty entries. The filters' form sent by the browser itself (before the page's
+ * scripts run, or without them) names every field, the empty ones too; an empty field is no filter.
+ */
+export function filledParams(params: Record<string, string | undefined>): Record<string, string> {
+  return Object.fromEntries(Object.entries(params).filter(([, v]) => v !== undefined && v !== '')) as Record<string, string>;
+}
+
 /** Whether the query holds any filter (a sort or a page alone does not narrow the search). */
 export function hasAnyFilter(query: Record<string, string | undefined>): boolean {
   return FILTER_KEYS.some((k) => query[k] !== undefined && query[k] !== '');
@@ -77,7 +85,7 @@ export function hasAnyFilter(query: Record<string, string | undefined>): boolean
  * come back newest first and `notice` says why, instead of the API's validation error.
  */
 export function apiQueryFor(params: Record<string, string | undefined>): { query: Record<string, string>; notice: string | null } {
-  const query = Object.fromEntries(Object.entries(params).filter(([, v]) => v !== undefined && v !== '')) as Record<string, string>;
+  const query = filledParams(params);
   if (query['sort'] === 'distance' && !query['zip']) {
     delete query['sort'];
     return { query, notice: 'Give your ZIP code to sort by distance; until then the newest lots come first.' };
