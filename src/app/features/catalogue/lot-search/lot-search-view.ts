@@ -15,8 +15,7 @@ import { LotMap } from '../lot-map/lot-map';
 import { CompareSelection } from '../lot-compare/compare-selection';
 import { SavedSearchesPanel } from '../saved-searches/saved-searches-panel';
 import { Pager, type PagerChange } from '../../../shared/ui/pager';
-import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, queryFromForm, SORT_OPTIONS } from './search-query';
-
+import { apiQueryFor, FILTER_KEYS, FILTER_LABELS, hasAnyFilter, isTickFilter, queryFromForm, SORT_OPTIONS } from './search-query';
 
 /**
  * The catalogue's filters, sort and lots. Its code (the forms library among it) loads only when the page wakes
@@ -42,7 +41,7 @@ export class LotSearchView {
   protected readonly sorts = SORT_OPTIONS;
 
   protected readonly filters = inject(FormBuilder).nonNullable.group(
-    Object.fromEntries(FILTER_KEYS.map((k) => [k, k === 'compliantOnly' || k === 'verifiedOnly' || k === 'nitrateTestedOnly' ? false : ''])) as Record<string, string | boolean>,
+    Object.fromEntries(FILTER_KEYS.map((k) => [k, isTickFilter(k) ? false : ''])) as Record<string, string | boolean>,
   );
 
   /** The URL's query (the page's, so both read the same one). */
@@ -79,7 +78,7 @@ export class LotSearchView {
     FILTER_KEYS.filter((k) => this.params()[k] !== undefined && !(k === 'radiusMi' && this.params()['zip'] !== undefined)).map((key) => ({
       key,
       label: FILTER_LABELS[key],
-      value: key.endsWith('Only') ? '' : this.params()[key],
+      value: isTickFilter(key) ? '' : this.params()[key],
     })),
   );
   protected readonly hasFilters = computed(() => hasAnyFilter(this.params()));
@@ -94,7 +93,7 @@ export class LotSearchView {
       const p = this.params();
       if (JSON.stringify(pickFilters(p)) === this.lastApplied) return;
       this.filters.reset(
-        Object.fromEntries(FILTER_KEYS.map((k) => [k, k.endsWith('Only') ? p[k] === 'true' : (p[k] ?? '')])),
+        Object.fromEntries(FILTER_KEYS.map((k) => [k, isTickFilter(k) ? p[k] === 'true' : (p[k] ?? '')])),
         { emitEvent: false },
       );
     });

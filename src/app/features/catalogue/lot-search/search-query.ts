@@ -22,6 +22,14 @@ export const FILTER_KEYS = [
   'nitrateTestedOnly',
 ] as const;
 
+/** The filters that are a tick (in the URL as `true`, or absent). */
+const TICK_FILTERS: ReadonlySet<string> = new Set<(typeof FILTER_KEYS)[number]>(['compliantOnly', 'verifiedOnly', 'nitrateTestedOnly']);
+
+/** Whether a filter is a tick rather than a value. */
+export function isTickFilter(key: string): boolean {
+  return TICK_FILTERS.has(key);
+}
+
 /** Short names of the filters, for the empty state's "remove this filter" buttons. */
 export const FILTER_LABELS: Record<(typeof FILTER_KEYS)[number], string> = {
   q: 'Search words',
