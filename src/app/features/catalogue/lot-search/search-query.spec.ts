@@ -42,6 +42,12 @@ describe('describeQuery', () => {
       'RFV from 150 · CP from 18% · Forage: Alfalfa · within 50 mi of 66502 · sorted by price per ton',
     );
   });
+
+  it('names every tick filter in words, without the URL value', () => {
+    expect(describeQuery({ compliantOnly: 'true', verifiedOnly: 'true', nitrateTestedOnly: 'true' })).toBe(
+      'sampled to protocol only · certified lab only · nitrate tested only',
+    );
+  });
 });
 
 describe('filledParams', () => {

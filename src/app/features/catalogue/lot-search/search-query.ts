@@ -119,7 +119,7 @@ export function describeQuery(query: Record<string, string>, names: Record<strin
     const v = query[key];
     if (v === undefined || v === '' || key === 'radiusMi') continue;
     if (key === 'zip') parts.push(query['radiusMi'] ? `within ${query['radiusMi']} mi of ${v}` : `near ${v}`);
-    else if (key === 'compliantOnly' || key === 'verifiedOnly') parts.push(FILTER_LABELS[key].toLowerCase());
+    else if (isTickFilter(key)) parts.push(FILTER_LABELS[key].toLowerCase());
     else if (key === 'q') parts.push(`“${v}”`);
     else if (key === 'forageType' || key === 'baleType') parts.push(`${FILTER_LABELS[key]}: ${names[v] ?? v}`);
     else parts.push(`${FILTER_LABELS[key]} ${v}${UNITS[key] ?? ''}`);
