@@ -24,6 +24,8 @@ import { registerSamplingVerdictRefresh, startSamplingVerdictRefresh } from '../
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 import { loopbackRenderRequest } from '../server/middleware/render-request';
+import { appStartFiles, pageWithPrefetchHints } from '../server/middleware/page-boot-hints';
+import { pageWaitsForUse } from '@shared/contracts/page-wake';
 import { pageErrorHandler } from '../server/middleware/page-error';
 import { STATIC_CONTENT_SECURITY_POLICY } from '../server/middleware/page-csp';
 
@@ -33,6 +35,8 @@ const deps = createAppDeps();
 const app = express();
 app.disable('x-powered-by');
 const angularApp = new AngularNodeAppEngine();
+// What the browser fetches to start the app, hinted on pages that start it only when used (read once from the build).
+const startFiles = appStartFiles(browserDistFolder);
 
 // Compressed responses (brotli or gzip, as the browser asks) for pages, API JSON and static files.
 app.use(compression());
@@ -68,7 +72,10 @@ app.use(createSessionMiddleware(deps), createAuthenticator(deps.db).session(), c
 // time is sent while a fresh one renders behind it (server/features/catalogue-cache/page-cache.ts).
 app.use(
   cachedPages(
-    (req) => angularApp.handle(loopbackRenderRequest(req, deps.env.PORT)),
+    async (req) => {
+      const page = await angularApp.handle(loopbackRenderRequest(req, deps.env.PORT));
+      return page && pageWaitsForUse(req.path) ? pageWithPrefetchHints(page, startFiles) : page;
+    },
     writeResponseToNodeResponse,
     deps.catalogueCache,
     countKeptLotPageView(deps),

@@ -1,8 +1,7 @@
 import { computed, Injectable } from '@angular/core';
 import { MAX_COMPARED_LOTS } from '@shared/contracts/compare-limits';
 import { storedList } from '../../../core/stored-list';
-
-const STORAGE_KEY = 'baleproof.compare';
+import { COMPARE_STORAGE_KEY } from './compare-storage';
 
 /**
  * Lots the buyer has ticked for comparison (at most four), kept for the browser tab.
@@ -11,7 +10,7 @@ const STORAGE_KEY = 'baleproof.compare';
  */
 @Injectable({ providedIn: 'root' })
 export class CompareSelection {
-  private readonly stored = storedList('session', STORAGE_KEY, (x): x is number => Number.isInteger(x) && (x as number) > 0, MAX_COMPARED_LOTS);
+  private readonly stored = storedList('session', COMPARE_STORAGE_KEY, (x): x is number => Number.isInteger(x) && (x as number) > 0, MAX_COMPARED_LOTS);
   private readonly selected = this.stored.items;
 
   readonly ids = this.selected;

@@ -1,11 +1,10 @@
-import { afterNextRender, ChangeDetectionStrategy, Component, computed, DestroyRef, DOCUMENT, inject } from '@angular/core';
+import { afterNextRender, ChangeDetectionStrategy, Component, computed, inject } from '@angular/core';
 import { toSignal } from '@angular/core/rxjs-interop';
 import { ActivatedRoute } from '@angular/router';
 import { map, switchMap } from 'rxjs';
 import type { LotSearchResult } from '@shared/contracts/lots';
 import { requestState, type RequestState } from '../../../core/request-state';
 import { CompareSelection } from '../lot-compare/compare-selection';
-import { HELD_SUBMIT, LIVE_FORM, SAVE_SEARCH_FORM_ID } from '../saved-searches/held-submit';
 import { LotsApi } from '../lots-api';
 import { apiQueryFor, filledParams } from './search-query';
 import { LotSearchView } from './lot-search-view';
@@ -13,12 +12,13 @@ import { LotSearchView } from './lot-search-view';
 /**
  * The catalogue: filters in the URL, results rendered on the server.
  *
- * The page stays as the server sent it until touched: its 17 filter fields, the sort and the lot cards
- * (lot-search-view.ts) wake on the first click, key or typing inside it (what was typed is kept), when the URL
- * changes, or when the compare sheet has lots to tick. Until then a visit runs only this thin part, which asks
- * the search (answered from the server's page, so it is not asked again when the rest wakes) and keeps the
- * server's forms from submitting natively; the forms library and the view's code load when it wakes. Opened
- * here by the router, the view renders at once.
+ * Opened by a full page load, the app itself starts only at the visitor's first sign of use
+ * (shared/contracts/page-wake.ts; until then the server's forms hold their submits, core/wake/held-forms.ts).
+ * Even then the page stays as the server sent it until touched: its 17 filter fields, the sort and the lot
+ * cards (lot-search-view.ts) wake on the first click, key or typing inside it (what was typed is kept), when
+ * the URL changes, or when the compare sheet has lots to tick. Until then the app runs only this thin part,
+ * which asks the search (answered from the server's page, so it is not asked again when the rest wakes); the
+ * forms library and the view's code load when it wakes. Opened here by the router, the view renders at once.
  */
 @Component({
   selector: 'app-lot-search-page',
@@ -45,19 +45,5 @@ export class LotSearchPage {
 
   constructor() {
     afterNextRender(() => this.compare.restore());
-    // Until the filters wake, Enter or "Show hay" would submit the server's form natively and reload the page
-    // (filters apply as they change, so nothing is lost). The same press on the saved-search form is held and
-    // replayed by its panel once live (saved-searches/held-submit.ts).
-    const document = inject(DOCUMENT);
-    const keepFormHere = (event: Event) => {
-      const form = event.target as Element | null;
-      if (form?.id === 'lot-filters') event.preventDefault();
-      else if (form?.id === SAVE_SEARCH_FORM_ID && !form.hasAttribute(LIVE_FORM)) {
-        event.preventDefault();
-        form.setAttribute(HELD_SUBMIT, '');
-      }
-    };
-    afterNextRender(() => document.addEventListener('submit', keepFormHere, true));
-    inject(DestroyRef).onDestroy(() => document.removeEventListener('submit', keepFormHere, true));
   }
 }
