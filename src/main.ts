@@ -22,7 +22,7 @@ function start(): void {
 // live, their submits are held rather than reloading the page. Every other page starts the app at once.
 if (pageWaitsForUse(location.pathname)) {
   holdServerFormSubmits(document);
-  if (tabHasComparedLots(sessionStorage)) start();
+  if (tabHasComparedLots(() => sessionStorage)) start();
   else startOnFirstUse(window, start);
 } else {
   start();

@@ -24,7 +24,7 @@ import { registerSamplingVerdictRefresh, startSamplingVerdictRefresh } from '../
 import { cookiesAreSecure } from '../server/env';
 import { createCsrf } from '../server/middleware/csrf';
 import { loopbackRenderRequest } from '../server/middleware/render-request';
-import { appStartFiles, pageWithPrefetchHints } from '../server/middleware/page-boot-hints';
+import { appStartFiles, pageWithPrefetchHints } from '../server/middleware/page-prefetch-hints';
 import { pageWaitsForUse } from '@shared/contracts/page-wake';
 import { pageErrorHandler } from '../server/middleware/page-error';
 import { STATIC_CONTENT_SECURITY_POLICY } from '../server/middleware/page-csp';

@@ -6,7 +6,7 @@
  *
  * On such a page the browser starts the app at the visitor's first sign of use, not at load
  * (src/app/core/wake/wake-on-use.ts), and the server asks the browser to fetch the app's code while idle
- * (server/middleware/page-boot-hints.ts), so the first touch waits for the app to start, not for the network.
+ * (server/middleware/page-prefetch-hints.ts), so the first touch waits for the app to start, not for the network.
  */
 export function pageWaitsForUse(pathname: string): boolean {
   return pathname === '/hay' || pathname === '/hay/';

@@ -1,5 +1,5 @@
 import { join } from 'node:path';
-import { appStartFiles, pageWithPrefetchHints, withPrefetchHints } from './page-boot-hints';
+import { appStartFiles, pageWithPrefetchHints, withPrefetchHints } from './page-prefetch-hints';
 
 /** A build as esbuild writes it (minified ES modules), as files in a folder. */
 function build(files: Record<string, string>): (path: string) => string {
