@@ -10,10 +10,8 @@ const zodGlobal = globalThis as { __zod_globalConfig?: { jitless?: boolean } };
 (zodGlobal.__zod_globalConfig ??= {}).jitless = true;
 
 // This file is all the page runs at load: the app itself (Angular, the router, the pages) is one import away.
-let started = false;
+// Called once: at once, or by startOnFirstUse, which calls it once.
 function start(): void {
-  if (started) return;
-  started = true;
   import('./app/boot').then((m) => m.boot()).catch((err) => console.error(err));
 }
 
